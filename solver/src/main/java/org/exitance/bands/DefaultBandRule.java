@@ -1,0 +1,109 @@
+package org.exitance.bands;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.TreeSet;
+import org.exitance.model.BandSet;
+import org.exitance.model.BoundaryCondition;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.RadiationCase;
+import org.exitance.spectral.SpectralEmissivity;
+
+/**
+ * The band edges Exitance uses when a case names none. The rule, stated once (also in
+ * docs/case-format.md):
+ *
+ * <ol>
+ *   <li>If every surface material is gray, one band (the gray solution is then exact).</li>
+ *   <li>Planck edges: for the lowest and the highest temperature in the case (fixed surface
+ *       temperatures, initial guesses, the environment if above 0 K), the wavelengths where
+ *       λT = 1,500, 2,500, 4,000, 7,000 and 15,000 µm·K (blackbody fractions about 1.4 %, 16 %,
+ *       48 %, 81 % and 97 %).</li>
+ *   <li>Property edges: every node of every non-gray property table that lies where the case's
+ *       Planck curves carry energy, λ in [500 µm·K / T_max, 50,000 µm·K / T_min].</li>
+ *   <li>Edges closer than 8 % to the previous kept edge (ratio below 1.08) are dropped,
+ *       scanning from short to long wavelength; at most {@value #MAX_EDGES} edges remain
+ *       (every other edge is dropped until they fit).</li>
+ * </ol>
+ */
+public final class DefaultBandRule {
+    /** Most interior edges the rule produces. */
+    public static final int MAX_EDGES = 48;
+    private static final double[] PLANCK_LAMBDA_T_UM_K = {1500, 2500, 4000, 7000, 15000};
+    private static final double MIN_RATIO = 1.08;
+
+    private DefaultBandRule() {
+    }
+
+    /** Derives the default band set for a case. */
+    public static BandSet derive(RadiationCase c) {
+        List<EnclosureSurface> surfaces = c.enclosure().surfaces();
+        boolean allGray = surfaces.stream().allMatch(s -> s.material().emissivity().isGray());
+        if (allGray) {
+            return BandSet.gray("default rule: every surface is gray");
+        }
+        double tMin = Double.POSITIVE_INFINITY;
+        double tMax = 0;
+        for (EnclosureSurface s : surfaces) {
+            if (s.boundary() instanceof BoundaryCondition.FixedTemperature ft) {
+                tMin = Math.min(tMin, ft.temperatureK());
+                tMax = Math.max(tMax, ft.temperatureK());
+            }
+            if (Double.isFinite(s.initialTemperatureK())) {
+                tMin = Math.min(tMin, s.initialTemperatureK());
+                tMax = Math.max(tMax, s.initialTemperatureK());
+            }
+        }
+        if (c.enclosure().environment() != null && c.enclosure().environment().temperatureK() > 0) {
+            tMin = Math.min(tMin, c.enclosure().environment().temperatureK());
+            tMax = Math.max(tMax, c.enclosure().environment().temperatureK());
+        }
+        if (!(tMax > 0)) {
+            tMin = tMax = 300; // no temperature known yet: room temperature sets the scale
+        }
+        TreeSet<Double> edges = new TreeSet<>();
+        for (double x : PLANCK_LAMBDA_T_UM_K) {
+            edges.add(x / tMax);
+            edges.add(x / tMin);
+        }
+        double lo = 500 / tMax;
+        double hi = 50000 / tMin;
+        for (EnclosureSurface s : surfaces) {
+            SpectralEmissivity e = s.material().emissivity();
+            if (!e.isGray()) {
+                for (double w : e.breakpointsUm()) {
+                    if (w >= lo && w <= hi) {
+                        edges.add(w);
+                    }
+                }
+            }
+        }
+        List<Double> kept = new ArrayList<>();
+        for (double e : edges) {
+            if (kept.isEmpty() || e / kept.get(kept.size() - 1) >= MIN_RATIO) {
+                kept.add(e);
+            }
+        }
+        while (kept.size() > MAX_EDGES) {
+            List<Double> thinner = new ArrayList<>();
+            for (int i = 0; i < kept.size(); i += 2) {
+                thinner.add(kept.get(i));
+            }
+            kept = thinner;
+        }
+        double[] out = new double[kept.size()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = round4(kept.get(i));
+        }
+        return new BandSet(dedupe(out), "default rule (Planck and property edges)");
+    }
+
+    /** Rounds to 4 significant digits so printed edges are the edges used. */
+    private static double round4(double v) {
+        return Double.parseDouble(String.format(java.util.Locale.ROOT, "%.4g", v));
+    }
+
+    private static double[] dedupe(double[] sorted) {
+        return java.util.Arrays.stream(sorted).distinct().sorted().toArray();
+    }
+}

@@ -1,0 +1,340 @@
+package org.exitance.cases;
+
+import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.exitance.model.BandSet;
+import org.exitance.model.BoundaryCondition;
+import org.exitance.model.Enclosure;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.Environment;
+import org.exitance.model.Material;
+import org.exitance.model.RadiationCase;
+import org.exitance.model.SolverSettings;
+
+/**
+ * Reads and validates a case file (the format is documented field by field in
+ * docs/case-format.md). Everything is checked before a model object is built: unknown keys,
+ * missing fields, wrong types, out-of-range values, view-factor closure and reciprocity.
+ * Every problem is a {@link CaseException} naming the file and JSON path.
+ */
+public final class CaseReader {
+    /** Default |1 − Σ_j F_ij| allowed in a closed enclosure, and Σ_j F_ij − 1 allowed in any. */
+    public static final double DEFAULT_ROW_SUM_TOLERANCE = 1e-6;
+    /** Default relative reciprocity error |A_i F_ij − A_j F_ji| / max(...) beyond which a case is rejected. */
+    public static final double DEFAULT_RECIPROCITY_TOLERANCE = 1e-2;
+    /** Relative reciprocity error above which a warning is printed. */
+    public static final double RECIPROCITY_WARNING = 1e-6;
+
+    private static final ObjectMapper JSON = new ObjectMapper()
+            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
+
+    private CaseReader() {
+    }
+
+    /** Reads, validates and builds a case. */
+    public static LoadedCase read(Path file) throws CaseException {
+        JsonNode root = parse(file);
+        return new Builder(file, JsonCursor.root(root, file)).build();
+    }
+
+    private static JsonNode parse(Path file) throws CaseException {
+        if (!Files.exists(file)) {
+            throw new CaseException(file, "", "file not found");
+        }
+        if (!Files.isRegularFile(file)) {
+            throw new CaseException(file, "", "not a regular file");
+        }
+        try {
+            JsonNode n = JSON.readTree(file.toFile());
+            if (n == null || n.isMissingNode()) {
+                throw new CaseException(file, "", "empty file");
+            }
+            return n;
+        } catch (JsonParseException e) {
+            throw new CaseException(file, "", "malformed JSON at line " + e.getLocation().getLineNr() + ", column "
+                    + e.getLocation().getColumnNr() + ": " + PropertyCsvReader.oneLine(e.getOriginalMessage()));
+        } catch (JsonProcessingException e) {
+            throw new CaseException(file, "", "malformed JSON: " + PropertyCsvReader.oneLine(e.getOriginalMessage()));
+        } catch (IOException e) {
+            throw new CaseException(file, "", "cannot read: " + PropertyCsvReader.oneLine(e.getMessage()));
+        }
+    }
+
+    /** Reads a temperature given as {@code <prefix>_K} or {@code <prefix>_C}; returns K. */
+    static Optional<Double> temperature(JsonCursor obj, String prefix, boolean allowZero) throws CaseException {
+        boolean k = obj.has(prefix + "_K");
+        boolean c = obj.has(prefix + "_C");
+        if (k && c) {
+            throw obj.error("give " + prefix + "_K or " + prefix + "_C, not both");
+        }
+        if (!k && !c) {
+            return Optional.empty();
+        }
+        JsonCursor v = obj.field(prefix + (k ? "_K" : "_C"));
+        double value = v.number();
+        double kelvin = k ? value : value + 273.15;
+        if (kelvin < 0) {
+            throw v.error("temperature below absolute zero (" + value + (k ? " K" : " °C") + ")");
+        }
+        if (kelvin == 0 && !allowZero) {
+            throw v.error("a surface temperature must be above 0 K");
+        }
+        return Optional.of(kelvin);
+    }
+
+    private static final class Builder {
+        private final Path file;
+        private final JsonCursor root;
+        private final List<String> warnings = new ArrayList<>();
+
+        Builder(Path file, JsonCursor root) {
+            this.file = file;
+            this.root = root;
+        }
+
+        LoadedCase build() throws CaseException {
+            root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "bands",
+                    "solver", "expected");
+            String title = root.optional("title").isPresent() ? root.field("title").text() : "";
+            String notes = root.optional("notes").isPresent() ? root.field("notes").text() : "";
+            Map<String, Material> materials = MaterialReader.readAll(root.field("materials"),
+                    file.toAbsolutePath().getParent());
+            List<EnclosureSurface> surfaces = surfaces(root.field("surfaces"), materials);
+            Environment env = environment();
+            double[][] f = viewFactors(root.field("viewFactors"), surfaces, env != null);
+            BandSet bands = bands();
+            SolverSettings settings = settings();
+            Enclosure enclosure;
+            try {
+                enclosure = new Enclosure(surfaces, f, env);
+            } catch (IllegalArgumentException e) {
+                throw root.error(e.getMessage());
+            }
+            RadiationCase model = new RadiationCase(title, notes, new ArrayList<>(materials.values()), enclosure,
+                    bands, settings);
+            ExpectedValues expected = root.has("expected")
+                    ? expected(root.field("expected"), surfaces, env) : null;
+            return new LoadedCase(file, model, warnings, expected);
+        }
+
+        private List<EnclosureSurface> surfaces(JsonCursor arr, Map<String, Material> materials) throws CaseException {
+            List<JsonCursor> el = arr.elements();
+            if (el.isEmpty()) {
+                throw arr.error("needs at least one surface");
+            }
+            List<EnclosureSurface> out = new ArrayList<>();
+            Map<String, String> seen = new LinkedHashMap<>();
+            for (JsonCursor s : el) {
+                s.allowOnly("name", "material", "area_m2", "temperature_K", "temperature_C", "netHeat_W",
+                        "netFlux_W_m2", "adiabatic", "initialTemperature_K", "initialTemperature_C", "description");
+                JsonCursor nameCursor = s.field("name");
+                String name = nameCursor.nonEmptyText();
+                if (seen.containsKey(name)) {
+                    throw nameCursor.error("duplicate surface name '" + name + "' (first at " + seen.get(name) + ")");
+                }
+                seen.put(name, s.path());
+                JsonCursor matCursor = s.field("material");
+                String matName = matCursor.text();
+                Material m = materials.get(matName);
+                if (m == null) {
+                    throw matCursor.error("unknown material '" + matName + "' (declared: "
+                            + String.join(", ", materials.keySet()) + ")");
+                }
+                double area = s.field("area_m2").positive();
+                BoundaryCondition bc = boundary(s);
+                double initial = temperature(s, "initialTemperature", false).orElse(Double.NaN);
+                if (!Double.isNaN(initial) && !bc.temperatureUnknown()) {
+                    throw s.error("initialTemperature is only for surfaces whose temperature is unknown");
+                }
+                out.add(new EnclosureSurface(name, m, area, bc, initial));
+            }
+            return out;
+        }
+
+        private BoundaryCondition boundary(JsonCursor s) throws CaseException {
+            String which = s.exactlyOneOf("temperature_K", "temperature_C", "netHeat_W", "netFlux_W_m2", "adiabatic");
+            switch (which) {
+                case "temperature_K":
+                case "temperature_C":
+                    return new BoundaryCondition.FixedTemperature(temperature(s, "temperature", false).orElseThrow());
+                case "netHeat_W":
+                    return new BoundaryCondition.FixedNetHeat(s.field("netHeat_W").number());
+                case "netFlux_W_m2":
+                    return new BoundaryCondition.FixedNetFlux(s.field("netFlux_W_m2").number());
+                default:
+                    JsonCursor a = s.field("adiabatic");
+                    if (!a.bool()) {
+                        throw a.error("write \"adiabatic\": true, or give a temperature, netHeat_W or netFlux_W_m2");
+                    }
+                    return new BoundaryCondition.Adiabatic();
+            }
+        }
+
+        private Environment environment() throws CaseException {
+            Optional<JsonCursor> o = root.optional("environment");
+            if (o.isEmpty()) {
+                return null;
+            }
+            JsonCursor e = o.get().allowOnly("name", "temperature_K", "temperature_C", "description");
+            String name = e.field("name").nonEmptyText();
+            double t = temperature(e, "temperature", true)
+                    .orElseThrow(() -> e.error("missing required key 'temperature_K' (or 'temperature_C')"));
+            return new Environment(name, t);
+        }
+
+        private double[][] viewFactors(JsonCursor vf, List<EnclosureSurface> surfaces, boolean open)
+                throws CaseException {
+            vf.allowOnly("matrix", "rowSumTolerance", "reciprocityTolerance");
+            double rowTol = vf.has("rowSumTolerance") ? vf.field("rowSumTolerance").positive() : DEFAULT_ROW_SUM_TOLERANCE;
+            double recTol = vf.has("reciprocityTolerance")
+                    ? vf.field("reciprocityTolerance").positive() : DEFAULT_RECIPROCITY_TOLERANCE;
+            JsonCursor m = vf.field("matrix");
+            List<JsonCursor> rows = m.elements();
+            int n = surfaces.size();
+            if (rows.size() != n) {
+                throw m.error("has " + rows.size() + " rows for " + n + " surfaces (rows follow the order of $.surfaces)");
+            }
+            double[][] f = new double[n][];
+            for (int i = 0; i < n; i++) {
+                JsonCursor row = rows.get(i);
+                List<JsonCursor> cells = row.elements();
+                if (cells.size() != n) {
+                    throw row.error("has " + cells.size() + " entries for " + n + " surfaces");
+                }
+                f[i] = new double[n];
+                double sum = 0;
+                for (int j = 0; j < n; j++) {
+                    f[i][j] = cells.get(j).fraction();
+                    sum += f[i][j];
+                }
+                String who = "row of '" + surfaces.get(i).name() + "'";
+                if (sum > 1 + rowTol) {
+                    throw row.error(who + " sums to " + fmt(sum) + ", above 1 (tolerance " + rowTol + ")");
+                }
+                if (!open && sum < 1 - rowTol) {
+                    throw row.error(who + " sums to " + fmt(sum) + ", below 1: the enclosure is open;"
+                            + " add an \"environment\" to receive the remainder, or complete the row");
+                }
+                if (!open && Math.abs(1 - sum) > 1e-12) {
+                    warnings.add("view factors: " + who + " sums to " + fmt(sum) + " (|1 − Σ| = "
+                            + fmt(Math.abs(1 - sum)) + ")");
+                }
+            }
+            for (int i = 0; i < n; i++) {
+                for (int j = i + 1; j < n; j++) {
+                    double aij = surfaces.get(i).areaM2() * f[i][j];
+                    double aji = surfaces.get(j).areaM2() * f[j][i];
+                    double big = Math.max(aij, aji);
+                    if (big == 0) {
+                        continue;
+                    }
+                    double rel = Math.abs(aij - aji) / big;
+                    if (rel > recTol) {
+                        throw rows.get(i).elements().get(j).error("reciprocity broken between '" + surfaces.get(i).name()
+                                + "' and '" + surfaces.get(j).name() + "': A_i F_ij = " + fmt(aij) + " m² but A_j F_ji = "
+                                + fmt(aji) + " m² (relative error " + fmt(rel) + " > " + recTol + ")");
+                    }
+                    if (rel > RECIPROCITY_WARNING) {
+                        warnings.add("view factors: reciprocity error " + fmt(rel) + " between '"
+                                + surfaces.get(i).name() + "' and '" + surfaces.get(j).name()
+                                + "'; the energy balance will show it");
+                    }
+                }
+            }
+            return f;
+        }
+
+        private BandSet bands() throws CaseException {
+            Optional<JsonCursor> o = root.optional("bands");
+            if (o.isEmpty()) {
+                return null;
+            }
+            JsonCursor b = o.get().allowOnly("edges_um");
+            JsonCursor edges = b.field("edges_um");
+            List<JsonCursor> el = edges.elements();
+            double[] e = new double[el.size()];
+            for (int i = 0; i < e.length; i++) {
+                e[i] = el.get(i).positive();
+                if (i > 0 && !(e[i] > e[i - 1])) {
+                    throw el.get(i).error("band edges must increase: " + e[i] + " after " + e[i - 1]);
+                }
+            }
+            return new BandSet(e, e.length == 0 ? "case (one band: gray)" : "case");
+        }
+
+        private SolverSettings settings() throws CaseException {
+            Optional<JsonCursor> o = root.optional("solver");
+            if (o.isEmpty()) {
+                return SolverSettings.DEFAULT;
+            }
+            JsonCursor s = o.get().allowOnly("temperatureTolerance_K", "relativeHeatTolerance", "maxNewtonIterations",
+                    "maxPropertyIterations");
+            SolverSettings d = SolverSettings.DEFAULT;
+            return new SolverSettings(
+                    s.has("temperatureTolerance_K") ? s.field("temperatureTolerance_K").positive() : d.temperatureToleranceK(),
+                    s.has("relativeHeatTolerance") ? s.field("relativeHeatTolerance").positive() : d.relativeHeatTolerance(),
+                    s.has("maxNewtonIterations") ? s.field("maxNewtonIterations").positiveInt() : d.maxNewtonIterations(),
+                    s.has("maxPropertyIterations") ? s.field("maxPropertyIterations").positiveInt() : d.maxPropertyIterations());
+        }
+
+        private ExpectedValues expected(JsonCursor e, List<EnclosureSurface> surfaces, Environment env)
+                throws CaseException {
+            e.allowOnly("source", "derivation", "relativeTolerance", "absoluteTolerance", "surfaces", "environment");
+            String source = e.field("source").nonEmptyText();
+            String derivation = e.has("derivation") ? e.field("derivation").text() : "";
+            double rel = e.has("relativeTolerance") ? e.field("relativeTolerance").nonNegative() : 0;
+            double abs = e.has("absoluteTolerance") ? e.field("absoluteTolerance").nonNegative() : 0;
+            if (rel == 0 && abs == 0) {
+                throw e.error("needs relativeTolerance or absoluteTolerance");
+            }
+            List<Expectation> values = new ArrayList<>();
+            if (e.has("surfaces")) {
+                for (Map.Entry<String, JsonCursor> s : e.field("surfaces").entries()) {
+                    if (surfaces.stream().noneMatch(x -> x.name().equals(s.getKey()))) {
+                        throw s.getValue().error("no surface named '" + s.getKey() + "'");
+                    }
+                    quantities(s.getKey(), s.getValue(), values, true);
+                }
+            }
+            if (e.has("environment")) {
+                if (env == null) {
+                    throw e.field("environment").error("the case has no environment");
+                }
+                quantities(env.name(), e.field("environment"), values, false);
+            }
+            if (values.isEmpty()) {
+                throw e.error("lists no expected values");
+            }
+            return new ExpectedValues(source, derivation, rel, abs, values);
+        }
+
+        private static void quantities(String target, JsonCursor q, List<Expectation> out, boolean surface)
+                throws CaseException {
+            if (surface) {
+                q.allowOnly("netHeat_W", "netFlux_W_m2", "temperature_K");
+            } else {
+                q.allowOnly("netHeat_W");
+            }
+            for (Map.Entry<String, JsonCursor> v : q.entries()) {
+                out.add(new Expectation(target, v.getKey(), v.getValue().number()));
+            }
+        }
+    }
+
+    static String fmt(double v) {
+        return String.format(java.util.Locale.ROOT, "%.9g", v);
+    }
+}

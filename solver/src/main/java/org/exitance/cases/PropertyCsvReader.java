@@ -1,0 +1,137 @@
+package org.exitance.cases;
+
+import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.dataformat.csv.CsvMapper;
+import com.fasterxml.jackson.dataformat.csv.CsvParser;
+import com.fasterxml.jackson.dataformat.csv.CsvSchema;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads tabulated spectral emissivity from a CSV file beside the case (Jackson's CSV module).
+ * The header names the columns; two layouts are accepted:
+ * <pre>
+ *   wavelength_um,emissivity
+ *   temperature_K,wavelength_um,emissivity      (rows grouped by temperature, in any order)
+ * </pre>
+ * Lines starting with '#' are comments.
+ */
+final class PropertyCsvReader {
+    private PropertyCsvReader() {
+    }
+
+    /** One emissivity table at one temperature (NaN when the file has no temperature column). */
+    record Table(double temperatureK, double[] wavelengthUm, double[] emissivity, int firstLine) {
+    }
+
+    /**
+     * @param csv      the CSV file
+     * @param referrer the JSON position that names it, for errors about the reference itself
+     * @return tables sorted by temperature (one table with NaN temperature when there is no temperature column)
+     */
+    static List<Table> read(Path csv, JsonCursor referrer) throws CaseException {
+        if (!Files.isRegularFile(csv)) {
+            throw referrer.error("property file not found: " + csv);
+        }
+        CsvMapper mapper = new CsvMapper();
+        mapper.enable(CsvParser.Feature.TRIM_SPACES);
+        mapper.enable(CsvParser.Feature.SKIP_EMPTY_LINES);
+        mapper.enable(CsvParser.Feature.ALLOW_COMMENTS);
+        CsvSchema schema = CsvSchema.emptySchema().withHeader().withComments();
+        List<Map<String, String>> rows = new ArrayList<>();
+        List<Integer> lines = new ArrayList<>();
+        List<String> header;
+        try (MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(csv.toFile())) {
+            while (it.hasNextValue()) {
+                Map<String, String> row = it.nextValue();
+                rows.add(row);
+                lines.add(it.getCurrentLocation().getLineNr());
+            }
+            header = new ArrayList<>();
+            CsvSchema parsed = (CsvSchema) it.getParserSchema();
+            parsed.forEach(c -> header.add(c.getName()));
+        } catch (NoSuchFileException e) {
+            throw referrer.error("property file not found: " + csv);
+        } catch (IOException | RuntimeException e) {
+            throw new CaseException(csv, "", "unreadable CSV: " + oneLine(e.getMessage()));
+        }
+        boolean withT = header.contains("temperature_K");
+        List<String> expected = withT ? List.of("temperature_K", "wavelength_um", "emissivity")
+                : List.of("wavelength_um", "emissivity");
+        if (!header.equals(expected)) {
+            throw new CaseException(csv, "", "header must be '" + String.join(",", expected)
+                    + "' (or 'wavelength_um,emissivity'), got '" + String.join(",", header) + "'");
+        }
+        if (rows.isEmpty()) {
+            throw new CaseException(csv, "", "no data rows");
+        }
+        Map<Double, List<double[]>> byT = new LinkedHashMap<>();
+        Map<Double, Integer> firstLine = new LinkedHashMap<>();
+        for (int r = 0; r < rows.size(); r++) {
+            Map<String, String> row = rows.get(r);
+            int line = lines.get(r);
+            double t = withT ? parse(csv, line, "temperature_K", row) : Double.NaN;
+            if (withT && !(t > 0)) {
+                throw new CaseException(csv, "", "line " + line + ": temperature_K must be above 0 K, got " + t);
+            }
+            double w = parse(csv, line, "wavelength_um", row);
+            double e = parse(csv, line, "emissivity", row);
+            byT.computeIfAbsent(t, k -> new ArrayList<>()).add(new double[] {w, e, line});
+            firstLine.putIfAbsent(t, line);
+        }
+        List<Table> out = new ArrayList<>();
+        for (Map.Entry<Double, List<double[]>> e : byT.entrySet()) {
+            List<double[]> pts = e.getValue();
+            double[] w = new double[pts.size()];
+            double[] v = new double[pts.size()];
+            for (int i = 0; i < w.length; i++) {
+                w[i] = pts.get(i)[0];
+                v[i] = pts.get(i)[1];
+                int line = (int) pts.get(i)[2];
+                if (!(w[i] > 0)) {
+                    throw new CaseException(csv, "", "line " + line + ": wavelength_um must be positive, got " + w[i]);
+                }
+                if (i > 0 && !(w[i] > w[i - 1])) {
+                    throw new CaseException(csv, "", "line " + line + ": wavelengths must increase, got "
+                            + w[i] + " after " + w[i - 1]);
+                }
+                if (v[i] < 0 || v[i] > 1) {
+                    throw new CaseException(csv, "", "line " + line + ": emissivity must lie in [0, 1], got " + v[i]);
+                }
+            }
+            out.add(new Table(e.getKey(), w, v, firstLine.get(e.getKey())));
+        }
+        out.sort((a, b) -> Double.compare(a.temperatureK(), b.temperatureK()));
+        return out;
+    }
+
+    private static double parse(Path csv, int line, String column, Map<String, String> row) throws CaseException {
+        String s = row.get(column);
+        if (s == null || s.isEmpty()) {
+            throw new CaseException(csv, "", "line " + line + ": missing value for " + column);
+        }
+        try {
+            double v = Double.parseDouble(s);
+            if (!Double.isFinite(v)) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new CaseException(csv, "", "line " + line + ": " + column + " is not a number: '" + s + "'");
+        }
+    }
+
+    static String oneLine(String s) {
+        if (s == null) {
+            return "unknown error";
+        }
+        int nl = s.indexOf('\n');
+        return (nl >= 0 ? s.substring(0, nl) : s).trim();
+    }
+}

@@ -1,0 +1,79 @@
+package org.exitance.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.exitance.cases.LoadedCase;
+import org.exitance.model.Band;
+import org.exitance.model.BandSet;
+import org.exitance.model.Enclosure;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.report.Numbers;
+import org.exitance.thermal.CaseSolver;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code exitance check CASE.json}: validate without solving. */
+@Command(name = "check", mixinStandardHelpOptions = true,
+        description = {"Validate a case without solving: report what was read, the bands a solve would use",
+                "and the view-factor closure."},
+        footer = {"", ExitCodes.HELP})
+final class CheckCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
+    private Path caseFile;
+
+    @Override
+    public Integer call() throws Exception {
+        LoadedCase c = Runs.load(caseFile);
+        PrintWriter out = spec.commandLine().getOut();
+        Enclosure e = c.model().enclosure();
+        out.println("Valid: " + caseFile + (c.model().title().isEmpty() ? "" : " — " + c.model().title()));
+        long unknown = e.surfaces().stream().filter(s -> s.boundary().temperatureUnknown()).count();
+        out.println("  surfaces: " + e.size() + " (" + unknown + " with unknown temperature); materials: "
+                + c.model().materials().size() + (e.environment() == null ? "; closed enclosure"
+                : "; environment '" + e.environment().name() + "' at "
+                + Numbers.temperature(e.environment().temperatureK()) + " K"));
+        double worstRow = 0;
+        double worstRec = 0;
+        for (int i = 0; i < e.size(); i++) {
+            double sum = 0;
+            for (int j = 0; j < e.size(); j++) {
+                sum += e.viewFactor(i, j);
+                double a = e.surface(i).areaM2() * e.viewFactor(i, j);
+                double b = e.surface(j).areaM2() * e.viewFactor(j, i);
+                if (Math.max(a, b) > 0) {
+                    worstRec = Math.max(worstRec, Math.abs(a - b) / Math.max(a, b));
+                }
+            }
+            worstRow = Math.max(worstRow, e.environment() == null ? Math.abs(1 - sum) : Math.max(0, sum - 1));
+        }
+        out.println("  view factors: worst row-sum error " + Numbers.small(worstRow)
+                + ", worst relative reciprocity error " + Numbers.small(worstRec));
+        BandSet bands = CaseSolver.bandsFor(c.model(), null);
+        List<Band> list = bands.bands();
+        StringBuilder b = new StringBuilder("  bands: " + list.size() + " (" + bands.origin() + ")");
+        for (int k = 1; k < list.size(); k++) {
+            b.append(k == 1 ? ", edges µm: " : " ").append(Numbers.wavelength(list.get(k).lowerUm()));
+        }
+        out.println(b);
+        for (EnclosureSurface s : e.surfaces()) {
+            out.println("  - " + s.name() + ": " + s.material().name() + ", " + Numbers.area(s.areaM2()) + " m², "
+                    + s.boundary().label());
+        }
+        if (c.expected() != null) {
+            out.println("  validation case: " + c.expected().values().size() + " expected values from "
+                    + c.expected().source());
+        }
+        for (String w : c.warnings()) {
+            out.println("  warning: " + w);
+        }
+        out.flush();
+        return ExitCodes.OK;
+    }
+}

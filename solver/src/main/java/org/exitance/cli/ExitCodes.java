@@ -1,0 +1,21 @@
+package org.exitance.cli;
+
+/** Exit codes of every command (also listed in --help and docs/command-line.md). */
+public final class ExitCodes {
+    /** Success. */
+    public static final int OK = 0;
+    /** Unexpected internal error (a bug: please report it with the case). */
+    public static final int INTERNAL = 1;
+    /** Bad input: unreadable or invalid case, bad option, ill-posed problem. */
+    public static final int BAD_INPUT = 2;
+    /** A solve did not converge; no result is reported. */
+    public static final int NO_CONVERGENCE = 3;
+    /** {@code verify}: at least one validation check failed. */
+    public static final int CHECK_FAILED = 4;
+
+    static final String HELP = "Exit codes: 0 success; 2 bad input (message names file and JSON path);"
+            + " 3 no convergence; 4 a validation check failed (verify); 1 internal error.";
+
+    private ExitCodes() {
+    }
+}

@@ -1,0 +1,96 @@
+package org.exitance.cli;
+
+import java.io.PrintWriter;
+import org.exitance.cases.CaseException;
+import org.exitance.report.Version;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The {@code exitance} command: radiation exchange in enclosures of non-gray surfaces.
+ * Subcommands are verbs; every error is one line on standard error with an exit code
+ * ({@link ExitCodes}).
+ */
+@Command(name = "exitance",
+        mixinStandardHelpOptions = true,
+        versionProvider = ExitanceCommand.VersionProvider.class,
+        description = {"Thermal radiation exchange in enclosures whose surfaces are not gray:",
+                "band-wise radiosity network, net heat flows and unknown temperatures."},
+        subcommands = {SolveCommand.class, CheckCommand.class, VerifyCommand.class,
+                CommandLine.HelpCommand.class},
+        footer = {"", ExitCodes.HELP, "Documentation: README.md and docs/ in the source tree."})
+public final class ExitanceCommand implements Runnable {
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(args,
+                new PrintWriter(new java.io.OutputStreamWriter(System.out, java.nio.charset.StandardCharsets.UTF_8), true),
+                new PrintWriter(new java.io.OutputStreamWriter(System.err, java.nio.charset.StandardCharsets.UTF_8), true)));
+    }
+
+    /** Runs the command line with the given streams; returns the exit code. Used by tests too. */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new ExitanceCommand());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setParameterExceptionHandler((ex, a) -> {
+            err.println("exitance: " + ex.getMessage() + " (see 'exitance "
+                    + commandPath(ex.getCommandLine()) + "--help')");
+            return ExitCodes.BAD_INPUT;
+        });
+        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
+            err.println("exitance: " + describe(ex));
+            if (System.getenv("EXITANCE_DEBUG") != null) {
+                ex.printStackTrace(err);
+            }
+            err.flush();
+            return exitCode(ex);
+        });
+        int code = cl.execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+
+    private static String commandPath(CommandLine cl) {
+        StringBuilder b = new StringBuilder();
+        for (CommandLine c = cl; c.getParent() != null; c = c.getParent()) {
+            b.insert(0, c.getCommandName() + " ");
+        }
+        return b.toString();
+    }
+
+    static String describe(Throwable ex) {
+        if (ex instanceof CaseException || ex instanceof UserError) {
+            return ex.getMessage();
+        }
+        String m = ex.getMessage();
+        return "internal error: " + ex.getClass().getSimpleName() + (m == null ? "" : ": " + m.lines().findFirst().orElse(""))
+                + " (set EXITANCE_DEBUG=1 for a stack trace; please report it with the case)";
+    }
+
+    static int exitCode(Throwable ex) {
+        if (ex instanceof CaseException) {
+            return ExitCodes.BAD_INPUT;
+        }
+        if (ex instanceof UserError u) {
+            return u.exitCode();
+        }
+        return ExitCodes.INTERNAL;
+    }
+
+    /** Version from the build. */
+    static final class VersionProvider implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"exitance " + Version.get()};
+        }
+    }
+}

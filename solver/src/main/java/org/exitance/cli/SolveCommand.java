@@ -1,0 +1,67 @@
+package org.exitance.cli;
+
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.exitance.cases.LoadedCase;
+import org.exitance.model.BandSet;
+import org.exitance.report.SolveJsonWriter;
+import org.exitance.report.SolveTableWriter;
+import org.exitance.result.SolveResult;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code exitance solve CASE.json}: band-wise solve, table or JSON. */
+@Command(name = "solve", mixinStandardHelpOptions = true,
+        description = {"Solve a case: net heat and flux of every surface, unknown temperatures, per-band split",
+                "and the energy balance."},
+        footer = {"", ExitCodes.HELP})
+final class SolveCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
+    private Path caseFile;
+
+    @Option(names = "--json", description = "Write the machine-readable result (JSON) instead of tables.")
+    private boolean json;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "FILE",
+            description = "Write to FILE instead of standard output (never overwrites without --force).")
+    private Path output;
+
+    @Option(names = "--force", description = "Allow --output to replace an existing file.")
+    private boolean force;
+
+    @Option(names = "--band-edges", paramLabel = "µm,µm,...",
+            description = "Interior band edges in µm, overriding the case and the default rule (e.g. 1.5,3,6).")
+    private String bandEdges;
+
+    @Option(names = "--gray", description = "Solve with one band (the gray solution).")
+    private boolean gray;
+
+    @Option(names = {"-q", "--quiet"}, description = "Do not print warnings on standard error.")
+    private boolean quiet;
+
+    @Override
+    public Integer call() throws Exception {
+        BandSet override = BandOption.parse(bandEdges, gray);
+        LoadedCase c = Runs.load(caseFile);
+        SolveResult r = Runs.solve(c, override);
+        if (json) {
+            String text = SolveJsonWriter.MAPPER.writeValueAsString(SolveJsonWriter.toJson(r, caseFile.toString(),
+                    c.warnings()));
+            OutputTarget.write(output, force, new java.io.PrintStream(new WriterOutputStream(spec.commandLine().getOut()),
+                    true, java.nio.charset.StandardCharsets.UTF_8), ps -> ps.println(text));
+            if (!quiet) {
+                c.warnings().forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
+            }
+        } else {
+            OutputTarget.write(output, force, new java.io.PrintStream(new WriterOutputStream(spec.commandLine().getOut()),
+                    true, java.nio.charset.StandardCharsets.UTF_8), ps -> SolveTableWriter.write(r, c.warnings(), ps));
+        }
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,99 @@
+package org.exitance.model;
+
+import java.util.HashSet;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * Surfaces, their surface-to-surface view factors and, for an open enclosure, the environment
+ * that receives each row's remainder. View factors are F[i][j] = fraction of the diffuse
+ * radiation leaving surface i that reaches surface j (dimensionless). Validation of closure
+ * and reciprocity against a tolerance happens where the matrix is read; this type only checks
+ * shape and ranges.
+ *
+ * @param surfaces     the surfaces, in case order
+ * @param viewFactors  N×N matrix, copied
+ * @param environment  the surroundings, or null for a closed enclosure
+ */
+public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment) {
+    public Enclosure {
+        surfaces = List.copyOf(surfaces);
+        int n = surfaces.size();
+        if (n == 0) {
+            throw new IllegalArgumentException("an enclosure needs at least one surface");
+        }
+        Objects.requireNonNull(viewFactors, "viewFactors");
+        if (viewFactors.length != n) {
+            throw new IllegalArgumentException("view-factor matrix has " + viewFactors.length + " rows for " + n + " surfaces");
+        }
+        double[][] copy = new double[n][];
+        for (int i = 0; i < n; i++) {
+            if (viewFactors[i].length != n) {
+                throw new IllegalArgumentException("view-factor row " + i + " has " + viewFactors[i].length + " entries for " + n + " surfaces");
+            }
+            copy[i] = viewFactors[i].clone();
+        }
+        viewFactors = copy;
+        Set<String> names = new HashSet<>();
+        for (EnclosureSurface s : surfaces) {
+            if (!names.add(s.name())) {
+                throw new IllegalArgumentException("duplicate surface name: " + s.name());
+            }
+        }
+    }
+
+    public int size() {
+        return surfaces.size();
+    }
+
+    /** A copy of the view-factor matrix. */
+    @Override
+    public double[][] viewFactors() {
+        double[][] copy = new double[viewFactors.length][];
+        for (int i = 0; i < copy.length; i++) {
+            copy[i] = viewFactors[i].clone();
+        }
+        return copy;
+    }
+
+    /** F[i][j] without copying. */
+    public double viewFactor(int i, int j) {
+        return viewFactors[i][j];
+    }
+
+    /** Row remainder 1 − Σ_j F_ij: the factor from surface i to the environment. */
+    public double environmentFactor(int i) {
+        double s = 0;
+        for (double f : viewFactors[i]) {
+            s += f;
+        }
+        return environment == null ? 0.0 : Math.max(0.0, 1.0 - s);
+    }
+
+    public Optional<Environment> environmentIfAny() {
+        return Optional.ofNullable(environment);
+    }
+
+    public EnclosureSurface surface(int i) {
+        return surfaces.get(i);
+    }
+
+    /** Same enclosure with surfaces reordered: new index k holds old surface order[k]. */
+    public Enclosure permuted(int[] order) {
+        int n = size();
+        if (order.length != n) {
+            throw new IllegalArgumentException("permutation length");
+        }
+        EnclosureSurface[] s = new EnclosureSurface[n];
+        double[][] f = new double[n][n];
+        for (int a = 0; a < n; a++) {
+            s[a] = surfaces.get(order[a]);
+            for (int b = 0; b < n; b++) {
+                f[a][b] = viewFactors[order[a]][order[b]];
+            }
+        }
+        return new Enclosure(List.of(s), f, environment);
+    }
+}

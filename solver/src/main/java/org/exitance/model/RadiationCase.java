@@ -1,0 +1,34 @@
+package org.exitance.model;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * Everything a solve needs: the enclosure, the materials it uses, an optional band choice
+ * (null: the default rule decides), and solver settings.
+ *
+ * @param title      short title from the case
+ * @param notes      free text from the case (provenance; "invented demo data" for demos)
+ * @param materials  all materials declared in the case
+ * @param enclosure  surfaces, view factors, environment
+ * @param bands      the band set given by the case, or null for the default rule
+ * @param settings   solver settings
+ */
+public record RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure,
+                            BandSet bands, SolverSettings settings) {
+    public RadiationCase {
+        title = title == null ? "" : title;
+        notes = notes == null ? "" : notes;
+        materials = List.copyOf(materials);
+        Objects.requireNonNull(enclosure, "enclosure");
+        Objects.requireNonNull(settings, "settings");
+    }
+
+    public RadiationCase withBands(BandSet newBands) {
+        return new RadiationCase(title, notes, materials, enclosure, newBands, settings);
+    }
+
+    public RadiationCase withEnclosure(Enclosure newEnclosure) {
+        return new RadiationCase(title, notes, materials, newEnclosure, bands, settings);
+    }
+}

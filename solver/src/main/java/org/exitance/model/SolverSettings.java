@@ -1,0 +1,23 @@
+package org.exitance.model;
+
+/**
+ * Convergence settings of the temperature solve.
+ *
+ * @param temperatureToleranceK   the property loop stops when no temperature moves more than this
+ *                                between property updates (K)
+ * @param relativeHeatTolerance   Newton stops when every surface's heat residual is below this
+ *                                fraction of the largest power in play, max(A σ T⁴, |Q|) (–)
+ * @param maxNewtonIterations     Newton iterations allowed per property update
+ * @param maxPropertyIterations   outer updates of temperature-dependent band properties allowed
+ */
+public record SolverSettings(double temperatureToleranceK, double relativeHeatTolerance,
+                             int maxNewtonIterations, int maxPropertyIterations) {
+    public static final SolverSettings DEFAULT = new SolverSettings(1e-6, 1e-12, 100, 50);
+
+    public SolverSettings {
+        if (!(temperatureToleranceK > 0) || !(relativeHeatTolerance > 0)
+                || maxNewtonIterations < 1 || maxPropertyIterations < 1) {
+            throw new IllegalArgumentException("solver settings must be positive");
+        }
+    }
+}

@@ -1,0 +1,59 @@
+package org.exitance.network;
+
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.linsol.LinearSolverDense;
+
+/**
+ * LU factorization with partial pivoting (EJML) of {@code I − diag(ρ) F}. The matrix is
+ * non-singular whenever every closed sub-enclosure has some absorption (some ρ < 1) in the band;
+ * a singular or near-singular matrix is reported, never solved silently.
+ */
+public final class DirectRadiositySolver implements RadiositySolver {
+
+    @Override
+    public Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2) {
+        DMatrixRMaj a = new DMatrixRMaj(n, n);
+        double[] data = a.data;
+        for (int i = 0; i < n; i++) {
+            int row = i * n;
+            for (int k = 0; k < n; k++) {
+                data[row + k] = -reflectivity[i] * viewFactors[row + k];
+            }
+            data[row + i] += 1.0;
+        }
+        LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(n);
+        if (!lu.setA(a)) {
+            throw new NetworkConvergenceException("radiosity matrix is singular (a closed part of the enclosure"
+                    + " reflects everything in this band)", 0, Double.POSITIVE_INFINITY);
+        }
+        double quality = lu.quality();
+        if (!(quality > 1e-14)) {
+            throw new NetworkConvergenceException("radiosity matrix is singular or nearly so (LU quality "
+                    + quality + "): a closed part of the enclosure reflects almost everything in this band",
+                    0, Double.POSITIVE_INFINITY);
+        }
+        return new Prepared() {
+            private double residual;
+
+            @Override
+            public void solve(double[] b, double[] j) {
+                DMatrixRMaj rhs = DMatrixRMaj.wrap(n, 1, b.clone());
+                DMatrixRMaj x = new DMatrixRMaj(n, 1);
+                lu.solve(rhs, x);
+                System.arraycopy(x.data, 0, j, 0, n);
+                residual = RadiositySolver.relativeResidual(viewFactors, n, reflectivity, b, j);
+            }
+
+            @Override
+            public int lastIterations() {
+                return 1;
+            }
+
+            @Override
+            public double lastRelativeResidual() {
+                return residual;
+            }
+        };
+    }
+}

@@ -1,0 +1,95 @@
+package org.exitance.report;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import org.exitance.model.Band;
+import org.exitance.result.EnvironmentResult;
+import org.exitance.result.SolveResult;
+import org.exitance.result.SolverReport;
+import org.exitance.result.SurfaceResult;
+
+/**
+ * The machine-readable result (documented in docs/output-format.md). Keys carry their units;
+ * an unbounded band edge is written as null.
+ */
+public final class SolveJsonWriter {
+    public static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private SolveJsonWriter() {
+    }
+
+    public static ObjectNode toJson(SolveResult r, String caseFile, List<String> warnings) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("program", "exitance");
+        root.put("version", Version.get());
+        root.put("case", caseFile);
+        root.put("title", r.title());
+        ArrayNode bands = root.putArray("bands");
+        for (Band b : r.bands()) {
+            edges(bands.addObject(), b);
+        }
+        root.put("bandOrigin", r.bandOrigin());
+        ArrayNode surfaces = root.putArray("surfaces");
+        for (SurfaceResult s : r.surfaces()) {
+            ObjectNode o = surfaces.addObject();
+            o.put("name", s.name());
+            o.put("area_m2", s.areaM2());
+            o.put("boundary", s.boundary());
+            o.put("temperature_K", s.temperatureK());
+            o.put("temperatureSolved", s.temperatureSolved());
+            o.put("netHeat_W", s.netHeatW());
+            o.put("netFlux_W_m2", s.netFluxWPerM2());
+            ArrayNode sb = o.putArray("bands");
+            for (int k = 0; k < r.bands().size(); k++) {
+                ObjectNode bo = sb.addObject();
+                edges(bo, r.bands().get(k));
+                bo.put("netHeat_W", s.bandNetHeatW()[k]);
+                bo.put("emissivity", s.bandEmissivity()[k]);
+            }
+        }
+        EnvironmentResult env = r.environment();
+        if (env != null) {
+            ObjectNode o = root.putObject("environment");
+            o.put("name", env.name());
+            o.put("temperature_K", env.temperatureK());
+            o.put("netHeat_W", env.netHeatW());
+            ArrayNode eb = o.putArray("bands");
+            for (int k = 0; k < r.bands().size(); k++) {
+                ObjectNode bo = eb.addObject();
+                edges(bo, r.bands().get(k));
+                bo.put("netHeat_W", env.bandNetHeatW()[k]);
+            }
+        } else {
+            root.putNull("environment");
+        }
+        root.put("energyBalance_W", r.energyBalanceW());
+        root.put("energyBalanceRelative", r.relativeEnergyBalance());
+        root.put("energyScale_W", r.energyScaleW());
+        root.put("energyBalanceCloses", r.relativeEnergyBalance() <= SolveTableWriter.BALANCE_WARNING);
+        SolverReport s = r.solver();
+        ObjectNode so = root.putObject("solver");
+        so.put("linearSolver", s.linearSolver());
+        so.put("iterations", s.newtonIterations());
+        so.put("propertyIterations", s.propertyIterations());
+        so.put("residual_W", s.residualW());
+        so.put("lastTemperatureStep_K", s.lastTemperatureStepK());
+        so.put("maxLinearIterations", s.maxLinearIterations());
+        so.put("maxLinearRelativeResidual", s.maxLinearResidual());
+        ArrayNode w = root.putArray("warnings");
+        warnings.forEach(w::add);
+        root.put("caution", Caution.SHORT);
+        return root;
+    }
+
+    private static void edges(ObjectNode o, Band b) {
+        o.put("lower_um", b.lowerUm());
+        if (Double.isInfinite(b.upperUm())) {
+            o.putNull("upper_um");
+        } else {
+            o.put("upper_um", b.upperUm());
+        }
+    }
+}

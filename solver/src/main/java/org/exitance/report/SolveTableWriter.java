@@ -1,0 +1,125 @@
+package org.exitance.report;
+
+import java.io.PrintStream;
+import java.util.ArrayList;
+import java.util.List;
+import org.exitance.model.Band;
+import org.exitance.result.EnvironmentResult;
+import org.exitance.result.SolveResult;
+import org.exitance.result.SurfaceResult;
+
+/** Writes a solve result as readable text tables. Reads the result; computes no physics. */
+public final class SolveTableWriter {
+    /** Relative energy imbalance above which the writer says the balance does not close. */
+    public static final double BALANCE_WARNING = 1e-6;
+    private static final int MAX_SPLIT_COLUMNS = 8;
+
+    private SolveTableWriter() {
+    }
+
+    public static void write(SolveResult r, List<String> warnings, PrintStream out) {
+        out.println("Exitance " + Version.get() + (r.title().isEmpty() ? "" : " — " + r.title()));
+        out.println();
+        writeBands(r, out);
+        out.println();
+        TextTable t = new TextTable(List.of("Surface", "Area m²", "Condition", "T K", "T °C", "Net heat W",
+                "Net flux W/m²"), new boolean[] {false, true, false, true, true, true, true});
+        for (SurfaceResult s : r.surfaces()) {
+            t.row(List.of(s.name(), Numbers.area(s.areaM2()), s.boundary() + (s.temperatureSolved() ? " → T solved" : ""),
+                    Numbers.temperature(s.temperatureK()), Numbers.temperature(s.temperatureK() - 273.15),
+                    Numbers.power(s.netHeatW()), Numbers.power(s.netFluxWPerM2())));
+        }
+        t.render(0).forEach(out::println);
+        out.println("  (net heat: radiation leaving the surface minus radiation it absorbs; positive = loses heat)");
+        EnvironmentResult env = r.environment();
+        if (env != null) {
+            out.println();
+            out.println("Environment '" + env.name() + "' at " + Numbers.temperature(env.temperatureK())
+                    + " K: net heat into the enclosure " + Numbers.power(env.netHeatW()) + " W");
+        }
+        out.println();
+        writeBandSplit(r, out);
+        out.println();
+        writeBalance(r, out);
+        for (String w : warnings) {
+            out.println("Warning: " + w);
+        }
+        out.println();
+        out.println(Caution.SHORT);
+    }
+
+    private static void writeBands(SolveResult r, PrintStream out) {
+        List<Band> bands = r.bands();
+        StringBuilder b = new StringBuilder("Bands: " + bands.size() + " (" + r.bandOrigin() + ")");
+        if (bands.size() > 1) {
+            b.append(", edges µm:");
+            for (int k = 1; k < bands.size(); k++) {
+                b.append(' ').append(Numbers.wavelength(bands.get(k).lowerUm()));
+            }
+        }
+        out.println(b);
+    }
+
+    private static void writeBandSplit(SolveResult r, PrintStream out) {
+        List<Band> bands = r.bands();
+        if (bands.size() == 1) {
+            out.println("Net heat per band: one band (gray solution); see the table above.");
+            return;
+        }
+        List<SurfaceResult> s = r.surfaces();
+        if (s.size() <= MAX_SPLIT_COLUMNS) {
+            List<String> head = new ArrayList<>();
+            head.add("Band µm");
+            boolean[] num = new boolean[s.size() + 1];
+            for (int i = 0; i < s.size(); i++) {
+                head.add(s.get(i).name() + " W");
+                num[i + 1] = true;
+            }
+            TextTable t = new TextTable(head, num);
+            for (int k = 0; k < bands.size(); k++) {
+                List<String> row = new ArrayList<>();
+                row.add(Numbers.wavelength(bands.get(k).lowerUm()) + "–" + Numbers.wavelength(bands.get(k).upperUm()));
+                for (SurfaceResult x : s) {
+                    row.add(Numbers.power(x.bandNetHeatW()[k]));
+                }
+                t.row(row);
+            }
+            out.println("Net heat per band, W:");
+            t.render(0).forEach(out::println);
+        } else if (bands.size() <= MAX_SPLIT_COLUMNS) {
+            List<String> head = new ArrayList<>();
+            head.add("Surface");
+            boolean[] num = new boolean[bands.size() + 1];
+            for (int k = 0; k < bands.size(); k++) {
+                head.add(Numbers.wavelength(bands.get(k).lowerUm()) + "–" + Numbers.wavelength(bands.get(k).upperUm()) + " µm");
+                num[k + 1] = true;
+            }
+            TextTable t = new TextTable(head, num);
+            for (SurfaceResult x : s) {
+                List<String> row = new ArrayList<>();
+                row.add(x.name());
+                for (double q : x.bandNetHeatW()) {
+                    row.add(Numbers.power(q));
+                }
+                t.row(row);
+            }
+            out.println("Net heat per band, W:");
+            t.render(0).forEach(out::println);
+        } else {
+            out.println("Net heat per band: " + s.size() + " surfaces × " + bands.size()
+                    + " bands; use --json for the full split.");
+        }
+    }
+
+    private static void writeBalance(SolveResult r, PrintStream out) {
+        double rel = r.relativeEnergyBalance();
+        out.println("Energy balance: Σ net heat" + (r.environment() != null ? " (surfaces + environment)" : "")
+                + " = " + Numbers.small(r.energyBalanceW()) + " W, " + Numbers.small(rel) + " of "
+                + Numbers.power(r.energyScaleW()) + " W in play — "
+                + (rel <= BALANCE_WARNING ? "closes" : "DOES NOT CLOSE (check view-factor closure and reciprocity)"));
+        var s = r.solver();
+        out.println("Solver: " + s.linearSolver() + "; Newton iterations " + s.newtonIterations()
+                + ", property updates " + s.propertyIterations() + ", heat residual " + Numbers.small(s.residualW())
+                + " W; linear residual " + Numbers.small(s.maxLinearResidual()));
+    }
+}

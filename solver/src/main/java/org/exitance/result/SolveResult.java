@@ -1,0 +1,36 @@
+package org.exitance.result;
+
+import java.util.List;
+import org.exitance.model.Band;
+
+/**
+ * The immutable outcome of a band-wise solve; writers read it, none computes physics.
+ *
+ * @param title              case title
+ * @param bands              the bands used
+ * @param bandOrigin         how the bands were chosen
+ * @param surfaces           one result per surface, in case order
+ * @param environment        the environment's result, or null for a closed enclosure
+ * @param energyBalanceW     Σ_i Q_i + Q_env: zero for an exact, reciprocal network (W)
+ * @param energyScaleW       the power that balance is measured against: Σ_i A_i Σ_k J_ik (W)
+ * @param solver             convergence report
+ */
+public record SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
+                          EnvironmentResult environment, double energyBalanceW, double energyScaleW,
+                          SolverReport solver) {
+    public SolveResult {
+        bands = List.copyOf(bands);
+        surfaces = List.copyOf(surfaces);
+    }
+
+    /** |energy balance| relative to the scale. */
+    public double relativeEnergyBalance() {
+        return energyScaleW > 0 ? Math.abs(energyBalanceW) / energyScaleW : Math.abs(energyBalanceW);
+    }
+
+    /** The surface result with this name. */
+    public SurfaceResult surface(String name) {
+        return surfaces.stream().filter(s -> s.name().equals(name)).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("no surface named " + name));
+    }
+}

@@ -1,0 +1,20 @@
+package org.exitance.result;
+
+/**
+ * The solved state of one surface. Net heat is the net radiative power leaving the surface
+ * (W), positive when it loses heat by radiation.
+ *
+ * @param name               surface name
+ * @param areaM2             area (m²)
+ * @param boundary           label of its boundary condition
+ * @param temperatureK       temperature (K), given or solved
+ * @param temperatureSolved  true where the temperature was an unknown
+ * @param netHeatW           net radiative heat leaving (W)
+ * @param netFluxWPerM2      net radiative flux leaving (W/m²)
+ * @param bandNetHeatW       net heat per band (W); do not modify
+ * @param bandEmissivity     band-mean emissivity per band at the solved temperature; do not modify
+ */
+public record SurfaceResult(String name, double areaM2, String boundary, double temperatureK,
+                            boolean temperatureSolved, double netHeatW, double netFluxWPerM2,
+                            double[] bandNetHeatW, double[] bandEmissivity) {
+}

@@ -1,0 +1,443 @@
+package org.exitance.thermal;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.exitance.bands.BandProperties;
+import org.exitance.model.Band;
+import org.exitance.model.BandSet;
+import org.exitance.model.BoundaryCondition;
+import org.exitance.model.Enclosure;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.RadiationCase;
+import org.exitance.model.SolverSettings;
+import org.exitance.network.BandNetwork;
+import org.exitance.network.BandState;
+import org.exitance.network.ConjugateGradientRadiositySolver;
+import org.exitance.network.RadiositySolver;
+import org.exitance.result.EnvironmentResult;
+import org.exitance.result.SolveResult;
+import org.exitance.result.SolverReport;
+import org.exitance.result.SurfaceResult;
+import org.exitance.spectral.PhysicalConstants;
+import org.exitance.spectral.Planck;
+
+/**
+ * Band-wise radiosity solve with unknown temperatures.
+ *
+ * <p>Unknowns are the temperatures of surfaces without a fixed temperature. The residual of
+ * each is its radiative heat balance summed over bands, {@code R_u = A_u Σ_k q_uk(T) − Q_u}.
+ * With band properties held fixed each band is linear in the emissive powers, so the Jacobian
+ * is exact and cheap: {@code ∂R_u/∂T_v = A_u Σ_k (∂q_uk/∂E_vk)(dE_vk/dT_v)}, with ∂q/∂E from one
+ * extra solve per unknown and band ({@link BandNetwork#fluxSensitivity}) and dE/dT analytic
+ * ({@link Planck#bandEmissivePowerDerivative}). Newton's method (Kelley, Solving Nonlinear
+ * Equations with Newton's Method, SIAM 2003, ch. 1–2) is damped so no temperature changes by
+ * more than half its value in a step, and a backtracking line search (Armijo) keeps the residual
+ * decreasing. Band-mean properties depend on temperature (Planck weighting, and ε(λ, T) tables);
+ * an outer loop updates them until the temperatures stop moving.
+ *
+ * <p>With more than one band and unknown temperatures, a one-band gray solve (each surface's
+ * total hemispherical emissivity at its temperature) runs first as the starting point.
+ */
+public final class TemperatureSolver {
+    private static final double SIGMA = PhysicalConstants.STEFAN_BOLTZMANN_W_M2_K4;
+    private final RadiationCase radiationCase;
+    private final SolverSettings settings;
+    private final RadiositySolver linear;
+    private final String linearName;
+
+    /** A solver that picks the linear strategy by {@link RadiositySolver#forSize}. */
+    public TemperatureSolver(RadiationCase c) {
+        this(c, RadiositySolver.forSize(c.enclosure().size()));
+    }
+
+    public TemperatureSolver(RadiationCase c, RadiositySolver linear) {
+        this.radiationCase = c;
+        this.settings = c.settings();
+        this.linear = linear;
+        this.linearName = linear instanceof ConjugateGradientRadiositySolver ? "conjugate gradients" : "direct LU";
+    }
+
+    /**
+     * Solves the case with the given bands.
+     *
+     * @throws IllPosedCaseException when the case has no solution as posed
+     * @throws SolveFailedException  when Newton or the property loop does not converge
+     */
+    public SolveResult solve(BandSet bandSet) {
+        Enclosure enc = radiationCase.enclosure();
+        int n = enc.size();
+        List<Band> bands = bandSet.bands();
+        Problem p = new Problem(enc, linear);
+        checkPosed(p);
+        double[] t = startingTemperatures(p);
+        Counters counters = new Counters();
+        if (p.unknown.length > 0 && bands.size() > 1) {
+            // gray start: one band, total hemispherical emissivity at each temperature
+            t = converge(p, BandSet.gray("gray start").bands(), t, counters);
+        }
+        t = converge(p, bands, t, counters);
+        // final state with converged properties
+        double[][] eps = BandProperties.emissivities(enc.surfaces(), bands, t);
+        BandNetwork[] nets = networks(p, bands, eps);
+        BandState[] states = solveBands(p, bands, nets, t, counters);
+        return assemble(p, bandSet, bands, eps, states, t, counters);
+    }
+
+    /** Outer loop over property updates around a Newton solve; returns converged temperatures. */
+    private double[] converge(Problem p, List<Band> bands, double[] start, Counters counters) {
+        double[] t = start.clone();
+        if (p.unknown.length == 0) {
+            counters.propertyIterations = Math.max(counters.propertyIterations, 1);
+            return t;
+        }
+        for (int outer = 1; outer <= settings.maxPropertyIterations(); outer++) {
+            counters.propertyIterations++;
+            double[][] eps = BandProperties.emissivities(p.enc.surfaces(), bands, t);
+            BandNetwork[] nets = networks(p, bands, eps);
+            double[] before = t.clone();
+            t = newton(p, bands, nets, t, counters);
+            double move = 0;
+            for (int u : p.unknown) {
+                move = Math.max(move, Math.abs(t[u] - before[u]));
+            }
+            if (move == 0 || outer > 1 && move <= settings.temperatureToleranceK()) {
+                return t;
+            }
+            counters.lastOuterMove = move;
+        }
+        throw new SolveFailedException("band properties did not settle in " + settings.maxPropertyIterations()
+                + " updates (last temperature change " + fmt(counters.lastOuterMove) + " K)",
+                counters.newtonIterations, counters.residualW);
+    }
+
+    /** Damped Newton with fixed band properties. */
+    private double[] newton(Problem p, List<Band> bands, BandNetwork[] nets, double[] start, Counters counters) {
+        int[] u = p.unknown;
+        int m = u.length;
+        int nb = bands.size();
+        // ∂q_i/∂E_v per band and unknown v: sens[k][b][i]
+        double[][][] sens = new double[nb][m][];
+        for (int k = 0; k < nb; k++) {
+            for (int b = 0; b < m; b++) {
+                sens[k][b] = nets[k].fluxSensitivity(u[b]);
+            }
+        }
+        double[] t = start.clone();
+        double[] r = residual(p, bands, nets, t, counters);
+        for (int it = 0; it < settings.maxNewtonIterations(); it++) {
+            double rNorm = maxAbs(r);
+            double tol = heatTolerance(p, t);
+            counters.residualW = rNorm;
+            if (rNorm <= tol) {
+                return t;
+            }
+            DMatrixRMaj jac = new DMatrixRMaj(m, m);
+            for (int a = 0; a < m; a++) {
+                int ua = u[a];
+                for (int b = 0; b < m; b++) {
+                    double s = 0;
+                    for (int k = 0; k < nb; k++) {
+                        s += sens[k][b][ua] * BandProperties.emissivePowerDerivative(bands.get(k), t[u[b]]);
+                    }
+                    jac.set(a, b, p.area[ua] * s);
+                }
+            }
+            LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(m);
+            if (!lu.setA(jac.copy()) || !(lu.quality() > 1e-15)) {
+                throw new IllPosedCaseException("the temperature of " + describeSingular(p, jac)
+                        + " does not affect any heat balance (zero emissivity in every band?)");
+            }
+            DMatrixRMaj rhs = new DMatrixRMaj(m, 1);
+            for (int a = 0; a < m; a++) {
+                rhs.set(a, 0, -r[a]);
+            }
+            DMatrixRMaj dx = new DMatrixRMaj(m, 1);
+            lu.solve(rhs, dx);
+            double lambda = 1.0;
+            for (int a = 0; a < m; a++) {
+                double d = Math.abs(dx.get(a, 0));
+                if (d > 0.5 * t[u[a]]) {
+                    lambda = Math.min(lambda, 0.5 * t[u[a]] / d);
+                }
+            }
+            double[] trial = t.clone();
+            double[] rTrial = null;
+            for (int ls = 0; ls < 40; ls++) {
+                for (int a = 0; a < m; a++) {
+                    trial[u[a]] = t[u[a]] + lambda * dx.get(a, 0);
+                }
+                rTrial = residual(p, bands, nets, trial, counters);
+                if (maxAbs(rTrial) <= (1 - 1e-4 * lambda) * rNorm || maxAbs(rTrial) <= tol) {
+                    break;
+                }
+                lambda *= 0.5;
+            }
+            double step = 0;
+            for (int a = 0; a < m; a++) {
+                step = Math.max(step, Math.abs(trial[u[a]] - t[u[a]]));
+            }
+            counters.lastStep = step;
+            counters.newtonIterations++;
+            t = trial;
+            r = rTrial;
+            checkFloor(p, t, r);
+        }
+        throw new SolveFailedException("Newton's method did not converge in " + settings.maxNewtonIterations()
+                + " iterations: largest heat residual " + fmt(maxAbs(r)) + " W at "
+                + p.enc.surface(u[argMaxAbs(r)]).name(), counters.newtonIterations, maxAbs(r));
+    }
+
+    /** A demand that needs a temperature at or below 0 K is impossible: say so. */
+    private void checkFloor(Problem p, double[] t, double[] r) {
+        for (int a = 0; a < p.unknown.length; a++) {
+            int i = p.unknown[a];
+            if (t[i] < 1e-3 && r[a] > 0) {
+                EnclosureSurface s = p.enc.surface(i);
+                throw new SolveFailedException("surface '" + s.name() + "' cannot reach its " + s.boundary().label()
+                        + " demand of " + fmt(p.target[a]) + " W: even near 0 K its net heat would be "
+                        + fmt(r[a] + p.target[a]) + " W", 0, r[a]);
+            }
+        }
+    }
+
+    /** R_u = A_u Σ_k q_uk − Q_u (W) for each unknown. */
+    private double[] residual(Problem p, List<Band> bands, BandNetwork[] nets, double[] t, Counters counters) {
+        BandState[] states = solveBands(p, bands, nets, t, counters);
+        double[] r = new double[p.unknown.length];
+        for (int a = 0; a < r.length; a++) {
+            int i = p.unknown[a];
+            double q = 0;
+            for (BandState s : states) {
+                q += s.netFlux()[i];
+            }
+            r[a] = p.area[i] * q - p.target[a];
+        }
+        return r;
+    }
+
+    private BandState[] solveBands(Problem p, List<Band> bands, BandNetwork[] nets, double[] t, Counters counters) {
+        int n = p.enc.size();
+        BandState[] states = new BandState[bands.size()];
+        for (int k = 0; k < bands.size(); k++) {
+            Band b = bands.get(k);
+            double[] e = new double[n];
+            for (int i = 0; i < n; i++) {
+                e[i] = Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), t[i]);
+            }
+            states[k] = nets[k].solve(e);
+            counters.maxLinearIterations = Math.max(counters.maxLinearIterations, states[k].iterations());
+            counters.maxLinearResidual = Math.max(counters.maxLinearResidual, states[k].relativeResidual());
+        }
+        return states;
+    }
+
+    private BandNetwork[] networks(Problem p, List<Band> bands, double[][] eps) {
+        BandNetwork[] nets = new BandNetwork[bands.size()];
+        for (int k = 0; k < nets.length; k++) {
+            Band b = bands.get(k);
+            double envE = p.envT > 0 ? Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), p.envT) : 0.0;
+            nets[k] = new BandNetwork(p.f, p.enc.size(), p.area, p.envFactor, eps[k], envE, linear);
+        }
+        return nets;
+    }
+
+    private double heatTolerance(Problem p, double[] t) {
+        double scale = 0;
+        for (int i = 0; i < t.length; i++) {
+            scale = Math.max(scale, p.area[i] * SIGMA * Math.pow(t[i], 4));
+        }
+        for (double q : p.target) {
+            scale = Math.max(scale, Math.abs(q));
+        }
+        if (p.envT > 0) {
+            for (int i = 0; i < t.length; i++) {
+                scale = Math.max(scale, p.area[i] * SIGMA * Math.pow(p.envT, 4));
+            }
+        }
+        return Math.max(settings.relativeHeatTolerance() * scale, 1e-300);
+    }
+
+    private static void checkPosed(Problem p) {
+        if (p.unknown.length == 0) {
+            return;
+        }
+        boolean anchored = p.unknown.length < p.enc.size() || p.enc.environment() != null;
+        if (!anchored) {
+            throw new IllPosedCaseException("no surface has a fixed temperature and there is no environment:"
+                    + " the temperature level is undetermined; fix at least one surface's temperature");
+        }
+    }
+
+    /**
+     * Starting temperatures: given ones, initial guesses, else the area-weighted fourth-power
+     * mean of the fixed temperatures (and environment), raised for surfaces that must emit a net
+     * flux: T⁴ = T_ref⁴ + max(q, 0)/σ.
+     */
+    private static double[] startingTemperatures(Problem p) {
+        Enclosure enc = p.enc;
+        int n = enc.size();
+        double sumA = 0;
+        double sumAT4 = 0;
+        double[] t = new double[n];
+        for (int i = 0; i < n; i++) {
+            if (enc.surface(i).boundary() instanceof BoundaryCondition.FixedTemperature ft) {
+                t[i] = ft.temperatureK();
+                sumA += p.area[i];
+                sumAT4 += p.area[i] * Math.pow(t[i], 4);
+            }
+        }
+        double ref4;
+        if (sumA > 0) {
+            ref4 = sumAT4 / sumA;
+        } else {
+            ref4 = Math.pow(Math.max(p.envT, 3.0), 4);
+        }
+        if (p.envT > 0 && sumA == 0) {
+            ref4 = Math.pow(p.envT, 4);
+        }
+        for (int a = 0; a < p.unknown.length; a++) {
+            int i = p.unknown[a];
+            EnclosureSurface s = enc.surface(i);
+            if (Double.isFinite(s.initialTemperatureK())) {
+                t[i] = s.initialTemperatureK();
+            } else {
+                double q = p.target[a] / p.area[i];
+                t[i] = Math.max(Math.pow(ref4 + Math.max(q, 0) / SIGMA, 0.25), 1.0);
+            }
+        }
+        return t;
+    }
+
+    private SolveResult assemble(Problem p, BandSet bandSet, List<Band> bands, double[][] eps, BandState[] states,
+                                 double[] t, Counters counters) {
+        Enclosure enc = p.enc;
+        int n = enc.size();
+        int nb = bands.size();
+        List<SurfaceResult> out = new ArrayList<>(n);
+        double total = 0;
+        double scale = 0;
+        for (int i = 0; i < n; i++) {
+            EnclosureSurface s = enc.surface(i);
+            double[] bandQ = new double[nb];
+            double[] bandEps = new double[nb];
+            double q = 0;
+            for (int k = 0; k < nb; k++) {
+                bandQ[k] = p.area[i] * states[k].netFlux()[i];
+                bandEps[k] = eps[k][i];
+                q += bandQ[k];
+                scale += p.area[i] * Math.abs(states[k].radiosity()[i]);
+            }
+            total += q;
+            out.add(new SurfaceResult(s.name(), s.areaM2(), s.boundary().label(), t[i],
+                    s.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps));
+        }
+        EnvironmentResult env = null;
+        if (enc.environment() != null) {
+            double[] bandQ = new double[nb];
+            double q = 0;
+            for (int k = 0; k < nb; k++) {
+                bandQ[k] = states[k].environmentNetHeatW();
+                q += bandQ[k];
+            }
+            for (int i = 0; i < n; i++) {
+                scale += p.area[i] * p.envFactor[i] * SIGMA * Math.pow(p.envT, 4);
+            }
+            total += q;
+            env = new EnvironmentResult(enc.environment().name(), p.envT, q, bandQ);
+        }
+        double residual = 0;
+        for (int a = 0; a < p.unknown.length; a++) {
+            int i = p.unknown[a];
+            residual = Math.max(residual, Math.abs(out.get(i).netHeatW() - p.target[a]));
+        }
+        SolverReport report = new SolverReport(linearName, counters.newtonIterations, counters.propertyIterations,
+                residual, p.unknown.length == 0 ? 0 : counters.lastStep, counters.maxLinearIterations,
+                counters.maxLinearResidual);
+        return new SolveResult(radiationCase.title(), bands, bandSet.origin(), out, env, total, scale, report);
+    }
+
+    private static String describeSingular(Problem p, DMatrixRMaj jac) {
+        for (int a = 0; a < p.unknown.length; a++) {
+            boolean zero = true;
+            for (int b = 0; b < p.unknown.length; b++) {
+                zero &= jac.get(b, a) == 0;
+            }
+            if (zero) {
+                return "surface '" + p.enc.surface(p.unknown[a]).name() + "'";
+            }
+        }
+        return "some unknown-temperature surface";
+    }
+
+    private static double maxAbs(double[] v) {
+        double m = 0;
+        for (double x : v) {
+            m = Math.max(m, Math.abs(x));
+        }
+        return m;
+    }
+
+    private static int argMaxAbs(double[] v) {
+        int best = 0;
+        for (int i = 1; i < v.length; i++) {
+            if (Math.abs(v[i]) > Math.abs(v[best])) {
+                best = i;
+            }
+        }
+        return best;
+    }
+
+    private static String fmt(double v) {
+        return String.format(java.util.Locale.ROOT, "%.6g", v);
+    }
+
+    /** Arrays derived once from the enclosure. */
+    private static final class Problem {
+        final Enclosure enc;
+        final double[] f;
+        final double[] area;
+        final double[] envFactor;
+        final double envT;
+        final int[] unknown;
+        final double[] target;
+
+        Problem(Enclosure enc, RadiositySolver linear) {
+            this.enc = enc;
+            int n = enc.size();
+            f = new double[n * n];
+            area = new double[n];
+            envFactor = new double[n];
+            List<Integer> u = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    f[i * n + j] = enc.viewFactor(i, j);
+                }
+                area[i] = enc.surface(i).areaM2();
+                envFactor[i] = enc.environmentFactor(i);
+                if (enc.surface(i).boundary().temperatureUnknown()) {
+                    u.add(i);
+                }
+            }
+            envT = enc.environment() == null ? 0.0 : enc.environment().temperatureK();
+            unknown = u.stream().mapToInt(Integer::intValue).toArray();
+            target = new double[unknown.length];
+            for (int a = 0; a < unknown.length; a++) {
+                target[a] = enc.surface(unknown[a]).boundary().targetNetHeatW(area[unknown[a]]);
+            }
+        }
+    }
+
+    /** Iteration bookkeeping for the report. */
+    private static final class Counters {
+        int newtonIterations;
+        int propertyIterations;
+        double residualW;
+        double lastStep = Double.POSITIVE_INFINITY;
+        double lastOuterMove;
+        int maxLinearIterations;
+        double maxLinearResidual;
+    }
+}
