@@ -21,6 +21,8 @@ import org.exitance.spectral.SpectralEmissivity;
  *       48 %, 81 % and 97 %).</li>
  *   <li>Property edges: every node of every non-gray property table that lies where the case's
  *       Planck curves carry energy, λ in [500 µm·K / T_max, 50,000 µm·K / T_min].</li>
+ *   <li>Planck edges are rounded to 4 significant digits; property edges are kept exactly, so a
+ *       step in a table coincides with a band edge.</li>
  *   <li>Edges closer than 8 % to the previous kept edge (ratio below 1.08) are dropped,
  *       scanning from short to long wavelength; at most {@value #MAX_EDGES} edges remain
  *       (every other edge is dropped until they fit).</li>
@@ -63,8 +65,8 @@ public final class DefaultBandRule {
         }
         TreeSet<Double> edges = new TreeSet<>();
         for (double x : PLANCK_LAMBDA_T_UM_K) {
-            edges.add(x / tMax);
-            edges.add(x / tMin);
+            edges.add(round4(x / tMax));
+            edges.add(round4(x / tMin));
         }
         double lo = 500 / tMax;
         double hi = 50000 / tMin;
@@ -91,19 +93,12 @@ public final class DefaultBandRule {
             }
             kept = thinner;
         }
-        double[] out = new double[kept.size()];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = round4(kept.get(i));
-        }
-        return new BandSet(dedupe(out), "default rule (Planck and property edges)");
+        double[] out = kept.stream().mapToDouble(Double::doubleValue).toArray();
+        return new BandSet(out, "default rule (Planck and property edges)");
     }
 
-    /** Rounds to 4 significant digits so printed edges are the edges used. */
+    /** Rounds Planck edges to 4 significant digits so printed edges are the edges used. */
     private static double round4(double v) {
         return Double.parseDouble(String.format(java.util.Locale.ROOT, "%.4g", v));
-    }
-
-    private static double[] dedupe(double[] sorted) {
-        return java.util.Arrays.stream(sorted).distinct().sorted().toArray();
     }
 }

@@ -18,8 +18,8 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code exitance check CASE.json}: validate without solving. */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Validate a case without solving: report what was read, the bands a solve would use",
-                "and the view-factor closure."},
+        description = {"Validate a case without solving.",
+                "Reports what was read, the bands a solve would use and the view-factor closure."},
         footer = {"", ExitCodes.HELP})
 final class CheckCommand implements Callable<Integer> {
     @Spec

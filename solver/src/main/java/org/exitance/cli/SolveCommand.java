@@ -15,8 +15,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code exitance solve CASE.json}: band-wise solve, table or JSON. */
 @Command(name = "solve", mixinStandardHelpOptions = true,
-        description = {"Solve a case: net heat and flux of every surface, unknown temperatures, per-band split",
-                "and the energy balance."},
+        description = {"Solve a case band by band.",
+                "Prints net heat and flux of every surface, solved temperatures, the per-band split and the "
+                + "energy balance; --json for the machine-readable result."},
         footer = {"", ExitCodes.HELP})
 final class SolveCommand implements Callable<Integer> {
     @Spec

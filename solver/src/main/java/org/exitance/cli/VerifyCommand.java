@@ -22,8 +22,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code exitance verify}: runs the shipped validation cases against their published references. */
 @Command(name = "verify", mixinStandardHelpOptions = true,
-        description = {"Run the validation cases (default: cases/validation) and print computed against",
-                "expected values with each case's published source: pass or fail."},
+        description = {"Run the validation cases against their published references.",
+                "Prints computed against expected values with each case's source, pass or fail (default "
+                + "directory: cases/validation)."},
         footer = {"", ExitCodes.HELP})
 final class VerifyCommand implements Callable<Integer> {
     @Spec

@@ -6,10 +6,13 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
 
 /**
  * LU factorization with partial pivoting (EJML) of {@code I − diag(ρ) F}. The matrix is
- * non-singular whenever every closed sub-enclosure has some absorption (some ρ < 1) in the band;
- * a singular or near-singular matrix is reported, never solved silently.
+ * non-singular whenever every closed sub-enclosure has some absorption (some ρ &lt; 1) in the band;
+ * every solve checks its residual, and a singular or near-singular matrix is reported, never
+ * solved silently.
  */
 public final class DirectRadiositySolver implements RadiositySolver {
+    /** Largest relative residual accepted after an LU solve; beyond it the matrix is reported singular. */
+    static final double SOLVE_CHECK = 1e-8;
 
     @Override
     public Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2) {
@@ -27,12 +30,6 @@ public final class DirectRadiositySolver implements RadiositySolver {
             throw new NetworkConvergenceException("radiosity matrix is singular (a closed part of the enclosure"
                     + " reflects everything in this band)", 0, Double.POSITIVE_INFINITY);
         }
-        double quality = lu.quality();
-        if (!(quality > 1e-14)) {
-            throw new NetworkConvergenceException("radiosity matrix is singular or nearly so (LU quality "
-                    + quality + "): a closed part of the enclosure reflects almost everything in this band",
-                    0, Double.POSITIVE_INFINITY);
-        }
         return new Prepared() {
             private double residual;
 
@@ -43,6 +40,11 @@ public final class DirectRadiositySolver implements RadiositySolver {
                 lu.solve(rhs, x);
                 System.arraycopy(x.data, 0, j, 0, n);
                 residual = RadiositySolver.relativeResidual(viewFactors, n, reflectivity, b, j);
+                if (!(residual <= SOLVE_CHECK)) {
+                    throw new NetworkConvergenceException("radiosity matrix is singular or too ill-conditioned"
+                            + " (relative residual " + residual + " after LU): a closed part of the enclosure reflects"
+                            + " (almost) everything in this band", 1, residual);
+                }
             }
 
             @Override

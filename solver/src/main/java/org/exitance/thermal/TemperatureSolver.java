@@ -96,6 +96,7 @@ public final class TemperatureSolver {
         for (int outer = 1; outer <= settings.maxPropertyIterations(); outer++) {
             counters.propertyIterations++;
             double[][] eps = BandProperties.emissivities(p.enc.surfaces(), bands, t);
+            requireEmission(p, eps);
             BandNetwork[] nets = networks(p, bands, eps);
             double[] before = t.clone();
             t = newton(p, bands, nets, t, counters);
@@ -111,6 +112,20 @@ public final class TemperatureSolver {
         throw new SolveFailedException("band properties did not settle in " + settings.maxPropertyIterations()
                 + " updates (last temperature change " + fmt(counters.lastOuterMove) + " K)",
                 counters.newtonIterations, counters.residualW);
+    }
+
+    /** An unknown-temperature surface that emits in no band has no defined temperature. */
+    private static void requireEmission(Problem p, double[][] eps) {
+        for (int u : p.unknown) {
+            boolean emits = false;
+            for (double[] band : eps) {
+                emits |= band[u] > 0;
+            }
+            if (!emits) {
+                throw new IllPosedCaseException("surface '" + p.enc.surface(u).name() + "' has zero emissivity in every"
+                        + " band, so its temperature is undefined; give it a temperature or a nonzero emissivity");
+            }
+        }
     }
 
     /** Damped Newton with fixed band properties. */
@@ -145,17 +160,28 @@ public final class TemperatureSolver {
                     jac.set(a, b, p.area[ua] * s);
                 }
             }
-            LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(m);
-            if (!lu.setA(jac.copy()) || !(lu.quality() > 1e-15)) {
-                throw new IllPosedCaseException("the temperature of " + describeSingular(p, jac)
-                        + " does not affect any heat balance (zero emissivity in every band?)");
+            String dead = zeroColumn(p, jac);
+            if (dead != null) {
+                throw new IllPosedCaseException("the temperature of surface '" + dead
+                        + "' does not affect any heat balance (zero emissivity in every band?): it is undefined");
             }
+            LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(m);
             DMatrixRMaj rhs = new DMatrixRMaj(m, 1);
             for (int a = 0; a < m; a++) {
                 rhs.set(a, 0, -r[a]);
             }
             DMatrixRMaj dx = new DMatrixRMaj(m, 1);
+            if (!lu.setA(jac.copy())) {
+                throw new IllPosedCaseException("the heat balances do not determine the unknown temperatures"
+                        + " (singular Jacobian)");
+            }
             lu.solve(rhs, dx);
+            for (int a = 0; a < m; a++) {
+                if (!Double.isFinite(dx.get(a, 0))) {
+                    throw new IllPosedCaseException("the heat balances do not determine the unknown temperatures"
+                            + " (singular Jacobian)");
+                }
+            }
             double lambda = 1.0;
             for (int a = 0; a < m; a++) {
                 double d = Math.abs(dx.get(a, 0));
@@ -359,17 +385,18 @@ public final class TemperatureSolver {
         return new SolveResult(radiationCase.title(), bands, bandSet.origin(), out, env, total, scale, report);
     }
 
-    private static String describeSingular(Problem p, DMatrixRMaj jac) {
+    /** Name of an unknown-temperature surface whose column of the Jacobian is zero, or null. */
+    private static String zeroColumn(Problem p, DMatrixRMaj jac) {
         for (int a = 0; a < p.unknown.length; a++) {
             boolean zero = true;
             for (int b = 0; b < p.unknown.length; b++) {
                 zero &= jac.get(b, a) == 0;
             }
             if (zero) {
-                return "surface '" + p.enc.surface(p.unknown[a]).name() + "'";
+                return p.enc.surface(p.unknown[a]).name();
             }
         }
-        return "some unknown-temperature surface";
+        return null;
     }
 
     private static double maxAbs(double[] v) {

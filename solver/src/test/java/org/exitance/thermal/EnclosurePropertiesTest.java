@@ -1,0 +1,120 @@
+package org.exitance.thermal;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Random;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
+import org.exitance.model.BandSet;
+import org.exitance.model.BoundaryCondition;
+import org.exitance.model.Enclosure;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.Material;
+import org.exitance.result.SolveResult;
+import org.exitance.result.SurfaceResult;
+import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.support.Cases;
+import org.exitance.support.RandomEnclosures;
+
+/**
+ * Laws every solve must obey, over random reciprocal enclosures with spectral surfaces:
+ * conservation of energy (common practice: the first law over a closed enclosure, e.g. Modest,
+ * Radiative Heat Transfer, 3rd ed., §5.3), heat flowing from hot to cold in every band
+ * (second law), and independence of the order in which surfaces are listed.
+ */
+class EnclosurePropertiesTest {
+    private static final BandSet FOUR_BANDS = new BandSet(new double[] {1.5, 3, 6}, "test");
+
+    @Property(tries = 60)
+    void energyBalanceClosesToOnePartInABillion(@ForAll long seed, @ForAll @IntRange(min = 2, max = 7) int n,
+                                                @ForAll boolean open) {
+        Random r = new Random(seed);
+        Enclosure e = RandomEnclosures.random(r, n, open, 0.5);
+        SolveResult res = new TemperatureSolver(Cases.of(e, null)).solve(FOUR_BANDS);
+        assertThat(res.relativeEnergyBalance()).isLessThan(1e-9);
+        for (int i = 0; i < n; i++) {
+            EnclosureSurface s = e.surface(i);
+            if (s.boundary().temperatureUnknown()) {
+                assertThat(res.surfaces().get(i).netHeatW())
+                        .isCloseTo(s.boundary().targetNetHeatW(s.areaM2()), within(1e-9 * res.energyScaleW()));
+            }
+        }
+    }
+
+    @Property(tries = 60)
+    void heatFlowsFromTheHotterToTheColderSurfaceInEveryBand(@ForAll long seed) {
+        Random r = new Random(seed);
+        double a1 = 0.2 + r.nextDouble();
+        double a2 = a1 * (1 + 3 * r.nextDouble());
+        double f11 = 0;
+        double f21 = a1 / a2; // surface 1 convex (sees only 2), surface 2 encloses it
+        double[][] f = {{f11, 1}, {f21, 1 - f21}};
+        double tHot = 400 + 1200 * r.nextDouble();
+        double tCold = 250 + (tHot - 260) * r.nextDouble();
+        SpectralEmissivity m1 = RandomEnclosures.randomEmissivity(r);
+        SpectralEmissivity m2 = RandomEnclosures.randomEmissivity(r);
+        boolean swap = r.nextBoolean();
+        List<EnclosureSurface> s = List.of(
+                new EnclosureSurface("one", new Material("a", m1, ""), a1,
+                        new BoundaryCondition.FixedTemperature(swap ? tCold : tHot), Double.NaN),
+                new EnclosureSurface("two", new Material("b", m2, ""), a2,
+                        new BoundaryCondition.FixedTemperature(swap ? tHot : tCold), Double.NaN));
+        SolveResult res = new TemperatureSolver(Cases.of(new Enclosure(s, f, null), null)).solve(FOUR_BANDS);
+        SurfaceResult hot = res.surface(swap ? "two" : "one");
+        SurfaceResult cold = res.surface(swap ? "one" : "two");
+        assertThat(hot.netHeatW()).isPositive();
+        assertThat(cold.netHeatW()).isNegative();
+        for (int k = 0; k < FOUR_BANDS.size(); k++) {
+            assertThat(hot.bandNetHeatW()[k]).isGreaterThanOrEqualTo(0);
+        }
+    }
+
+    @Property(tries = 40)
+    void resultsDoNotDependOnSurfaceOrder(@ForAll long seed, @ForAll @IntRange(min = 2, max = 7) int n,
+                                          @ForAll boolean open) {
+        Random r = new Random(seed);
+        Enclosure e = RandomEnclosures.random(r, n, open, 0.5);
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            order.add(i);
+        }
+        Collections.shuffle(order, r);
+        Enclosure p = e.permuted(order.stream().mapToInt(Integer::intValue).toArray());
+        SolveResult a = new TemperatureSolver(Cases.of(e, null)).solve(FOUR_BANDS);
+        SolveResult b = new TemperatureSolver(Cases.of(p, null)).solve(FOUR_BANDS);
+        for (SurfaceResult x : a.surfaces()) {
+            SurfaceResult y = b.surface(x.name());
+            assertThat(y.temperatureK()).isCloseTo(x.temperatureK(), within(1e-9 * x.temperatureK()));
+            assertThat(y.netHeatW()).isCloseTo(x.netHeatW(), within(1e-9 * a.energyScaleW()));
+        }
+    }
+
+    @Property(tries = 30)
+    void equalEmissivityInEveryBandGivesTheGrayAnswer(@ForAll long seed, @ForAll @IntRange(min = 2, max = 6) int n) {
+        Random r = new Random(seed);
+        Enclosure random = RandomEnclosures.random(r, n, r.nextBoolean(), 0.5);
+        // Replace every material by one with the same ε in every band (a flat table).
+        List<EnclosureSurface> flat = new ArrayList<>();
+        for (EnclosureSurface s : random.surfaces()) {
+            double eps = 0.05 + 0.9 * r.nextDouble();
+            SpectralEmissivity m = new org.exitance.spectral.TabulatedEmissivity(new double[] {1, 5, 20},
+                    new double[] {eps, eps, eps});
+            flat.add(new EnclosureSurface(s.name(), new Material("flat" + s.name(), m, ""), s.areaM2(), s.boundary(),
+                    s.initialTemperatureK()));
+        }
+        Enclosure e = new Enclosure(flat, random.viewFactors(), random.environment());
+        BandSet many = new BandSet(new double[] {0.5, 1, 1.5, 2, 3, 4, 6, 8, 12, 20, 40}, "test");
+        SolveResult banded = new TemperatureSolver(Cases.of(e, null)).solve(many);
+        SolveResult gray = new TemperatureSolver(Cases.of(e, null)).solve(BandSet.gray("test"));
+        for (SurfaceResult g : gray.surfaces()) {
+            SurfaceResult b = banded.surface(g.name());
+            assertThat(b.netHeatW()).isCloseTo(g.netHeatW(), within(1e-10 * gray.energyScaleW()));
+            assertThat(b.temperatureK()).isCloseTo(g.temperatureK(), within(1e-10 * g.temperatureK()));
+        }
+    }
+}
