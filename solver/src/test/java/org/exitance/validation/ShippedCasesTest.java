@@ -1,0 +1,40 @@
+package org.exitance.validation;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.exitance.cases.CaseReader;
+import org.exitance.cases.LoadedCase;
+import org.exitance.result.SolveResult;
+import org.exitance.thermal.CaseSolver;
+import org.junit.jupiter.api.DynamicTest;
+import org.junit.jupiter.api.TestFactory;
+
+/** Every shipped case (demo and validation) reads, solves, and closes its energy balance. */
+class ShippedCasesTest {
+
+    static List<Path> shippedCases() throws IOException {
+        Path cases = ValidationCasesTest.repoRoot().resolve("cases");
+        try (Stream<Path> s = Files.walk(cases)) {
+            return s.filter(p -> p.toString().endsWith(".json"))
+                    .filter(p -> !cases.relativize(p).toString().startsWith("materials"))
+                    .sorted().toList();
+        }
+    }
+
+    @TestFactory
+    Stream<DynamicTest> everyShippedCaseSolvesAndBalances() throws IOException {
+        List<Path> files = shippedCases();
+        assertThat(files).anyMatch(p -> p.toString().contains("demo"));
+        return files.stream().map(f -> DynamicTest.dynamicTest(f.getFileName().toString(), () -> {
+            LoadedCase c = CaseReader.read(f);
+            SolveResult r = CaseSolver.solve(c.model(), null);
+            // first law over the enclosure and its environment (common practice)
+            assertThat(r.relativeEnergyBalance()).isLessThan(1e-9);
+        }));
+    }
+}
