@@ -3,6 +3,7 @@ package org.exitance.cases;
 import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonStreamContext;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -64,13 +65,34 @@ public final class CaseReader {
             }
             return n;
         } catch (JsonParseException e) {
+            String original = PropertyCsvReader.oneLine(e.getOriginalMessage());
+            if (original.startsWith("Duplicate field") && e.getProcessor() != null) {
+                throw new CaseException(file, jsonPath(e.getProcessor().getParsingContext()), "duplicate key (line "
+                        + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr() + "): " + original);
+            }
+            // the parser names positions as "[Source: ...; line: 3, column: 15]"; keep only the position
             throw new CaseException(file, "", "malformed JSON at line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr() + ": " + PropertyCsvReader.oneLine(e.getOriginalMessage()));
+                    + e.getLocation().getColumnNr() + ": "
+                    + original.replaceAll("\\[Source: [^\\]]*?line: (\\d+), column: (\\d+)\\]", "line $1, column $2"));
         } catch (JsonProcessingException e) {
             throw new CaseException(file, "", "malformed JSON: " + PropertyCsvReader.oneLine(e.getOriginalMessage()));
         } catch (IOException e) {
             throw new CaseException(file, "", "cannot read: " + PropertyCsvReader.oneLine(e.getMessage()));
         }
+    }
+
+    /** The JSON path of a parser position, in the form the cursor uses ({@code $.surfaces[0].area_m2}). */
+    private static String jsonPath(JsonStreamContext ctx) {
+        StringBuilder b = new StringBuilder();
+        for (JsonStreamContext c = ctx; c != null && !c.inRoot(); c = c.getParent()) {
+            if (c.inArray()) {
+                b.insert(0, "[" + Math.max(c.getCurrentIndex(), 0) + "]");
+            } else if (c.getCurrentName() != null) {
+                String k = c.getCurrentName();
+                b.insert(0, k.matches("[A-Za-z_][A-Za-z0-9_]*") ? "." + k : "['" + k + "']");
+            }
+        }
+        return "$" + b;
     }
 
     /** Reads a temperature given as {@code <prefix>_K} or {@code <prefix>_C}; returns K. */
@@ -165,6 +187,9 @@ public final class CaseReader {
         }
 
         private BoundaryCondition boundary(JsonCursor s) throws CaseException {
+            if (s.has("temperature_K") && s.has("temperature_C")) {
+                throw s.error("give temperature_K or temperature_C, not both");
+            }
             String which = s.exactlyOneOf("temperature_K", "temperature_C", "netHeat_W", "netFlux_W_m2", "adiabatic");
             switch (which) {
                 case "temperature_K":

@@ -49,9 +49,10 @@ final class PropertyCsvReader {
         List<String> header;
         try (MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(csv.toFile())) {
             while (it.hasNextValue()) {
-                Map<String, String> row = it.nextValue();
-                rows.add(row);
-                lines.add(it.getCurrentLocation().getLineNr());
+                // the row's own line: read before nextValue, which moves on past the line end
+                int line = it.getCurrentLocation().getLineNr();
+                rows.add(it.nextValue());
+                lines.add(line);
             }
             header = new ArrayList<>();
             CsvSchema parsed = (CsvSchema) it.getParserSchema();
@@ -65,8 +66,8 @@ final class PropertyCsvReader {
         List<String> expected = withT ? List.of("temperature_K", "wavelength_um", "emissivity")
                 : List.of("wavelength_um", "emissivity");
         if (!header.equals(expected)) {
-            throw new CaseException(csv, "", "header must be '" + String.join(",", expected)
-                    + "' (or 'wavelength_um,emissivity'), got '" + String.join(",", header) + "'");
+            throw new CaseException(csv, "", "line " + headerLine(csv) + ": header must be 'wavelength_um,emissivity'"
+                    + " or 'temperature_K,wavelength_um,emissivity', got '" + String.join(",", header) + "'");
         }
         if (rows.isEmpty()) {
             throw new CaseException(csv, "", "no data rows");
@@ -125,6 +126,22 @@ final class PropertyCsvReader {
         } catch (NumberFormatException e) {
             throw new CaseException(csv, "", "line " + line + ": " + column + " is not a number: '" + s + "'");
         }
+    }
+
+    /** The line of the header: the first line that is neither blank nor a comment. */
+    private static int headerLine(Path csv) {
+        try {
+            List<String> all = Files.readAllLines(csv);
+            for (int i = 0; i < all.size(); i++) {
+                String t = all.get(i).trim();
+                if (!t.isEmpty() && !t.startsWith("#")) {
+                    return i + 1;
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // fall through: the header is on the first line unless comments precede it
+        }
+        return 1;
     }
 
     static String oneLine(String s) {

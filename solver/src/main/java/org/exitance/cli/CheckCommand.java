@@ -31,6 +31,7 @@ final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         LoadedCase c = Runs.load(caseFile);
+        Runs.preflight(c);
         PrintWriter out = spec.commandLine().getOut();
         Enclosure e = c.model().enclosure();
         out.println("Valid: " + caseFile + (c.model().title().isEmpty() ? "" : " — " + c.model().title()));

@@ -10,6 +10,7 @@ import org.exitance.result.SolveResult;
 import org.exitance.thermal.CaseSolver;
 import org.exitance.thermal.IllPosedCaseException;
 import org.exitance.thermal.SolveFailedException;
+import org.exitance.thermal.TemperatureSolver;
 
 /** Reading and solving with failures turned into one-line user errors naming the file. */
 final class Runs {
@@ -18,6 +19,15 @@ final class Runs {
 
     static LoadedCase load(Path file) throws CaseException {
         return CaseReader.read(file);
+    }
+
+    /** Checks what can be known without solving: that the problem is posed at all. */
+    static void preflight(LoadedCase c) {
+        try {
+            TemperatureSolver.checkPosed(c.model().enclosure());
+        } catch (IllPosedCaseException e) {
+            throw new UserError(c.file() + ": " + e.getMessage(), ExitCodes.BAD_INPUT);
+        }
     }
 
     static SolveResult solve(LoadedCase c, BandSet override) {

@@ -71,7 +71,7 @@ public final class TemperatureSolver {
         int n = enc.size();
         List<Band> bands = bandSet.bands();
         Problem p = new Problem(enc, linear);
-        checkPosed(p);
+        checkPosed(enc);
         double[] t = startingTemperatures(p);
         Counters counters = new Counters();
         if (p.unknown.length > 0 && bands.size() > 1) {
@@ -209,7 +209,7 @@ public final class TemperatureSolver {
             counters.newtonIterations++;
             t = trial;
             r = rTrial;
-            checkFloor(p, t, r);
+            checkFloor(p, t, r, counters.newtonIterations);
         }
         throw new SolveFailedException("Newton's method did not converge in " + settings.maxNewtonIterations()
                 + " iterations: largest heat residual " + fmt(maxAbs(r)) + " W at "
@@ -217,14 +217,14 @@ public final class TemperatureSolver {
     }
 
     /** A demand that needs a temperature at or below 0 K is impossible: say so. */
-    private void checkFloor(Problem p, double[] t, double[] r) {
+    private void checkFloor(Problem p, double[] t, double[] r, int iterations) {
         for (int a = 0; a < p.unknown.length; a++) {
             int i = p.unknown[a];
             if (t[i] < 1e-3 && r[a] > 0) {
                 EnclosureSurface s = p.enc.surface(i);
                 throw new SolveFailedException("surface '" + s.name() + "' cannot reach its " + s.boundary().label()
                         + " demand of " + fmt(p.target[a]) + " W: even near 0 K its net heat would be "
-                        + fmt(r[a] + p.target[a]) + " W", 0, r[a]);
+                        + fmt(r[a] + p.target[a]) + " W", iterations, r[a]);
             }
         }
     }
@@ -286,12 +286,15 @@ public final class TemperatureSolver {
         return Math.max(settings.relativeHeatTolerance() * scale, 1e-300);
     }
 
-    private static void checkPosed(Problem p) {
-        if (p.unknown.length == 0) {
-            return;
-        }
-        boolean anchored = p.unknown.length < p.enc.size() || p.enc.environment() != null;
-        if (!anchored) {
+    /**
+     * Rejects an enclosure whose temperature level nothing fixes: every temperature unknown and
+     * no environment.
+     *
+     * @throws IllPosedCaseException when that is so
+     */
+    public static void checkPosed(Enclosure enc) {
+        boolean anyFixed = enc.surfaces().stream().anyMatch(s -> !s.boundary().temperatureUnknown());
+        if (!anyFixed && enc.environment() == null) {
             throw new IllPosedCaseException("no surface has a fixed temperature and there is no environment:"
                     + " the temperature level is undetermined; fix at least one surface's temperature");
         }
