@@ -17,6 +17,8 @@ import java.util.Map;
 import java.util.Optional;
 import org.exitance.model.BandSet;
 import org.exitance.model.BoundaryCondition;
+import org.exitance.model.ConductiveLink;
+import org.exitance.model.Convection;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.Environment;
@@ -51,7 +53,7 @@ public final class CaseReader {
         return new Builder(file, JsonCursor.root(root, file)).build();
     }
 
-    private static JsonNode parse(Path file) throws CaseException {
+    static JsonNode parse(Path file) throws CaseException {
         if (!Files.exists(file)) {
             throw new CaseException(file, "", "file not found");
         }
@@ -129,19 +131,20 @@ public final class CaseReader {
 
         LoadedCase build() throws CaseException {
             root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "bands",
-                    "solver", "expected");
+                    "conductiveLinks", "solver", "expected");
             String title = root.optional("title").isPresent() ? root.field("title").text() : "";
             String notes = root.optional("notes").isPresent() ? root.field("notes").text() : "";
             Map<String, Material> materials = MaterialReader.readAll(root.field("materials"),
                     file.toAbsolutePath().getParent());
             List<EnclosureSurface> surfaces = surfaces(root.field("surfaces"), materials);
             Environment env = environment();
+            List<ConductiveLink> links = links(surfaces);
             double[][] f = viewFactors(root.field("viewFactors"), surfaces, env != null);
             BandSet bands = bands();
             SolverSettings settings = settings();
             Enclosure enclosure;
             try {
-                enclosure = new Enclosure(surfaces, f, env);
+                enclosure = new Enclosure(surfaces, f, env, links);
             } catch (IllegalArgumentException e) {
                 throw root.error(e.getMessage());
             }
@@ -161,7 +164,8 @@ public final class CaseReader {
             Map<String, String> seen = new LinkedHashMap<>();
             for (JsonCursor s : el) {
                 s.allowOnly("name", "material", "area_m2", "temperature_K", "temperature_C", "netHeat_W",
-                        "netFlux_W_m2", "adiabatic", "initialTemperature_K", "initialTemperature_C", "description");
+                        "netFlux_W_m2", "dissipation_W", "adiabatic", "convection", "initialTemperature_K",
+                        "initialTemperature_C", "description");
                 JsonCursor nameCursor = s.field("name");
                 String name = nameCursor.nonEmptyText();
                 if (seen.containsKey(name)) {
@@ -181,7 +185,8 @@ public final class CaseReader {
                 if (!Double.isNaN(initial) && !bc.temperatureUnknown()) {
                     throw s.error("initialTemperature is only for surfaces whose temperature is unknown");
                 }
-                out.add(new EnclosureSurface(name, m, area, bc, initial));
+                Convection convection = s.has("convection") ? convection(s.field("convection")) : null;
+                out.add(new EnclosureSurface(name, m, area, bc, initial, convection));
             }
             return out;
         }
@@ -190,7 +195,8 @@ public final class CaseReader {
             if (s.has("temperature_K") && s.has("temperature_C")) {
                 throw s.error("give temperature_K or temperature_C, not both");
             }
-            String which = s.exactlyOneOf("temperature_K", "temperature_C", "netHeat_W", "netFlux_W_m2", "adiabatic");
+            String which = s.exactlyOneOf("temperature_K", "temperature_C", "netHeat_W", "netFlux_W_m2",
+                    "dissipation_W", "adiabatic");
             switch (which) {
                 case "temperature_K":
                 case "temperature_C":
@@ -199,6 +205,8 @@ public final class CaseReader {
                     return new BoundaryCondition.FixedNetHeat(s.field("netHeat_W").number());
                 case "netFlux_W_m2":
                     return new BoundaryCondition.FixedNetFlux(s.field("netFlux_W_m2").number());
+                case "dissipation_W":
+                    return new BoundaryCondition.HeatInput(s.field("dissipation_W").number());
                 default:
                     JsonCursor a = s.field("adiabatic");
                     if (!a.bool()) {
@@ -206,6 +214,43 @@ public final class CaseReader {
                     }
                     return new BoundaryCondition.Adiabatic();
             }
+        }
+
+        private static Convection convection(JsonCursor c) throws CaseException {
+            c.allowOnly("coefficient_W_m2K", "fluidTemperature_K", "fluidTemperature_C");
+            double h = c.field("coefficient_W_m2K").nonNegative();
+            double tf = temperature(c, "fluidTemperature", false)
+                    .orElseThrow(() -> c.error("missing required key 'fluidTemperature_K' (or 'fluidTemperature_C')"));
+            return new Convection(h, tf);
+        }
+
+        private List<ConductiveLink> links(List<EnclosureSurface> surfaces) throws CaseException {
+            Optional<JsonCursor> o = root.optional("conductiveLinks");
+            if (o.isEmpty()) {
+                return List.of();
+            }
+            List<ConductiveLink> out = new ArrayList<>();
+            for (JsonCursor l : o.get().elements()) {
+                l.allowOnly("between", "conductance_W_K", "description");
+                JsonCursor between = l.field("between");
+                List<JsonCursor> ends = between.elements();
+                if (ends.size() != 2) {
+                    throw between.error("needs exactly two surface names, got " + ends.size());
+                }
+                String a = ends.get(0).text();
+                String b = ends.get(1).text();
+                for (int k = 0; k < 2; k++) {
+                    String name = k == 0 ? a : b;
+                    if (surfaces.stream().noneMatch(x -> x.name().equals(name))) {
+                        throw ends.get(k).error("no surface named '" + name + "'");
+                    }
+                }
+                if (a.equals(b)) {
+                    throw between.error("a conductive link needs two different surfaces");
+                }
+                out.add(new ConductiveLink(a, b, l.field("conductance_W_K").positive()));
+            }
+            return out;
         }
 
         private Environment environment() throws CaseException {

@@ -16,10 +16,19 @@ import java.util.Set;
  * @param surfaces     the surfaces, in case order
  * @param viewFactors  N×N matrix, copied
  * @param environment  the surroundings, or null for a closed enclosure
+ * @param links        conductive links between surfaces (by name)
  */
-public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment) {
+public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment,
+                        List<ConductiveLink> links) {
+
+    /** An enclosure without conductive links. */
+    public Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment) {
+        this(surfaces, viewFactors, environment, List.of());
+    }
+
     public Enclosure {
         surfaces = List.copyOf(surfaces);
+        links = List.copyOf(links);
         int n = surfaces.size();
         if (n == 0) {
             throw new IllegalArgumentException("an enclosure needs at least one surface");
@@ -42,6 +51,21 @@ public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors,
                 throw new IllegalArgumentException("duplicate surface name: " + s.name());
             }
         }
+        for (ConductiveLink l : links) {
+            if (!names.contains(l.surfaceA()) || !names.contains(l.surfaceB())) {
+                throw new IllegalArgumentException("conductive link names an unknown surface: " + l);
+            }
+        }
+    }
+
+    /** Index of the surface with this name, or −1. */
+    public int indexOf(String name) {
+        for (int i = 0; i < surfaces.size(); i++) {
+            if (surfaces.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        return -1;
     }
 
     public int size() {
@@ -94,6 +118,6 @@ public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors,
                 f[a][b] = viewFactors[order[a]][order[b]];
             }
         }
-        return new Enclosure(List.of(s), f, environment);
+        return new Enclosure(List.of(s), f, environment, links);
     }
 }

@@ -31,6 +31,7 @@ public final class SolveTableWriter {
         }
         t.render(0).forEach(out::println);
         out.println("  (net heat: radiation leaving the surface minus radiation it absorbs; positive = loses heat)");
+        writeOtherPaths(r, out);
         EnvironmentResult env = r.environment();
         if (env != null) {
             out.println();
@@ -46,6 +47,23 @@ public final class SolveTableWriter {
         }
         out.println();
         out.println(Caution.SHORT);
+    }
+
+    /** Convection, conduction and heat supplied, when any surface has them. */
+    private static void writeOtherPaths(SolveResult r, PrintStream out) {
+        boolean any = r.surfaces().stream().anyMatch(s -> s.convectionW() != 0 || s.conductionW() != 0);
+        if (!any) {
+            return;
+        }
+        out.println();
+        TextTable t = new TextTable(List.of("Surface", "Radiation W", "Convection W", "Conduction W", "Supplied W"),
+                new boolean[] {false, true, true, true, true});
+        for (SurfaceResult s : r.surfaces()) {
+            t.row(List.of(s.name(), Numbers.power(s.netHeatW()), Numbers.power(s.convectionW()),
+                    Numbers.power(s.conductionW()), Numbers.power(s.heatSuppliedW())));
+        }
+        out.println("Heat leaving each surface by path (supplied = what must be put in to hold it there):");
+        t.render(0).forEach(out::println);
     }
 
     private static void writeBands(SolveResult r, PrintStream out) {

@@ -13,8 +13,13 @@ package org.exitance.result;
  * @param netFluxWPerM2      net radiative flux leaving (W/m²)
  * @param bandNetHeatW       net heat per band (W); do not modify
  * @param bandEmissivity     band-mean emissivity per band at the solved temperature; do not modify
+ * @param convectionW        heat leaving by convection to its fluid (W); 0 without convection
+ * @param conductionW        heat leaving through conductive links (W); 0 without links
+ * @param heatSuppliedW      heat that must be supplied from outside the model to hold this state:
+ *                           radiation + convection + conduction (W)
  */
 public record SurfaceResult(String name, double areaM2, String boundary, double temperatureK,
                             boolean temperatureSolved, double netHeatW, double netFluxWPerM2,
-                            double[] bandNetHeatW, double[] bandEmissivity) {
+                            double[] bandNetHeatW, double[] bandEmissivity, double convectionW,
+                            double conductionW, double heatSuppliedW) {
 }

@@ -9,6 +9,7 @@ import org.exitance.bands.BandProperties;
 import org.exitance.model.Band;
 import org.exitance.model.BandSet;
 import org.exitance.model.BoundaryCondition;
+import org.exitance.model.ConductiveLink;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.RadiationCase;
@@ -157,7 +158,11 @@ public final class TemperatureSolver {
                     for (int k = 0; k < nb; k++) {
                         s += sens[k][b][ua] * BandProperties.emissivePowerDerivative(bands.get(k), t[u[b]]);
                     }
-                    jac.set(a, b, p.area[ua] * s);
+                    double other = 0;
+                    if (p.allPaths[a]) {
+                        other = a == b ? p.convG[ua] + p.linkSum[ua] : -p.linkBetween(ua, u[b]);
+                    }
+                    jac.set(a, b, p.area[ua] * s + other);
                 }
             }
             String dead = zeroColumn(p, jac);
@@ -240,6 +245,9 @@ public final class TemperatureSolver {
                 q += s.netFlux()[i];
             }
             r[a] = p.area[i] * q - p.target[a];
+            if (p.allPaths[a]) {
+                r[a] += p.convectionW(i, t[i]) + p.conductionW(i, t);
+            }
         }
         return r;
     }
@@ -287,16 +295,19 @@ public final class TemperatureSolver {
     }
 
     /**
-     * Rejects an enclosure whose temperature level nothing fixes: every temperature unknown and
-     * no environment.
+     * Rejects an enclosure whose temperature level nothing fixes: every temperature unknown, no
+     * environment, and no surface that convects (on an energy-balance condition) to a fluid.
      *
      * @throws IllPosedCaseException when that is so
      */
     public static void checkPosed(Enclosure enc) {
-        boolean anyFixed = enc.surfaces().stream().anyMatch(s -> !s.boundary().temperatureUnknown());
-        if (!anyFixed && enc.environment() == null) {
-            throw new IllPosedCaseException("no surface has a fixed temperature and there is no environment:"
-                    + " the temperature level is undetermined; fix at least one surface's temperature");
+        boolean anchored = enc.environment() != null || enc.surfaces().stream().anyMatch(s ->
+                !s.boundary().temperatureUnknown()
+                        || s.boundary().balancesAllPaths() && s.convectionConductanceWPerK() > 0);
+        if (!anchored) {
+            throw new IllPosedCaseException("no surface has a fixed temperature, none convects to a fluid and"
+                    + " there is no environment: the temperature level is undetermined; fix at least one"
+                    + " surface's temperature");
         }
     }
 
@@ -360,8 +371,10 @@ public final class TemperatureSolver {
                 scale += p.area[i] * Math.abs(states[k].radiosity()[i]);
             }
             total += q;
+            double conv = p.convectionW(i, t[i]);
+            double cond = p.conductionW(i, t);
             out.add(new SurfaceResult(s.name(), s.areaM2(), s.boundary().label(), t[i],
-                    s.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps));
+                    s.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond));
         }
         EnvironmentResult env = null;
         if (enc.environment() != null) {
@@ -379,8 +392,9 @@ public final class TemperatureSolver {
         }
         double residual = 0;
         for (int a = 0; a < p.unknown.length; a++) {
-            int i = p.unknown[a];
-            residual = Math.max(residual, Math.abs(out.get(i).netHeatW() - p.target[a]));
+            SurfaceResult sr = out.get(p.unknown[a]);
+            double achieved = p.allPaths[a] ? sr.heatSuppliedW() : sr.netHeatW();
+            residual = Math.max(residual, Math.abs(achieved - p.target[a]));
         }
         SolverReport report = new SolverReport(linearName, counters.newtonIterations, counters.propertyIterations,
                 residual, p.unknown.length == 0 ? 0 : counters.lastStep, counters.maxLinearIterations,
@@ -433,6 +447,16 @@ public final class TemperatureSolver {
         final double envT;
         final int[] unknown;
         final double[] target;
+        /** Per unknown: whether its target counts convection and conduction too. */
+        final boolean[] allPaths;
+        /** Per surface: h A (W/K) and the fluid temperature (K). */
+        final double[] convG;
+        final double[] fluidT;
+        /** Conductive links: ends and conductances (W/K); per surface the sum of its links' G. */
+        final int[] linkA;
+        final int[] linkB;
+        final double[] linkG;
+        final double[] linkSum;
 
         Problem(Enclosure enc, RadiositySolver linear) {
             this.enc = enc;
@@ -454,9 +478,60 @@ public final class TemperatureSolver {
             envT = enc.environment() == null ? 0.0 : enc.environment().temperatureK();
             unknown = u.stream().mapToInt(Integer::intValue).toArray();
             target = new double[unknown.length];
+            allPaths = new boolean[unknown.length];
             for (int a = 0; a < unknown.length; a++) {
                 target[a] = enc.surface(unknown[a]).boundary().targetNetHeatW(area[unknown[a]]);
+                allPaths[a] = enc.surface(unknown[a]).boundary().balancesAllPaths();
             }
+            convG = new double[n];
+            fluidT = new double[n];
+            for (int i = 0; i < n; i++) {
+                EnclosureSurface s = enc.surface(i);
+                convG[i] = s.convectionConductanceWPerK();
+                fluidT[i] = s.convection() == null ? 0.0 : s.convection().fluidTemperatureK();
+            }
+            int nl = enc.links().size();
+            linkA = new int[nl];
+            linkB = new int[nl];
+            linkG = new double[nl];
+            linkSum = new double[n];
+            for (int l = 0; l < nl; l++) {
+                ConductiveLink link = enc.links().get(l);
+                linkA[l] = enc.indexOf(link.surfaceA());
+                linkB[l] = enc.indexOf(link.surfaceB());
+                linkG[l] = link.conductanceWPerK();
+                linkSum[linkA[l]] += linkG[l];
+                linkSum[linkB[l]] += linkG[l];
+            }
+        }
+
+        /** Heat leaving surface i by convection at temperature ti (W). */
+        double convectionW(int i, double ti) {
+            return convG[i] * (ti - fluidT[i]);
+        }
+
+        /** Heat leaving surface i through its conductive links (W); t not modified. */
+        double conductionW(int i, double[] t) {
+            double q = 0;
+            for (int l = 0; l < linkG.length; l++) {
+                if (linkA[l] == i) {
+                    q += linkG[l] * (t[i] - t[linkB[l]]);
+                } else if (linkB[l] == i) {
+                    q += linkG[l] * (t[i] - t[linkA[l]]);
+                }
+            }
+            return q;
+        }
+
+        /** Total conductance of the links between surfaces i and j (W/K). */
+        double linkBetween(int i, int j) {
+            double g = 0;
+            for (int l = 0; l < linkG.length; l++) {
+                if (linkA[l] == i && linkB[l] == j || linkA[l] == j && linkB[l] == i) {
+                    g += linkG[l];
+                }
+            }
+            return g;
         }
     }
 
