@@ -6,53 +6,50 @@ package org.exitance.network;
  * Modest, Radiative Heat Transfer, 3rd ed., §5.3, band form §5.7):
  *
  * <pre>
- *   J_i = ε_i E_i + ρ_i G_i,   ρ_i = 1 − ε_i
+ *   J_i = ε_i E_i + ρ_i Σ_j F_ij J_j + R_i,   ρ_i = 1 − ε_i
  *   G_i = Σ_j F_ij J_j + H_i
- *   q_i = J_i − G_i = ε_i (E_i − G_i)
+ *   q_i = J_i − G_i
  * </pre>
  *
- * E_i is the band emissive power of surface i (W/m²), H_i the external irradiation reaching it
- * (W/m²): here the environment's band emissive power times the row remainder F_i,env. The
- * matrix {@code I − diag(ρ)F} is prepared once; every right-hand side after that costs one solve.
+ * E_i is the band emissive power of surface i (W/m²). H_i is the irradiation from outside the
+ * set of surfaces (the environment, the sun, a planet) and R_i the part of it that is reflected,
+ * {@code Σ_s (1 − α_s,i) H_s,i}: each external source is absorbed with a band absorptivity
+ * weighted by its own spectrum, radiation between surfaces with the band-mean ε_i. The matrix
+ * {@code I − diag(ρ)F} is prepared once; every right-hand side after that costs one solve.
  *
- * <p>Arrays passed in are not modified; the network keeps its own copies of ε and H but shares
+ * <p>Arrays passed in are not modified; the network keeps its own copies of ε, H and R but shares
  * the view-factor array (read only).
  */
 public final class BandNetwork {
     private final int n;
     private final double[] f;
-    private final double[] areasM2;
-    private final double[] envFactor;
     private final double[] eps;
     private final double[] rho;
-    private final double envEmissive;
     private final double[] irradiation;
+    private final double[] reflected;
     private final RadiositySolver.Prepared prepared;
 
     /**
      * @param viewFactors          F, N×N row-major (not modified, not copied)
      * @param n                    N
-     * @param areasM2              surface areas (m²)
-     * @param environmentFactors   F_i,env per surface (0 for a closed enclosure)
+     * @param areasM2              surface areas (m²), for the symmetric form of iterative solvers
      * @param emissivity           band-mean ε per surface in [0, 1]
-     * @param environmentEmissive  the environment's band emissive power (W/m²)
+     * @param externalIrradiation  H_i, band irradiation from outside the surfaces (W/m²)
+     * @param externalReflected    R_i, the reflected part of H_i (W/m²), 0 ≤ R_i ≤ H_i
      * @param solver               linear-solver strategy
      */
-    public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] environmentFactors,
-                       double[] emissivity, double environmentEmissive, RadiositySolver solver) {
+    public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] emissivity,
+                       double[] externalIrradiation, double[] externalReflected, RadiositySolver solver) {
         this.n = n;
         this.f = viewFactors;
-        this.areasM2 = areasM2.clone();
-        this.envFactor = environmentFactors.clone();
         this.eps = emissivity.clone();
         this.rho = new double[n];
-        this.irradiation = new double[n];
-        this.envEmissive = environmentEmissive;
+        this.irradiation = externalIrradiation.clone();
+        this.reflected = externalReflected.clone();
         for (int i = 0; i < n; i++) {
             rho[i] = 1.0 - eps[i];
-            irradiation[i] = envFactor[i] * environmentEmissive;
         }
-        this.prepared = solver.prepare(f, n, rho, this.areasM2);
+        this.prepared = solver.prepare(f, n, rho, areasM2.clone());
     }
 
     /**
@@ -64,24 +61,22 @@ public final class BandNetwork {
     public BandState solve(double[] emissive) {
         double[] b = new double[n];
         for (int i = 0; i < n; i++) {
-            b[i] = eps[i] * emissive[i] + rho[i] * irradiation[i];
+            b[i] = eps[i] * emissive[i] + reflected[i];
         }
         double[] j = new double[n];
         prepared.solve(b, j);
         double[] g = irradiationFrom(j, irradiation);
         double[] q = new double[n];
-        double envNet = 0;
         for (int i = 0; i < n; i++) {
-            q[i] = eps[i] * (emissive[i] - g[i]);
-            envNet += areasM2[i] * envFactor[i] * (envEmissive - j[i]);
+            q[i] = j[i] - g[i];
         }
-        return new BandState(j, g, q, envNet, prepared.lastIterations(), prepared.lastRelativeResidual());
+        return new BandState(j, g, q, prepared.lastIterations(), prepared.lastRelativeResidual());
     }
 
     /**
      * Sensitivity of every surface's net flux to surface k's emissive power, ∂q_i/∂E_k
      * (dimensionless), from one extra solve: {@code (I − ρF) x = ε_k e_k}, then
-     * {@code ∂q_i/∂E_k = ε_i (δ_ik − Σ_j F_ij x_j)}.
+     * {@code ∂q_i/∂E_k = x_i − Σ_j F_ij x_j}.
      *
      * @param k  the surface whose emission is perturbed
      * @return a new array of length N
@@ -94,7 +89,7 @@ public final class BandNetwork {
         double[] dg = irradiationFrom(x, new double[n]);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
-            out[i] = eps[i] * ((i == k ? 1.0 : 0.0) - dg[i]);
+            out[i] = x[i] - dg[i];
         }
         return out;
     }

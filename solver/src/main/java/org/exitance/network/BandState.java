@@ -6,10 +6,9 @@ package org.exitance.network;
  * @param radiosity             J_i
  * @param irradiation           G_i
  * @param netFlux               q_i = J_i − G_i, positive when surface i loses energy
- * @param environmentNetHeatW   net power leaving the environment into the enclosure in this band (W)
  * @param iterations            linear-solver iterations (1 for direct)
  * @param relativeResidual      linear-solver relative residual
  */
 public record BandState(double[] radiosity, double[] irradiation, double[] netFlux,
-                        double environmentNetHeatW, int iterations, double relativeResidual) {
+                        int iterations, double relativeResidual) {
 }

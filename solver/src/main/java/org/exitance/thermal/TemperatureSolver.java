@@ -22,6 +22,7 @@ import org.exitance.result.EnvironmentResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SolverReport;
 import org.exitance.result.SurfaceResult;
+import org.exitance.spectral.BandAverages;
 import org.exitance.spectral.PhysicalConstants;
 import org.exitance.spectral.Planck;
 
@@ -82,7 +83,7 @@ public final class TemperatureSolver {
         t = converge(p, bands, t, counters);
         // final state with converged properties
         double[][] eps = BandProperties.emissivities(enc.surfaces(), bands, t);
-        BandNetwork[] nets = networks(p, bands, eps);
+        BandNetwork[] nets = networks(p, bands, eps, t);
         BandState[] states = solveBands(p, bands, nets, t, counters);
         return assemble(p, bandSet, bands, eps, states, t, counters);
     }
@@ -98,7 +99,7 @@ public final class TemperatureSolver {
             counters.propertyIterations++;
             double[][] eps = BandProperties.emissivities(p.enc.surfaces(), bands, t);
             requireEmission(p, eps);
-            BandNetwork[] nets = networks(p, bands, eps);
+            BandNetwork[] nets = networks(p, bands, eps, t);
             double[] before = t.clone();
             t = newton(p, bands, nets, t, counters);
             double move = 0;
@@ -268,14 +269,43 @@ public final class TemperatureSolver {
         return states;
     }
 
-    private BandNetwork[] networks(Problem p, List<Band> bands, double[][] eps) {
+    /**
+     * One network per band at the current temperatures (K, not modified). The environment's
+     * irradiation is absorbed with the band absorptivity weighted by the environment's own
+     * blackbody spectrum, so that a cold sink is seen with its own spectrum.
+     */
+    private BandNetwork[] networks(Problem p, List<Band> bands, double[][] eps, double[] t) {
+        int n = p.enc.size();
         BandNetwork[] nets = new BandNetwork[bands.size()];
         for (int k = 0; k < nets.length; k++) {
             Band b = bands.get(k);
             double envE = p.envT > 0 ? Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), p.envT) : 0.0;
-            nets[k] = new BandNetwork(p.f, p.enc.size(), p.area, p.envFactor, eps[k], envE, linear);
+            double[] h = new double[n];
+            double[] refl = new double[n];
+            for (int i = 0; i < n; i++) {
+                h[i] = p.envFactor[i] * envE;
+                if (h[i] > 0) {
+                    double alpha = BandAverages.planckMean(p.enc.surface(i).material().emissivity(),
+                            b.lowerUm(), b.upperUm(), p.envT, t[i]);
+                    refl[i] = (1 - alpha) * h[i];
+                }
+            }
+            nets[k] = new BandNetwork(p.f, n, p.area, eps[k], h, refl, linear);
         }
         return nets;
+    }
+
+    /** Net power leaving the environment into the enclosure in one band (W). */
+    private static double environmentNetHeatW(Problem p, Band b, BandState s) {
+        if (p.enc.environment() == null) {
+            return 0.0;
+        }
+        double envE = p.envT > 0 ? Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), p.envT) : 0.0;
+        double q = 0;
+        for (int i = 0; i < p.area.length; i++) {
+            q += p.area[i] * p.envFactor[i] * (envE - s.radiosity()[i]);
+        }
+        return q;
     }
 
     private double heatTolerance(Problem p, double[] t) {
@@ -381,7 +411,7 @@ public final class TemperatureSolver {
             double[] bandQ = new double[nb];
             double q = 0;
             for (int k = 0; k < nb; k++) {
-                bandQ[k] = states[k].environmentNetHeatW();
+                bandQ[k] = environmentNetHeatW(p, bands.get(k), states[k]);
                 q += bandQ[k];
             }
             for (int i = 0; i < n; i++) {

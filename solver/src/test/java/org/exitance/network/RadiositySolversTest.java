@@ -78,7 +78,7 @@ class RadiositySolversTest {
             eps[i] = 0.1 + 0.8 * r.nextDouble();
             e[i] = 1e4 * r.nextDouble();
         }
-        BandNetwork net = new BandNetwork(f, n, area, new double[n], eps, 0, new DirectRadiositySolver());
+        BandNetwork net = new BandNetwork(f, n, area, eps, new double[n], new double[n], new DirectRadiositySolver());
         int k = n / 2;
         double[] sens = net.fluxSensitivity(k);
         double h = 1.0;

@@ -45,6 +45,22 @@ class TemperatureSolverTest {
     }
 
     @Test
+    void surroundingsAreAbsorbedWithTheirOwnSpectrumNotTheSurfaces() {
+        // Small convex body in large surroundings, non-gray: it emits ε(T) σT⁴ and absorbs
+        // α(T_sur) σT_sur⁴, where α is the total absorptivity for blackbody irradiation at T_sur
+        // (Incropera et al., 6th ed., §12.7 and Eq. 13.27; Kirchhoff for a diffuse surface).
+        // For a step surface (0.9 below 3 µm, 0.2 above) both follow from the blackbody fraction.
+        SpectralEmissivity step = new TabulatedEmissivity(new double[] {3, Math.nextUp(3.0)}, new double[] {0.9, 0.2});
+        double t = 1200;
+        double tSur = 300;
+        SolveResult r = plateToSurroundings(step, new BoundaryCondition.FixedTemperature(t), tSur, BandSet.gray("t"));
+        double epsT = 0.2 + 0.7 * org.exitance.spectral.Planck.fractionBelow(3 * t);
+        double alphaSur = 0.2 + 0.7 * org.exitance.spectral.Planck.fractionBelow(3 * tSur);
+        double expected = 1.5 * SIGMA * (epsT * Math.pow(t, 4) - alphaSur * Math.pow(tSur, 4));
+        assertThat(r.surface("plate").netHeatW()).isCloseTo(expected, within(1e-9 * expected));
+    }
+
+    @Test
     void temperatureDependentEmissivityIsUpdatedToConvergence() {
         // ε(T) = 0.3 at 300 K rising linearly to 0.6 at 900 K, gray at each temperature; the plate
         // dissipates q = 20 kW/m² to a 0 K sink: q = ε(T) σ T⁴, solved independently with Apache
