@@ -18,6 +18,20 @@ final class OutputTarget {
     private OutputTarget() {
     }
 
+    /**
+     * A temporary file is created owner-only; give the result the permissions of the file it
+     * replaces, or rw-r--r-- for a new file (where the file system has POSIX permissions).
+     */
+    static void keepUsualPermissions(Path tmp, Path target) throws IOException {
+        if (!Files.getFileStore(tmp).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+            return;
+        }
+        java.util.Set<java.nio.file.attribute.PosixFilePermission> perms = Files.exists(target)
+                ? Files.getPosixFilePermissions(target)
+                : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(tmp, perms);
+    }
+
     /** Writes text produced by {@code body} to stdout (file == null) or to the file. */
     static void write(Path file, boolean force, PrintStream stdout, java.util.function.Consumer<PrintStream> body) {
         if (file == null) {
@@ -39,6 +53,7 @@ final class OutputTarget {
                 Files.deleteIfExists(tmp);
                 throw e;
             }
+            keepUsualPermissions(tmp, file);
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         } catch (IOException e) {
             throw new UserError(file + ": cannot write: " + e.getMessage(), ExitCodes.BAD_INPUT);

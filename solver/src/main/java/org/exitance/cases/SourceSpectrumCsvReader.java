@@ -1,0 +1,133 @@
+package org.exitance.cases;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.dataformat.csv.CsvMapper;
+import com.fasterxml.jackson.dataformat.csv.CsvParser;
+import com.fasterxml.jackson.dataformat.csv.CsvSchema;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.exitance.properties.SourceSpectrum;
+
+/**
+ * Reads a source spectrum from a CSV file (Jackson's CSV module):
+ * <pre>
+ *   # comment lines start with '#'
+ *   wavelength_um,irradiance_W_m2_um
+ *   0.30,510.0
+ *   0.50,1950.0
+ * </pre>
+ * Wavelengths in µm, at least two, strictly increasing; spectral irradiance in W/(m²·µm), ≥ 0,
+ * not all zero. Every error is a {@link CaseException} naming the file and, where there is one,
+ * the line.
+ */
+public final class SourceSpectrumCsvReader {
+    /** The required header. */
+    public static final String HEADER = "wavelength_um,irradiance_W_m2_um";
+
+    private SourceSpectrumCsvReader() {
+    }
+
+    /** Reads the file; the spectrum's label is the file name. */
+    public static SourceSpectrum read(Path csv) throws CaseException {
+        if (!Files.exists(csv)) {
+            throw new CaseException(csv, "", "file not found");
+        }
+        if (!Files.isRegularFile(csv)) {
+            throw new CaseException(csv, "", "not a regular file");
+        }
+        if (headerLine(csv) < 0) {
+            throw new CaseException(csv, "", "empty: the first line that is not a comment must be '" + HEADER + "'");
+        }
+        CsvMapper mapper = new CsvMapper();
+        mapper.enable(CsvParser.Feature.TRIM_SPACES);
+        mapper.enable(CsvParser.Feature.SKIP_EMPTY_LINES);
+        mapper.enable(CsvParser.Feature.ALLOW_COMMENTS);
+        CsvSchema schema = CsvSchema.emptySchema().withHeader().withComments();
+        List<Map<String, String>> rows = new ArrayList<>();
+        List<Integer> lines = new ArrayList<>();
+        List<String> header = new ArrayList<>();
+        try (MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(csv.toFile())) {
+            while (it.hasNextValue()) {
+                int line = it.getCurrentLocation().getLineNr();
+                rows.add(it.nextValue());
+                lines.add(line);
+            }
+            ((CsvSchema) it.getParserSchema()).forEach(c -> header.add(c.getName()));
+        } catch (JsonProcessingException e) {
+            int line = e.getLocation() == null ? -1 : e.getLocation().getLineNr();
+            String where = line > 0 ? "line " + line + ": " : "";
+            throw new CaseException(csv, "", where + "unreadable CSV: " + PropertyCsvReader.oneLine(e.getOriginalMessage()));
+        } catch (IOException | RuntimeException e) {
+            throw new CaseException(csv, "", "unreadable CSV: " + PropertyCsvReader.oneLine(e.getMessage()));
+        }
+        if (!String.join(",", header).equals(HEADER)) {
+            throw new CaseException(csv, "", "line " + headerLine(csv) + ": header must be '" + HEADER + "', got '"
+                    + String.join(",", header) + "'");
+        }
+        if (rows.size() < 2) {
+            throw new CaseException(csv, "", "needs at least two data rows, got " + rows.size());
+        }
+        double[] w = new double[rows.size()];
+        double[] g = new double[rows.size()];
+        for (int r = 0; r < rows.size(); r++) {
+            int line = lines.get(r);
+            if (rows.get(r).size() > 2) {
+                throw new CaseException(csv, "", "line " + line + ": more than two values");
+            }
+            w[r] = number(csv, line, "wavelength_um", rows.get(r));
+            g[r] = number(csv, line, "irradiance_W_m2_um", rows.get(r));
+            if (!(w[r] > 0)) {
+                throw new CaseException(csv, "", "line " + line + ": wavelength_um must be positive, got " + w[r]);
+            }
+            if (r > 0 && !(w[r] > w[r - 1])) {
+                throw new CaseException(csv, "", "line " + line + ": wavelengths must increase, got " + w[r]
+                        + " µm after " + w[r - 1] + " µm");
+            }
+            if (g[r] < 0) {
+                throw new CaseException(csv, "", "line " + line + ": irradiance_W_m2_um must not be negative, got " + g[r]);
+            }
+        }
+        try {
+            return new SourceSpectrum(csv.getFileName().toString(), w, g);
+        } catch (IllegalArgumentException e) {
+            throw new CaseException(csv, "", e.getMessage());
+        }
+    }
+
+    private static double number(Path csv, int line, String column, Map<String, String> row) throws CaseException {
+        String s = row.get(column);
+        if (s == null || s.isEmpty()) {
+            throw new CaseException(csv, "", "line " + line + ": missing value for " + column);
+        }
+        try {
+            double v = Double.parseDouble(s);
+            if (Double.isFinite(v)) {
+                return v;
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new CaseException(csv, "", "line " + line + ": " + column + " is not a finite number: '" + s + "'");
+    }
+
+    /** The line of the header: the first line that is neither blank nor a comment; -1 if there is none. */
+    private static int headerLine(Path csv) {
+        try {
+            List<String> all = Files.readAllLines(csv);
+            for (int i = 0; i < all.size(); i++) {
+                String t = all.get(i).trim();
+                if (!t.isEmpty() && !t.startsWith("#")) {
+                    return i + 1;
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            return 1; // unreadable here: the parser reports why
+        }
+        return -1;
+    }
+}
