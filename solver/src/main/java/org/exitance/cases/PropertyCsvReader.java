@@ -66,7 +66,7 @@ final class PropertyCsvReader {
         List<String> expected = withT ? List.of("temperature_K", "wavelength_um", "emissivity")
                 : List.of("wavelength_um", "emissivity");
         if (!header.equals(expected)) {
-            throw new CaseException(csv, "", "line " + headerLine(csv) + ": header must be 'wavelength_um,emissivity'"
+            throw new CaseException(csv, "", "line " + Math.max(1, CsvCells.headerLine(csv)) + ": header must be 'wavelength_um,emissivity'"
                     + " or 'temperature_K,wavelength_um,emissivity', got '" + String.join(",", header) + "'");
         }
         if (rows.isEmpty()) {
@@ -77,12 +77,12 @@ final class PropertyCsvReader {
         for (int r = 0; r < rows.size(); r++) {
             Map<String, String> row = rows.get(r);
             int line = lines.get(r);
-            double t = withT ? parse(csv, line, "temperature_K", row) : Double.NaN;
+            double t = withT ? CsvCells.number(csv, line, "temperature_K", row) : Double.NaN;
             if (withT && !(t > 0)) {
                 throw new CaseException(csv, "", "line " + line + ": temperature_K must be above 0 K, got " + t);
             }
-            double w = parse(csv, line, "wavelength_um", row);
-            double e = parse(csv, line, "emissivity", row);
+            double w = CsvCells.number(csv, line, "wavelength_um", row);
+            double e = CsvCells.number(csv, line, "emissivity", row);
             byT.computeIfAbsent(t, k -> new ArrayList<>()).add(new double[] {w, e, line});
             firstLine.putIfAbsent(t, line);
         }
@@ -112,37 +112,6 @@ final class PropertyCsvReader {
         return out;
     }
 
-    private static double parse(Path csv, int line, String column, Map<String, String> row) throws CaseException {
-        String s = row.get(column);
-        if (s == null || s.isEmpty()) {
-            throw new CaseException(csv, "", "line " + line + ": missing value for " + column);
-        }
-        try {
-            double v = Double.parseDouble(s);
-            if (!Double.isFinite(v)) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new CaseException(csv, "", "line " + line + ": " + column + " is not a number: '" + s + "'");
-        }
-    }
-
-    /** The line of the header: the first line that is neither blank nor a comment. */
-    private static int headerLine(Path csv) {
-        try {
-            List<String> all = Files.readAllLines(csv);
-            for (int i = 0; i < all.size(); i++) {
-                String t = all.get(i).trim();
-                if (!t.isEmpty() && !t.startsWith("#")) {
-                    return i + 1;
-                }
-            }
-        } catch (IOException | RuntimeException e) {
-            // fall through: the header is on the first line unless comments precede it
-        }
-        return 1;
-    }
 
     static String oneLine(String s) {
         if (s == null) {

@@ -40,7 +40,7 @@ public final class SourceSpectrumCsvReader {
         if (!Files.isRegularFile(csv)) {
             throw new CaseException(csv, "", "not a regular file");
         }
-        if (headerLine(csv) < 0) {
+        if (CsvCells.headerLine(csv) < 0) {
             throw new CaseException(csv, "", "empty: the first line that is not a comment must be '" + HEADER + "'");
         }
         CsvMapper mapper = new CsvMapper();
@@ -66,7 +66,7 @@ public final class SourceSpectrumCsvReader {
             throw new CaseException(csv, "", "unreadable CSV: " + PropertyCsvReader.oneLine(e.getMessage()));
         }
         if (!String.join(",", header).equals(HEADER)) {
-            throw new CaseException(csv, "", "line " + headerLine(csv) + ": header must be '" + HEADER + "', got '"
+            throw new CaseException(csv, "", "line " + CsvCells.headerLine(csv) + ": header must be '" + HEADER + "', got '"
                     + String.join(",", header) + "'");
         }
         if (rows.size() < 2) {
@@ -79,8 +79,8 @@ public final class SourceSpectrumCsvReader {
             if (rows.get(r).size() > 2) {
                 throw new CaseException(csv, "", "line " + line + ": more than two values");
             }
-            w[r] = number(csv, line, "wavelength_um", rows.get(r));
-            g[r] = number(csv, line, "irradiance_W_m2_um", rows.get(r));
+            w[r] = CsvCells.number(csv, line, "wavelength_um", rows.get(r));
+            g[r] = CsvCells.number(csv, line, "irradiance_W_m2_um", rows.get(r));
             if (!(w[r] > 0)) {
                 throw new CaseException(csv, "", "line " + line + ": wavelength_um must be positive, got " + w[r]);
             }
@@ -99,35 +99,4 @@ public final class SourceSpectrumCsvReader {
         }
     }
 
-    private static double number(Path csv, int line, String column, Map<String, String> row) throws CaseException {
-        String s = row.get(column);
-        if (s == null || s.isEmpty()) {
-            throw new CaseException(csv, "", "line " + line + ": missing value for " + column);
-        }
-        try {
-            double v = Double.parseDouble(s);
-            if (Double.isFinite(v)) {
-                return v;
-            }
-        } catch (NumberFormatException e) {
-            // reported below
-        }
-        throw new CaseException(csv, "", "line " + line + ": " + column + " is not a finite number: '" + s + "'");
-    }
-
-    /** The line of the header: the first line that is neither blank nor a comment; -1 if there is none. */
-    private static int headerLine(Path csv) {
-        try {
-            List<String> all = Files.readAllLines(csv);
-            for (int i = 0; i < all.size(); i++) {
-                String t = all.get(i).trim();
-                if (!t.isEmpty() && !t.startsWith("#")) {
-                    return i + 1;
-                }
-            }
-        } catch (IOException | RuntimeException e) {
-            return 1; // unreadable here: the parser reports why
-        }
-        return -1;
-    }
 }
