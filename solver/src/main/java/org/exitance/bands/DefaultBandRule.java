@@ -6,7 +6,11 @@ import java.util.TreeSet;
 import org.exitance.model.BandSet;
 import org.exitance.model.BoundaryCondition;
 import org.exitance.model.EnclosureSurface;
+import org.exitance.model.ExternalSource;
 import org.exitance.model.RadiationCase;
+import org.exitance.properties.BlackbodySource;
+import org.exitance.properties.SourceSpectrum;
+import org.exitance.spectral.PhysicalConstants;
 import org.exitance.spectral.SpectralEmissivity;
 
 /**
@@ -16,7 +20,9 @@ import org.exitance.spectral.SpectralEmissivity;
  * <ol>
  *   <li>If every surface material is gray, one band (the gray solution is then exact).</li>
  *   <li>Planck edges: for the lowest and the highest temperature in the case (fixed surface
- *       temperatures, initial guesses, the environment if above 0 K), the wavelengths where
+ *       temperatures, initial guesses, the environment if above 0 K, blackbody sources, and for a
+ *       tabulated source the temperature whose Wien peak matches the spectrum's peak), the
+ *       wavelengths where
  *       λT = 1,500, 2,500, 4,000, 7,000 and 15,000 µm·K (blackbody fractions about 1.4 %, 16 %,
  *       48 %, 81 % and 97 %).</li>
  *   <li>Property edges: every node of every non-gray property table that lies where the case's
@@ -55,6 +61,12 @@ public final class DefaultBandRule {
                 tMin = Math.min(tMin, s.initialTemperatureK());
                 tMax = Math.max(tMax, s.initialTemperatureK());
             }
+        }
+        for (ExternalSource src : c.sources()) {
+            double ts = src.spectrum() instanceof BlackbodySource bb ? bb.temperatureK()
+                    : PhysicalConstants.WIEN_UM_K / peakWavelengthUm((SourceSpectrum) src.spectrum());
+            tMin = Math.min(tMin, ts);
+            tMax = Math.max(tMax, ts);
         }
         if (c.enclosure().environment() != null && c.enclosure().environment().temperatureK() > 0) {
             tMin = Math.min(tMin, c.enclosure().environment().temperatureK());
@@ -95,6 +107,19 @@ public final class DefaultBandRule {
         }
         double[] out = kept.stream().mapToDouble(Double::doubleValue).toArray();
         return new BandSet(out, "default rule (Planck and property edges)");
+    }
+
+    /** Wavelength of the largest sample of a tabulated spectrum (µm). */
+    private static double peakWavelengthUm(SourceSpectrum s) {
+        double[] w = s.wavelengthUm();
+        double[] g = s.irradianceWM2PerUm();
+        int best = 0;
+        for (int i = 1; i < g.length; i++) {
+            if (g[i] > g[best]) {
+                best = i;
+            }
+        }
+        return w[best];
     }
 
     /** Rounds Planck edges to 4 significant digits so printed edges are the edges used. */

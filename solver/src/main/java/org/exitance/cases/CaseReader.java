@@ -22,6 +22,7 @@ import org.exitance.model.Convection;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.Environment;
+import org.exitance.model.ExternalSource;
 import org.exitance.model.Material;
 import org.exitance.model.RadiationCase;
 import org.exitance.model.SolverSettings;
@@ -131,7 +132,7 @@ public final class CaseReader {
 
         LoadedCase build() throws CaseException {
             root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "bands",
-                    "conductiveLinks", "solver", "expected");
+                    "conductiveLinks", "sources", "solver", "expected");
             String title = root.optional("title").isPresent() ? root.field("title").text() : "";
             String notes = root.optional("notes").isPresent() ? root.field("notes").text() : "";
             Map<String, Material> materials = MaterialReader.readAll(root.field("materials"),
@@ -148,11 +149,20 @@ public final class CaseReader {
             } catch (IllegalArgumentException e) {
                 throw root.error(e.getMessage());
             }
+            List<ExternalSource> sources = root.has("sources")
+                    ? SourceReader.read(root.field("sources"), surfaceNames(surfaces), file.toAbsolutePath().getParent())
+                    : List.of();
             RadiationCase model = new RadiationCase(title, notes, new ArrayList<>(materials.values()), enclosure,
-                    bands, settings);
+                    bands, settings, sources);
             ExpectedValues expected = root.has("expected")
                     ? expected(root.field("expected"), surfaces, env) : null;
             return new LoadedCase(file, model, warnings, expected);
+        }
+
+        private static java.util.Set<String> surfaceNames(List<EnclosureSurface> surfaces) {
+            java.util.Set<String> names = new java.util.HashSet<>();
+            surfaces.forEach(x -> names.add(x.name()));
+            return names;
         }
 
         private List<EnclosureSurface> surfaces(JsonCursor arr, Map<String, Material> materials) throws CaseException {

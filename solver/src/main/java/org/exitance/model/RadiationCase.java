@@ -13,22 +13,31 @@ import java.util.Objects;
  * @param enclosure  surfaces, view factors, environment
  * @param bands      the band set given by the case, or null for the default rule
  * @param settings   solver settings
+ * @param sources    radiation arriving from outside the surfaces (sun, planet, lamp)
  */
 public record RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure,
-                            BandSet bands, SolverSettings settings) {
+                            BandSet bands, SolverSettings settings, List<ExternalSource> sources) {
+
+    /** A case without external sources. */
+    public RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure, BandSet bands,
+                         SolverSettings settings) {
+        this(title, notes, materials, enclosure, bands, settings, List.of());
+    }
+
     public RadiationCase {
         title = title == null ? "" : title;
         notes = notes == null ? "" : notes;
         materials = List.copyOf(materials);
+        sources = List.copyOf(sources);
         Objects.requireNonNull(enclosure, "enclosure");
         Objects.requireNonNull(settings, "settings");
     }
 
     public RadiationCase withBands(BandSet newBands) {
-        return new RadiationCase(title, notes, materials, enclosure, newBands, settings);
+        return new RadiationCase(title, notes, materials, enclosure, newBands, settings, sources);
     }
 
     public RadiationCase withEnclosure(Enclosure newEnclosure) {
-        return new RadiationCase(title, notes, materials, newEnclosure, bands, settings);
+        return new RadiationCase(title, notes, materials, newEnclosure, bands, settings, sources);
     }
 }

@@ -38,4 +38,14 @@ public record BlackbodySource(double temperatureK) implements IrradiationSource 
     public double absorptivity(SpectralEmissivity e, double surfaceTemperatureK) {
         return BandAverages.totalAbsorptivity(e, surfaceTemperatureK, temperatureK);
     }
+
+    @Override
+    public double bandFraction(double lowerUm, double upperUm) {
+        return org.exitance.spectral.Planck.bandFraction(lowerUm, upperUm, temperatureK);
+    }
+
+    @Override
+    public double bandAbsorptivity(SpectralEmissivity e, double lowerUm, double upperUm, double surfaceTemperatureK) {
+        return BandAverages.planckMean(e, lowerUm, upperUm, temperatureK, surfaceTemperatureK);
+    }
 }

@@ -15,4 +15,15 @@ public sealed interface IrradiationSource permits BlackbodySource, SourceSpectru
 
     /** Total absorptivity in [0, 1] of a diffuse surface with emissivity {@code e} at {@code surfaceTemperatureK}. */
     double absorptivity(SpectralEmissivity e, double surfaceTemperatureK);
+
+    /** Share in [0, 1] of the source's power in the band [lowerUm, upperUm] (upper may be +∞). */
+    double bandFraction(double lowerUm, double upperUm);
+
+    /**
+     * Absorptivity in [0, 1] of a diffuse surface for the source's radiation within one band:
+     * {@code ∫_band ε G_λ dλ / ∫_band G_λ dλ}. Where the source has no power in the band, the
+     * value does not matter to any heat flow; the Planck mean at the surface temperature is
+     * returned then.
+     */
+    double bandAbsorptivity(SpectralEmissivity e, double lowerUm, double upperUm, double surfaceTemperatureK);
 }

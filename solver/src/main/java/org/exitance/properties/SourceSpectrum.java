@@ -104,6 +104,32 @@ public record SourceSpectrum(String label, double[] wavelengthUm, double[] irrad
     }
 
     @Override
+    public double bandFraction(double lowerUm, double upperUm) {
+        double[] parts = SpectrumAbsorptivity.bandIntegrals(new org.exitance.spectral.GrayEmissivity(1.0), 300.0, this,
+                lowerUm, upperUm);
+        return Math.min(1.0, parts[1] / totalIrradianceWM2());
+    }
+
+    @Override
+    public double bandAbsorptivity(SpectralEmissivity e, double lowerUm, double upperUm, double surfaceTemperatureK) {
+        double[] parts = SpectrumAbsorptivity.bandIntegrals(e, surfaceTemperatureK, this, lowerUm, upperUm);
+        if (!(parts[1] > 0)) {
+            return org.exitance.spectral.BandAverages.planckMean(e, lowerUm, upperUm, surfaceTemperatureK);
+        }
+        return Math.min(1.0, Math.max(0.0, parts[0] / parts[1]));
+    }
+
+    /** A spectrum of the same shape scaled to a total irradiance (W/m²). */
+    public SourceSpectrum scaledTo(double totalWM2) {
+        double k = totalWM2 / totalIrradianceWM2();
+        double[] g = irradianceWM2PerUm.clone();
+        for (int i = 0; i < g.length; i++) {
+            g[i] *= k;
+        }
+        return new SourceSpectrum(label, wavelengthUm, g);
+    }
+
+    @Override
     public boolean equals(Object o) {
         return o instanceof SourceSpectrum s && label.equals(s.label) && Arrays.equals(wavelengthUm, s.wavelengthUm)
                 && Arrays.equals(irradianceWM2PerUm, s.irradianceWM2PerUm);

@@ -25,36 +25,69 @@ public final class SpectrumAbsorptivity {
 
     /** α in [0, 1] of emissivity {@code e} at {@code surfaceTemperatureK} (K, &gt; 0) for {@code spectrum}. */
     public static double of(SpectralEmissivity e, double surfaceTemperatureK, SourceSpectrum spectrum) {
-        if (!(surfaceTemperatureK > 0) || !Double.isFinite(surfaceTemperatureK)) {
-            throw new IllegalArgumentException("surface temperature must be finite and above 0 K, got "
-                    + surfaceTemperatureK);
-        }
+        requireTemperature(surfaceTemperatureK);
         if (e.isGray()) {
             return e.at(1.0, surfaceTemperatureK);
         }
-        double[] nodes = mergedNodes(spectrum, e.breakpointsUm());
+        double[] parts = bandIntegrals(e, surfaceTemperatureK, spectrum, 0.0, Double.POSITIVE_INFINITY);
+        double alpha = parts[0] / spectrum.totalIrradianceWM2();
+        return Math.min(1.0, Math.max(0.0, alpha));
+    }
+
+    /**
+     * The two integrals of a band [lowerUm, upperUm] (upper may be +∞): {@code ∫ ε G_λ dλ} and
+     * {@code ∫ G_λ dλ}, both in W/m², exact by Simpson's rule on the merged nodes.
+     *
+     * @return a new array {∫ε G dλ, ∫G dλ}
+     */
+    public static double[] bandIntegrals(SpectralEmissivity e, double surfaceTemperatureK, SourceSpectrum spectrum,
+                                         double lowerUm, double upperUm) {
+        requireTemperature(surfaceTemperatureK);
+        double lo = Math.max(lowerUm, spectrum.firstUm());
+        double hi = Math.min(upperUm, spectrum.lastUm());
+        if (!(hi > lo)) {
+            return new double[] {0.0, 0.0};
+        }
+        double[] nodes = mergedNodes(spectrum, e.breakpointsUm(), lo, hi);
         double num = 0;
-        double prevEg = e.at(nodes[0], surfaceTemperatureK) * spectrum.irradianceAt(nodes[0]);
+        double den = 0;
+        double prevG = spectrum.irradianceAt(nodes[0]);
+        double prevEg = e.at(nodes[0], surfaceTemperatureK) * prevG;
         for (int i = 1; i < nodes.length; i++) {
             double a = nodes[i - 1];
             double b = nodes[i];
             double m = 0.5 * (a + b);
-            double mid = e.at(m, surfaceTemperatureK) * spectrum.irradianceAt(m);
-            double end = e.at(b, surfaceTemperatureK) * spectrum.irradianceAt(b);
+            double gm = spectrum.irradianceAt(m);
+            double gb = spectrum.irradianceAt(b);
+            double mid = e.at(m, surfaceTemperatureK) * gm;
+            double end = e.at(b, surfaceTemperatureK) * gb;
             num += (b - a) / 6.0 * (prevEg + 4.0 * mid + end);
+            den += (b - a) / 6.0 * (prevG + 4.0 * gm + gb);
             prevEg = end;
+            prevG = gb;
         }
-        double alpha = num / spectrum.totalIrradianceWM2();
-        return Math.min(1.0, Math.max(0.0, alpha));
+        return new double[] {num, den};
     }
 
-    /** The spectrum's samples and the emissivity breakpoints that fall strictly inside its range, sorted. */
-    private static double[] mergedNodes(SourceSpectrum s, double[] breakpoints) {
+    private static void requireTemperature(double surfaceTemperatureK) {
+        if (!(surfaceTemperatureK > 0) || !Double.isFinite(surfaceTemperatureK)) {
+            throw new IllegalArgumentException("surface temperature must be finite and above 0 K, got "
+                    + surfaceTemperatureK);
+        }
+    }
+
+    /** lo, hi, and the spectrum's samples and emissivity breakpoints strictly inside (lo, hi), sorted. */
+    private static double[] mergedNodes(SourceSpectrum s, double[] breakpoints, double lo, double hi) {
         double[] w = s.wavelengthUm();
-        double lo = s.firstUm();
-        double hi = s.lastUm();
-        double[] all = Arrays.copyOf(w, w.length + breakpoints.length);
-        int n = w.length;
+        double[] all = new double[w.length + breakpoints.length + 2];
+        int n = 0;
+        all[n++] = lo;
+        all[n++] = hi;
+        for (double x : w) {
+            if (x > lo && x < hi) {
+                all[n++] = x;
+            }
+        }
         for (double b : breakpoints) {
             if (b > lo && b < hi) {
                 all[n++] = b;

@@ -68,6 +68,14 @@ public final class SolveJsonWriter {
         } else {
             root.putNull("environment");
         }
+        ArrayNode src = root.putArray("sources");
+        for (var x : r.sources()) {
+            ObjectNode o = src.addObject();
+            o.put("name", x.name());
+            o.put("spectrum", x.spectrum());
+            o.put("incident_W", x.incidentW());
+            o.put("absorbedOnArrival_W", x.absorbedW());
+        }
         root.put("energyBalance_W", r.energyBalanceW());
         root.put("energyBalanceRelative", r.relativeEnergyBalance());
         root.put("energyScale_W", r.energyScaleW());

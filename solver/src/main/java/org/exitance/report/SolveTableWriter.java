@@ -32,6 +32,10 @@ public final class SolveTableWriter {
         t.render(0).forEach(out::println);
         out.println("  (net heat: radiation leaving the surface minus radiation it absorbs; positive = loses heat)");
         writeOtherPaths(r, out);
+        for (var src : r.sources()) {
+            out.println("Source '" + src.name() + "' (" + src.spectrum() + "): " + Numbers.power(src.incidentW())
+                    + " W arrives, " + Numbers.power(src.absorbedW()) + " W absorbed where it lands, the rest reflected");
+        }
         EnvironmentResult env = r.environment();
         if (env != null) {
             out.println();
@@ -132,6 +136,7 @@ public final class SolveTableWriter {
     private static void writeBalance(SolveResult r, PrintStream out) {
         double rel = r.relativeEnergyBalance();
         out.println("Energy balance: Σ net heat" + (r.environment() != null ? " (surfaces + environment)" : "")
+                + (r.sources().isEmpty() ? "" : " + source power")
                 + " = " + Numbers.small(r.energyBalanceW()) + " W, " + Numbers.small(rel) + " of "
                 + Numbers.power(r.energyScaleW()) + " W in play — "
                 + (rel <= BALANCE_WARNING ? "closes" : "DOES NOT CLOSE (check view-factor closure and reciprocity)"));

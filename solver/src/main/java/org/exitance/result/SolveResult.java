@@ -11,16 +11,20 @@ import org.exitance.model.Band;
  * @param bandOrigin         how the bands were chosen
  * @param surfaces           one result per surface, in case order
  * @param environment        the environment's result, or null for a closed enclosure
- * @param energyBalanceW     Σ_i Q_i + Q_env: zero for an exact, reciprocal network (W)
- * @param energyScaleW       the power that balance is measured against: Σ_i A_i Σ_k J_ik (W)
+ * @param energyBalanceW     Σ_i Q_i + Q_env + P_ext (P_ext: power arriving from external sources):
+ *                           zero for an exact, reciprocal network (W)
+ * @param energyScaleW       the power that balance is measured against: Σ_i A_i Σ_k J_ik plus the
+ *                           environment's emission into the enclosure and P_ext (W)
  * @param solver             convergence report
+ * @param sources            external sources and what they delivered
  */
 public record SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
                           EnvironmentResult environment, double energyBalanceW, double energyScaleW,
-                          SolverReport solver) {
+                          SolverReport solver, List<SourceResult> sources) {
     public SolveResult {
         bands = List.copyOf(bands);
         surfaces = List.copyOf(surfaces);
+        sources = List.copyOf(sources);
     }
 
     /** |energy balance| relative to the scale. */

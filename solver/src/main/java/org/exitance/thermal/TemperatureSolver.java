@@ -12,6 +12,7 @@ import org.exitance.model.BoundaryCondition;
 import org.exitance.model.ConductiveLink;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
+import org.exitance.model.ExternalSource;
 import org.exitance.model.RadiationCase;
 import org.exitance.model.SolverSettings;
 import org.exitance.network.BandNetwork;
@@ -21,10 +22,12 @@ import org.exitance.network.RadiositySolver;
 import org.exitance.result.EnvironmentResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SolverReport;
+import org.exitance.result.SourceResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.spectral.BandAverages;
 import org.exitance.spectral.PhysicalConstants;
 import org.exitance.spectral.Planck;
+import org.exitance.spectral.SpectralEmissivity;
 
 /**
  * Band-wise radiosity solve with unknown temperatures.
@@ -74,7 +77,7 @@ public final class TemperatureSolver {
         List<Band> bands = bandSet.bands();
         Problem p = new Problem(enc, linear);
         checkPosed(enc);
-        double[] t = startingTemperatures(p);
+        double[] t = startingTemperatures(p, radiationCase.sources());
         Counters counters = new Counters();
         if (p.unknown.length > 0 && bands.size() > 1) {
             // gray start: one band, total hemispherical emissivity at each temperature
@@ -270,9 +273,9 @@ public final class TemperatureSolver {
     }
 
     /**
-     * One network per band at the current temperatures (K, not modified). The environment's
-     * irradiation is absorbed with the band absorptivity weighted by the environment's own
-     * blackbody spectrum, so that a cold sink is seen with its own spectrum.
+     * One network per band at the current temperatures (K, not modified). External irradiation
+     * (the environment, sources) is absorbed with the band absorptivity weighted by the source's
+     * own spectrum: a cold sink with its blackbody spectrum, the sun with its own.
      */
     private BandNetwork[] networks(Problem p, List<Band> bands, double[][] eps, double[] t) {
         int n = p.enc.size();
@@ -283,16 +286,57 @@ public final class TemperatureSolver {
             double[] h = new double[n];
             double[] refl = new double[n];
             for (int i = 0; i < n; i++) {
+                SpectralEmissivity e = p.enc.surface(i).material().emissivity();
                 h[i] = p.envFactor[i] * envE;
                 if (h[i] > 0) {
-                    double alpha = BandAverages.planckMean(p.enc.surface(i).material().emissivity(),
-                            b.lowerUm(), b.upperUm(), p.envT, t[i]);
-                    refl[i] = (1 - alpha) * h[i];
+                    refl[i] = (1 - BandAverages.planckMean(e, b.lowerUm(), b.upperUm(), p.envT, t[i])) * h[i];
+                }
+                for (ExternalSource src : radiationCase.sources()) {
+                    double hs = src.irradianceOn(p.enc.surface(i).name())
+                            * src.spectrum().bandFraction(b.lowerUm(), b.upperUm());
+                    if (hs > 0) {
+                        h[i] += hs;
+                        refl[i] += (1 - src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i])) * hs;
+                    }
                 }
             }
             nets[k] = new BandNetwork(p.f, n, p.area, eps[k], h, refl, linear);
         }
         return nets;
+    }
+
+    /** Incident and first-absorbed power of every source at the solved temperatures. */
+    private List<SourceResult> sourceResults(Problem p, List<Band> bands, double[] t) {
+        List<SourceResult> out = new ArrayList<>();
+        for (ExternalSource src : radiationCase.sources()) {
+            double incident = 0;
+            double absorbed = 0;
+            for (int i = 0; i < p.area.length; i++) {
+                double w = p.area[i] * src.irradianceOn(p.enc.surface(i).name());
+                if (w == 0) {
+                    continue;
+                }
+                incident += w;
+                SpectralEmissivity e = p.enc.surface(i).material().emissivity();
+                for (Band b : bands) {
+                    absorbed += w * src.spectrum().bandFraction(b.lowerUm(), b.upperUm())
+                            * src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
+                }
+            }
+            out.add(new SourceResult(src.name(), src.spectrum().label(), incident, absorbed));
+        }
+        return out;
+    }
+
+    /** Power arriving from external sources on all surfaces (W), all bands. */
+    private double externalPowerW(Problem p) {
+        double w = 0;
+        for (ExternalSource src : radiationCase.sources()) {
+            for (int i = 0; i < p.area.length; i++) {
+                w += p.area[i] * src.irradianceOn(p.enc.surface(i).name());
+            }
+        }
+        return w;
     }
 
     /** Net power leaving the environment into the enclosure in one band (W). */
@@ -344,9 +388,9 @@ public final class TemperatureSolver {
     /**
      * Starting temperatures: given ones, initial guesses, else the area-weighted fourth-power
      * mean of the fixed temperatures (and environment), raised for surfaces that must emit a net
-     * flux: T⁴ = T_ref⁴ + max(q, 0)/σ.
+     * flux or that receive external irradiation S: T⁴ = T_ref⁴ + (max(q, 0) + S)/σ.
      */
-    private static double[] startingTemperatures(Problem p) {
+    private static double[] startingTemperatures(Problem p, List<ExternalSource> sources) {
         Enclosure enc = p.enc;
         int n = enc.size();
         double sumA = 0;
@@ -375,7 +419,11 @@ public final class TemperatureSolver {
                 t[i] = s.initialTemperatureK();
             } else {
                 double q = p.target[a] / p.area[i];
-                t[i] = Math.max(Math.pow(ref4 + Math.max(q, 0) / SIGMA, 0.25), 1.0);
+                double arriving = 0;
+                for (ExternalSource src : sources) {
+                    arriving += src.irradianceOn(s.name());
+                }
+                t[i] = Math.max(Math.pow(ref4 + (Math.max(q, 0) + arriving) / SIGMA, 0.25), 1.0);
             }
         }
         return t;
@@ -406,6 +454,9 @@ public final class TemperatureSolver {
             out.add(new SurfaceResult(s.name(), s.areaM2(), s.boundary().label(), t[i],
                     s.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond));
         }
+        double external = externalPowerW(p);
+        total += external;
+        scale += external;
         EnvironmentResult env = null;
         if (enc.environment() != null) {
             double[] bandQ = new double[nb];
@@ -429,7 +480,8 @@ public final class TemperatureSolver {
         SolverReport report = new SolverReport(linearName, counters.newtonIterations, counters.propertyIterations,
                 residual, p.unknown.length == 0 ? 0 : counters.lastStep, counters.maxLinearIterations,
                 counters.maxLinearResidual);
-        return new SolveResult(radiationCase.title(), bands, bandSet.origin(), out, env, total, scale, report);
+        return new SolveResult(radiationCase.title(), bands, bandSet.origin(), out, env, total, scale, report,
+                sourceResults(p, bands, t));
     }
 
     /** Name of an unknown-temperature surface whose column of the Jacobian is zero, or null. */
