@@ -23,6 +23,7 @@ import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.Environment;
 import org.exitance.model.ExternalSource;
+import org.exitance.model.LoadCase;
 import org.exitance.model.Material;
 import org.exitance.model.RadiationCase;
 import org.exitance.model.SolverSettings;
@@ -132,7 +133,7 @@ public final class CaseReader {
 
         LoadedCase build() throws CaseException {
             root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "bands",
-                    "conductiveLinks", "sources", "solver", "expected");
+                    "conductiveLinks", "sources", "loadCases", "solver", "expected");
             String title = root.optional("title").isPresent() ? root.field("title").text() : "";
             String notes = root.optional("notes").isPresent() ? root.field("notes").text() : "";
             Map<String, Material> materials = MaterialReader.readAll(root.field("materials"),
@@ -152,8 +153,10 @@ public final class CaseReader {
             List<ExternalSource> sources = root.has("sources")
                     ? SourceReader.read(root.field("sources"), surfaceNames(surfaces), file.toAbsolutePath().getParent())
                     : List.of();
+            List<LoadCase> loadCases = root.has("loadCases")
+                    ? loadCases(root.field("loadCases"), surfaces, sources) : List.of();
             RadiationCase model = new RadiationCase(title, notes, new ArrayList<>(materials.values()), enclosure,
-                    bands, settings, sources);
+                    bands, settings, sources, loadCases);
             ExpectedValues expected = root.has("expected")
                     ? expected(root.field("expected"), surfaces, env) : null;
             return new LoadedCase(file, model, warnings, expected);
@@ -224,6 +227,50 @@ public final class CaseReader {
                     }
                     return new BoundaryCondition.Adiabatic();
             }
+        }
+
+        private List<LoadCase> loadCases(JsonCursor arr, List<EnclosureSurface> surfaces, List<ExternalSource> sources)
+                throws CaseException {
+            List<LoadCase> out = new ArrayList<>();
+            java.util.Set<String> names = new java.util.HashSet<>();
+            java.util.Set<String> known = surfaceNames(surfaces);
+            List<JsonCursor> el = arr.elements();
+            if (el.isEmpty()) {
+                throw arr.error("needs at least one load case (or leave the key out)");
+            }
+            for (JsonCursor lc : el) {
+                lc.allowOnly("name", "description", "surfaces", "sources");
+                JsonCursor nameCursor = lc.field("name");
+                String name = nameCursor.nonEmptyText();
+                if (!names.add(name)) {
+                    throw nameCursor.error("duplicate load case name '" + name + "'");
+                }
+                String description = lc.has("description") ? lc.field("description").text() : "";
+                Map<String, BoundaryCondition> boundaries = new LinkedHashMap<>();
+                if (lc.has("surfaces")) {
+                    for (Map.Entry<String, JsonCursor> e : lc.field("surfaces").entries()) {
+                        if (!known.contains(e.getKey())) {
+                            throw e.getValue().error("no surface named '" + e.getKey() + "'");
+                        }
+                        JsonCursor b = e.getValue().allowOnly("temperature_K", "temperature_C", "netHeat_W",
+                                "netFlux_W_m2", "dissipation_W", "adiabatic");
+                        boundaries.put(e.getKey(), boundary(b));
+                    }
+                }
+                List<String> active = null;
+                if (lc.has("sources")) {
+                    active = new ArrayList<>();
+                    for (JsonCursor x : lc.field("sources").elements()) {
+                        String sn = x.text();
+                        if (sources.stream().noneMatch(s -> s.name().equals(sn))) {
+                            throw x.error("no source named '" + sn + "'");
+                        }
+                        active.add(sn);
+                    }
+                }
+                out.add(new LoadCase(name, description, boundaries, active));
+            }
+            return out;
         }
 
         private static Convection convection(JsonCursor c) throws CaseException {

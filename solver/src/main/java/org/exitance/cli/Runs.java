@@ -31,8 +31,23 @@ final class Runs {
     }
 
     static SolveResult solve(LoadedCase c, BandSet override) {
+        return guarded(c, () -> CaseSolver.solve(c.model(), override));
+    }
+
+    /** Every load case (or the one named), or the case as given when it has none. */
+    static java.util.List<CaseSolver.LoadCaseResult> solveAll(LoadedCase c, BandSet override, String only) {
+        java.util.List<String> names = c.model().loadCases().stream().map(org.exitance.model.LoadCase::name).toList();
+        if (only != null && !names.contains(only)) {
+            throw new UserError(c.file() + ": --load-case: no load case named '" + only + "'"
+                    + (names.isEmpty() ? " (the case has none)" : " (the case has: " + String.join(", ", names) + ")"),
+                    ExitCodes.BAD_INPUT);
+        }
+        return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only));
+    }
+
+    private static <T> T guarded(LoadedCase c, java.util.function.Supplier<T> work) {
         try {
-            return CaseSolver.solve(c.model(), override);
+            return work.get();
         } catch (IllPosedCaseException e) {
             throw new UserError(c.file() + ": " + e.getMessage(), ExitCodes.BAD_INPUT);
         } catch (SolveFailedException e) {

@@ -1,12 +1,15 @@
 package org.exitance.cli;
 
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import org.exitance.cases.LoadedCase;
 import org.exitance.model.BandSet;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.report.SolveTableWriter;
-import org.exitance.result.SolveResult;
+import org.exitance.thermal.CaseSolver;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -43,6 +46,10 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--gray", description = "Solve with one band (the gray solution).")
     private boolean gray;
 
+    @Option(names = "--load-case", paramLabel = "NAME",
+            description = "Solve only this load case (default: every load case of the case, side by side).")
+    private String loadCase;
+
     @Option(names = {"-q", "--quiet"}, description = "Do not print warnings on standard error.")
     private boolean quiet;
 
@@ -50,18 +57,23 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         BandSet override = BandOption.parse(bandEdges, gray);
         LoadedCase c = Runs.load(caseFile);
-        SolveResult r = Runs.solve(c, override);
+        List<CaseSolver.LoadCaseResult> results = Runs.solveAll(c, override, loadCase);
+        boolean variants = !c.model().loadCases().isEmpty();
+        PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
+                StandardCharsets.UTF_8);
         if (json) {
-            String text = SolveJsonWriter.MAPPER.writeValueAsString(SolveJsonWriter.toJson(r, caseFile.toString(),
-                    c.warnings()));
-            OutputTarget.write(output, force, new java.io.PrintStream(new WriterOutputStream(spec.commandLine().getOut()),
-                    true, java.nio.charset.StandardCharsets.UTF_8), ps -> ps.println(text));
+            String text = SolveJsonWriter.MAPPER.writeValueAsString(variants
+                    ? SolveJsonWriter.loadCasesToJson(results, caseFile.toString(), c.warnings())
+                    : SolveJsonWriter.toJson(results.get(0).result(), caseFile.toString(), c.warnings()));
+            OutputTarget.write(output, force, stdout, ps -> ps.println(text));
             if (!quiet) {
                 c.warnings().forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
             }
+        } else if (variants) {
+            OutputTarget.write(output, force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(), ps));
         } else {
-            OutputTarget.write(output, force, new java.io.PrintStream(new WriterOutputStream(spec.commandLine().getOut()),
-                    true, java.nio.charset.StandardCharsets.UTF_8), ps -> SolveTableWriter.write(r, c.warnings(), ps));
+            OutputTarget.write(output, force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
+                    c.warnings(), ps));
         }
         return ExitCodes.OK;
     }

@@ -14,14 +14,22 @@ import java.util.Objects;
  * @param bands      the band set given by the case, or null for the default rule
  * @param settings   solver settings
  * @param sources    radiation arriving from outside the surfaces (sun, planet, lamp)
+ * @param loadCases  named variants solved side by side; empty when the case is solved as given
  */
 public record RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure,
-                            BandSet bands, SolverSettings settings, List<ExternalSource> sources) {
+                            BandSet bands, SolverSettings settings, List<ExternalSource> sources,
+                            List<LoadCase> loadCases) {
 
-    /** A case without external sources. */
+    /** A case without external sources or load cases. */
     public RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure, BandSet bands,
                          SolverSettings settings) {
-        this(title, notes, materials, enclosure, bands, settings, List.of());
+        this(title, notes, materials, enclosure, bands, settings, List.of(), List.of());
+    }
+
+    /** A case without load cases. */
+    public RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure, BandSet bands,
+                         SolverSettings settings, List<ExternalSource> sources) {
+        this(title, notes, materials, enclosure, bands, settings, sources, List.of());
     }
 
     public RadiationCase {
@@ -29,15 +37,16 @@ public record RadiationCase(String title, String notes, List<Material> materials
         notes = notes == null ? "" : notes;
         materials = List.copyOf(materials);
         sources = List.copyOf(sources);
+        loadCases = List.copyOf(loadCases);
         Objects.requireNonNull(enclosure, "enclosure");
         Objects.requireNonNull(settings, "settings");
     }
 
     public RadiationCase withBands(BandSet newBands) {
-        return new RadiationCase(title, notes, materials, enclosure, newBands, settings, sources);
+        return new RadiationCase(title, notes, materials, enclosure, newBands, settings, sources, loadCases);
     }
 
     public RadiationCase withEnclosure(Enclosure newEnclosure) {
-        return new RadiationCase(title, notes, materials, newEnclosure, bands, settings, sources);
+        return new RadiationCase(title, notes, materials, newEnclosure, bands, settings, sources, loadCases);
     }
 }

@@ -7,9 +7,15 @@ public final class Numbers {
     private Numbers() {
     }
 
-    /** Heat in W, fluxes in W/m²: enough digits to compare, no exponent for everyday sizes. */
+    /**
+     * Heat in W, fluxes in W/m²: enough digits to compare, no exponent for everyday sizes; below
+     * 1 nW (round-off of a balance that closes) shown as 0.00.
+     */
     public static String power(double w) {
         double a = Math.abs(w);
+        if (a < 1e-9) {
+            return "0.00";
+        }
         if (a != 0 && (a < 1e-3 || a >= 1e9)) {
             return String.format(Locale.ROOT, "%.4e", w);
         }

@@ -10,6 +10,7 @@ import org.exitance.result.EnvironmentResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SolverReport;
 import org.exitance.result.SurfaceResult;
+import org.exitance.thermal.CaseSolver;
 
 /**
  * The machine-readable result (documented in docs/output-format.md). Keys carry their units;
@@ -89,6 +90,28 @@ public final class SolveJsonWriter {
         so.put("lastTemperatureStep_K", s.lastTemperatureStepK());
         so.put("maxLinearIterations", s.maxLinearIterations());
         so.put("maxLinearRelativeResidual", s.maxLinearResidual());
+        ArrayNode w = root.putArray("warnings");
+        warnings.forEach(w::add);
+        root.put("caution", Caution.SHORT);
+        return root;
+    }
+
+    /** Several load cases: {@code loadCases[] {name, description, result}} with one result each. */
+    public static ObjectNode loadCasesToJson(List<CaseSolver.LoadCaseResult> results, String caseFile,
+                                             List<String> warnings) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("program", "exitance");
+        root.put("version", Version.get());
+        root.put("case", caseFile);
+        ArrayNode arr = root.putArray("loadCases");
+        for (CaseSolver.LoadCaseResult r : results) {
+            ObjectNode o = arr.addObject();
+            o.put("name", r.name());
+            o.put("description", r.description());
+            ObjectNode inner = toJson(r.result(), caseFile, warnings);
+            inner.remove(List.of("program", "version", "case", "caution", "warnings"));
+            o.set("result", inner);
+        }
         ArrayNode w = root.putArray("warnings");
         warnings.forEach(w::add);
         root.put("caution", Caution.SHORT);

@@ -7,6 +7,7 @@ import org.exitance.model.Band;
 import org.exitance.result.EnvironmentResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
+import org.exitance.thermal.CaseSolver;
 
 /** Writes a solve result as readable text tables. Reads the result; computes no physics. */
 public final class SolveTableWriter {
@@ -17,7 +18,53 @@ public final class SolveTableWriter {
     private SolveTableWriter() {
     }
 
+    /** Several load cases: each in full, then a side-by-side summary of T and net heat. */
+    public static void writeLoadCases(List<CaseSolver.LoadCaseResult> results, List<String> warnings, PrintStream out) {
+        for (CaseSolver.LoadCaseResult r : results) {
+            out.println("=".repeat(12) + " Load case: " + r.name()
+                    + (r.description().isEmpty() ? "" : " — " + r.description()) + " " + "=".repeat(12));
+            body(r.result(), out);
+            out.println();
+        }
+        List<String> head = new ArrayList<>();
+        head.add("Surface");
+        for (CaseSolver.LoadCaseResult r : results) {
+            head.add(r.name() + " T K");
+            head.add(r.name() + " Q W");
+        }
+        boolean[] num = new boolean[head.size()];
+        java.util.Arrays.fill(num, true);
+        num[0] = false;
+        TextTable t = new TextTable(head, num);
+        for (int i = 0; i < results.get(0).result().surfaces().size(); i++) {
+            List<String> row = new ArrayList<>();
+            row.add(results.get(0).result().surfaces().get(i).name());
+            for (CaseSolver.LoadCaseResult r : results) {
+                SurfaceResult s = r.result().surfaces().get(i);
+                row.add(Numbers.temperature(s.temperatureK()));
+                row.add(Numbers.power(s.heatSuppliedW()));
+            }
+            t.row(row);
+        }
+        out.println("Load cases side by side (T: temperature; Q: heat supplied = radiation + convection + conduction):");
+        t.render(0).forEach(out::println);
+        for (String w : warnings) {
+            out.println("Warning: " + w);
+        }
+        out.println();
+        out.println(Caution.SHORT);
+    }
+
     public static void write(SolveResult r, List<String> warnings, PrintStream out) {
+        body(r, out);
+        for (String w : warnings) {
+            out.println("Warning: " + w);
+        }
+        out.println();
+        out.println(Caution.SHORT);
+    }
+
+    private static void body(SolveResult r, PrintStream out) {
         out.println("Exitance " + Version.get() + (r.title().isEmpty() ? "" : " — " + r.title()));
         out.println();
         writeBands(r, out);
@@ -46,11 +93,6 @@ public final class SolveTableWriter {
         writeBandSplit(r, out);
         out.println();
         writeBalance(r, out);
-        for (String w : warnings) {
-            out.println("Warning: " + w);
-        }
-        out.println();
-        out.println(Caution.SHORT);
     }
 
     /** Convection, conduction and heat supplied, when any surface has them. */

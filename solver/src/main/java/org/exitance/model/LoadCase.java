@@ -1,0 +1,42 @@
+package org.exitance.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+
+/**
+ * A named variant of a case that shares its geometry and materials: some surfaces get other
+ * boundary conditions, and only some external sources shine (e.g. "sunlit" and "eclipse",
+ * "cold start" and "holding").
+ *
+ * @param name           name used in reports
+ * @param description    free text, may be empty
+ * @param boundaries     replacement boundary conditions by surface name
+ * @param activeSources  names of the sources that shine in this load case, or null for all
+ */
+public record LoadCase(String name, String description, Map<String, BoundaryCondition> boundaries,
+                       List<String> activeSources) {
+    public LoadCase {
+        Objects.requireNonNull(name, "name");
+        description = description == null ? "" : description;
+        boundaries = Map.copyOf(boundaries);
+        activeSources = activeSources == null ? null : List.copyOf(activeSources);
+    }
+
+    /** The case as this load case sees it: boundaries replaced, inactive sources removed. */
+    public RadiationCase applyTo(RadiationCase base) {
+        Enclosure e = base.enclosure();
+        List<EnclosureSurface> surfaces = new ArrayList<>();
+        for (EnclosureSurface s : e.surfaces()) {
+            BoundaryCondition bc = boundaries.getOrDefault(s.name(), s.boundary());
+            double initial = bc.temperatureUnknown() ? s.initialTemperatureK() : Double.NaN;
+            surfaces.add(new EnclosureSurface(s.name(), s.material(), s.areaM2(), bc, initial, s.convection()));
+        }
+        List<ExternalSource> sources = base.sources().stream()
+                .filter(x -> activeSources == null || activeSources.contains(x.name())).toList();
+        return new RadiationCase(base.title() + " — " + name, base.notes(), base.materials(),
+                new Enclosure(surfaces, e.viewFactors(), e.environment(), e.links()), base.bands(), base.settings(),
+                sources, List.of());
+    }
+}
