@@ -1,0 +1,98 @@
+package org.exitance.geometry.viewfactor;
+
+import java.util.List;
+import org.exitance.geometry.Facet;
+import org.exitance.geometry.Scene;
+import org.exitance.geometry.Surface;
+
+/**
+ * The facets of a {@link Scene} flattened into primitive arrays (global facet order), with
+ * precomputed area-quadrature rules. Built once per computation, then read-only and shared by
+ * the worker threads.
+ */
+final class FacetTable {
+
+    final int count;
+    final int[] vertexStart;
+    final double[] xyz;
+    final double[] normal;
+    final double[] area;
+    final double[] centroid;
+    final double[] radius;
+    final int[] surfaceOf;
+    /**
+     * Order-independent key per facet (a mix of its coordinate bits): fixes which facet of a
+     * pair plays which role and seeds the pair's random points, so results do not depend on the
+     * order of facets or surfaces in the scene.
+     */
+    final long[] key;
+    /** Length of the diagonal of the scene's bounding box (m). */
+    final double sceneSize;
+    final AreaRules rules;
+
+    FacetTable(Scene scene, int maxRuleOrder) {
+        List<Facet> facets = scene.facets();
+        count = facets.size();
+        vertexStart = new int[count + 1];
+        for (int f = 0; f < count; f++) {
+            int nv = facets.get(f).vertexCount();
+            if (nv > Poly.MAX_VERTICES - 2) {
+                throw new org.exitance.geometry.GeometryException("facet " + f + " has " + nv
+                        + " vertices; at most " + (Poly.MAX_VERTICES - 2) + " are supported: split it");
+            }
+            vertexStart[f + 1] = vertexStart[f] + nv;
+        }
+        xyz = new double[3 * vertexStart[count]];
+        normal = new double[3 * count];
+        area = new double[count];
+        centroid = new double[3 * count];
+        radius = new double[count];
+        surfaceOf = new int[count];
+        key = new long[count];
+        int f = 0;
+        for (int s = 0; s < scene.surfaceCount(); s++) {
+            Surface surface = scene.surfaces().get(s);
+            for (Facet facet : surface.facets()) {
+                facet.copyCoordinates(xyz, 3 * vertexStart[f]);
+                normal[3 * f] = facet.normal().x();
+                normal[3 * f + 1] = facet.normal().y();
+                normal[3 * f + 2] = facet.normal().z();
+                area[f] = facet.area();
+                centroid[3 * f] = facet.centroid().x();
+                centroid[3 * f + 1] = facet.centroid().y();
+                centroid[3 * f + 2] = facet.centroid().z();
+                radius[f] = facet.circumradius();
+                surfaceOf[f] = s;
+                long h = 0x243F6A8885A308D3L;
+                for (double c : facet.coordinates()) {
+                    h = mix(h ^ Double.doubleToLongBits(c));
+                }
+                key[f] = h;
+                f++;
+            }
+        }
+        double[] lo = {Double.MAX_VALUE, Double.MAX_VALUE, Double.MAX_VALUE};
+        double[] hi = {-Double.MAX_VALUE, -Double.MAX_VALUE, -Double.MAX_VALUE};
+        for (int k = 0; k < xyz.length; k++) {
+            lo[k % 3] = Math.min(lo[k % 3], xyz[k]);
+            hi[k % 3] = Math.max(hi[k % 3], xyz[k]);
+        }
+        sceneSize = Math.sqrt(sq(hi[0] - lo[0]) + sq(hi[1] - lo[1]) + sq(hi[2] - lo[2]));
+        rules = new AreaRules(this, maxRuleOrder);
+    }
+
+    /** SplitMix64 finaliser (Steele, Lea &amp; Flood, OOPSLA 2014). */
+    static long mix(long z) {
+        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
+        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
+        return z ^ (z >>> 31);
+    }
+
+    private static double sq(double v) {
+        return v * v;
+    }
+
+    int vertexCount(int f) {
+        return vertexStart[f + 1] - vertexStart[f];
+    }
+}

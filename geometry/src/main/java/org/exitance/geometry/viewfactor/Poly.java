@@ -1,0 +1,95 @@
+package org.exitance.geometry.viewfactor;
+
+/**
+ * Working copy of a planar convex polygon on primitive arrays: packed vertices (m), unit normal,
+ * area (m²), centroid (m) and circumradius about the centroid (m). Mutable, owned by one thread.
+ */
+final class Poly {
+
+    static final int MAX_VERTICES = 128;
+    /** Largest quadrature order that scratch arrays are sized for. */
+    static final int MAX_RULE_ORDER = 17;
+    /** Doubles needed for one rule of order ≤ MAX_RULE_ORDER on any polygon. */
+    static final int RULE_SCRATCH = 4 * (MAX_VERTICES - 2) * MAX_RULE_ORDER * MAX_RULE_ORDER;
+
+    final double[] xyz = new double[3 * MAX_VERTICES];
+    int n;
+    double nx, ny, nz;
+    double area;
+    double cx, cy, cz;
+    double radius;
+    /** Global facet index. */
+    int facet = -1;
+    /** True when this polygon is a clipped part of its facet. */
+    boolean clipped;
+
+    /** Loads facet {@code f} of the table. Modifies this. */
+    void load(FacetTable t, int f) {
+        int v0 = t.vertexStart[f], v1 = t.vertexStart[f + 1];
+        n = v1 - v0;
+        System.arraycopy(t.xyz, 3 * v0, xyz, 0, 3 * n);
+        nx = t.normal[3 * f];
+        ny = t.normal[3 * f + 1];
+        nz = t.normal[3 * f + 2];
+        area = t.area[f];
+        cx = t.centroid[3 * f];
+        cy = t.centroid[3 * f + 1];
+        cz = t.centroid[3 * f + 2];
+        radius = t.radius[f];
+        facet = f;
+        clipped = false;
+    }
+
+    /** Recomputes area, centroid and radius from the vertices (normal kept). Modifies this. */
+    void updateMeasures() {
+        double a = 0, sx = 0, sy = 0, sz = 0;
+        for (int k = 1; k + 1 < n; k++) {
+            double ux = xyz[3 * k] - xyz[0], uy = xyz[3 * k + 1] - xyz[1], uz = xyz[3 * k + 2] - xyz[2];
+            double vx = xyz[3 * k + 3] - xyz[0], vy = xyz[3 * k + 4] - xyz[1], vz = xyz[3 * k + 5] - xyz[2];
+            double w = 0.5 * ((uy * vz - uz * vy) * nx + (uz * vx - ux * vz) * ny + (ux * vy - uy * vx) * nz);
+            a += w;
+            sx += w * (xyz[0] + xyz[3 * k] + xyz[3 * k + 3]) / 3;
+            sy += w * (xyz[1] + xyz[3 * k + 1] + xyz[3 * k + 4]) / 3;
+            sz += w * (xyz[2] + xyz[3 * k + 2] + xyz[3 * k + 5]) / 3;
+        }
+        area = a;
+        if (a > 0) {
+            cx = sx / a;
+            cy = sy / a;
+            cz = sz / a;
+        }
+        double r = 0;
+        for (int k = 0; k < n; k++) {
+            double dx = xyz[3 * k] - cx, dy = xyz[3 * k + 1] - cy, dz = xyz[3 * k + 2] - cz;
+            r = Math.max(r, dx * dx + dy * dy + dz * dz);
+        }
+        radius = Math.sqrt(r);
+    }
+
+    /**
+     * Clips this polygon to the closed half-space {x : m·x ≥ d} (Sutherland & Hodgman 1974,
+     * one plane). Modifies this; {@code scratch} (length ≥ 3·MAX_VERTICES) is overwritten.
+     */
+    void clip(double mx, double my, double mz, double d, double[] scratch) {
+        int out = 0;
+        for (int k = 0; k < n; k++) {
+            int l = (k + 1) % n;
+            double ak = mx * xyz[3 * k] + my * xyz[3 * k + 1] + mz * xyz[3 * k + 2] - d;
+            double al = mx * xyz[3 * l] + my * xyz[3 * l + 1] + mz * xyz[3 * l + 2] - d;
+            if (ak >= 0) {
+                System.arraycopy(xyz, 3 * k, scratch, 3 * out++, 3);
+            }
+            if ((ak > 0 && al < 0) || (ak < 0 && al > 0)) {
+                double t = ak / (ak - al);
+                scratch[3 * out] = xyz[3 * k] + t * (xyz[3 * l] - xyz[3 * k]);
+                scratch[3 * out + 1] = xyz[3 * k + 1] + t * (xyz[3 * l + 1] - xyz[3 * k + 1]);
+                scratch[3 * out + 2] = xyz[3 * k + 2] + t * (xyz[3 * l + 2] - xyz[3 * k + 2]);
+                out++;
+            }
+        }
+        System.arraycopy(scratch, 0, xyz, 0, 3 * out);
+        n = out;
+        clipped = true;
+        updateMeasures();
+    }
+}

@@ -1,0 +1,99 @@
+package org.exitance.geometry.viewfactor;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
+import org.exitance.geometry.Facet;
+import org.exitance.geometry.GeometryException;
+import org.exitance.geometry.Scene;
+import org.exitance.geometry.Vec3;
+import org.exitance.geometry.shape.Shapes;
+
+/**
+ * Summation Σ_j F_ij = 1 and reciprocity A_i F_ij = A_j F_ji (Siegel &amp; Howell 4th ed. §4.4;
+ * common practice) on random closed convex polyhedra: frusta of random convex polygons, faces
+ * subdivided, radiating inward.
+ */
+class ClosurePropertiesTest {
+
+    static Scene frustum(long seed, int sides, int div) {
+        Random rnd = new Random(seed);
+        double[] ang = new double[sides];
+        for (int k = 0; k < sides; k++) {
+            ang[k] = 2 * Math.PI * (k + 0.2 + 0.6 * rnd.nextDouble()) / sides;
+        }
+        double ax = 0.5 + rnd.nextDouble(), ay = 0.5 + rnd.nextDouble();
+        double h = 0.3 + rnd.nextDouble(), s = 0.2 + 0.7 * rnd.nextDouble();
+        double ox = 0.3 * (rnd.nextDouble() - 0.5), oy = 0.3 * (rnd.nextDouble() - 0.5);
+        List<Vec3> base = new ArrayList<>(), top = new ArrayList<>();
+        for (int k = 0; k < sides; k++) {
+            double x = ax * Math.cos(ang[k]), y = ay * Math.sin(ang[k]);
+            base.add(new Vec3(x, y, 0));
+            top.add(new Vec3(ox + s * x, oy + s * y, h));
+        }
+        Scene.Builder b = Scene.builder();
+        b.add("base", Shapes.convexPolygon(base, div)); // counter-clockwise from +z: faces inward (up)
+        List<Vec3> topRev = new ArrayList<>(top);
+        java.util.Collections.reverse(topRev);
+        b.add("top", Shapes.convexPolygon(topRev, div));
+        for (int k = 0; k < sides; k++) {
+            int l = (k + 1) % sides;
+            // side k: base_k, top_k, top_l, base_l is counter-clockwise seen from inside
+            b.add("side" + k, Shapes.convexPolygon(List.of(base.get(k), top.get(k), top.get(l), base.get(l)), div));
+        }
+        return b.build();
+    }
+
+    @Property(tries = 12)
+    void randomConvexPolyhedraCloseAndAreReciprocal(@ForAll @IntRange(min = 3, max = 7) int sides,
+            @ForAll @IntRange(min = 1, max = 2) int div, @ForAll long seed) {
+        Scene s;
+        try {
+            s = frustum(seed, sides, div);
+        } catch (GeometryException e) {
+            return; // rare random polygon with a too-short edge
+        }
+        ViewFactorResult r = ViewFactorCalculator.compute(s, ViewFactorOptions.defaults(), ProgressListener.NONE);
+        assertThat(r.facetClosure().maxRowSumError()).isLessThan(1e-6);
+        assertThat(r.facetClosure().maxReciprocityError()).isLessThan(1e-12);
+        assertThat(r.surfaceClosure().maxRowSumError()).isLessThan(1e-6);
+        assertThat(r.methodCounts().partlyHidden() + r.methodCounts().hidden()).isZero();
+        for (int i = 0; i < r.facetCount(); i++) {
+            assertThat(r.facetFactor(i, i)).isZero();
+        }
+    }
+
+    @Property(tries = 8)
+    void randomTetrahedraClose(@ForAll long seed) {
+        Random rnd = new Random(seed);
+        Vec3[] p = new Vec3[4];
+        for (int k = 0; k < 4; k++) {
+            p[k] = new Vec3(rnd.nextDouble(), rnd.nextDouble(), rnd.nextDouble());
+        }
+        double vol = p[1].minus(p[0]).cross(p[2].minus(p[0])).dot(p[3].minus(p[0]));
+        if (Math.abs(vol) < 1e-3) {
+            return;
+        }
+        if (vol < 0) {
+            Vec3 t = p[1];
+            p[1] = p[2];
+            p[2] = t;
+        }
+        // with positive orientation, face (0,1,2) normal points toward vertex 3: inward
+        Scene s = Scene.builder().add("a", Shapes.convexPolygon(List.of(p[0], p[1], p[2]), 2))
+                .add("b", Shapes.convexPolygon(List.of(p[0], p[3], p[1]), 2))
+                .add("c", Shapes.convexPolygon(List.of(p[1], p[3], p[2]), 2))
+                .add("d", Shapes.convexPolygon(List.of(p[0], p[2], p[3]), 2)).build();
+        for (Facet f : s.facets()) {
+            assertThat(f.normal().dot(p[0].plus(p[1]).plus(p[2]).plus(p[3]).times(0.25).minus(f.centroid())))
+                    .isPositive();
+        }
+        ViewFactorResult r = ViewFactorCalculator.compute(s, ViewFactorOptions.defaults(), ProgressListener.NONE);
+        assertThat(r.facetClosure().maxRowSumError()).isLessThan(1e-6);
+    }
+}
