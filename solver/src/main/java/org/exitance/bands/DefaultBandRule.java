@@ -25,7 +25,8 @@ import org.exitance.spectral.SpectralEmissivity;
  *       wavelengths where
  *       λT = 1,500, 2,500, 4,000, 7,000 and 15,000 µm·K (blackbody fractions about 1.4 %, 16 %,
  *       48 %, 81 % and 97 %).</li>
- *   <li>Property edges: every node of every non-gray property table that lies where the case's
+ *   <li>Property edges: every node of every non-gray property table (emissivity, and a window's
+ *       transmissivity and reflectivity) that lies where the case's
  *       Planck curves carry energy, λ in [500 µm·K / T_max, 50,000 µm·K / T_min].</li>
  *   <li>Planck edges are rounded to 4 significant digits; property edges are kept exactly, so a
  *       step in a table coincides with a band edge.</li>
@@ -46,7 +47,7 @@ public final class DefaultBandRule {
     /** Derives the default band set for a case. */
     public static BandSet derive(RadiationCase c) {
         List<EnclosureSurface> surfaces = c.enclosure().surfaces();
-        boolean allGray = surfaces.stream().allMatch(s -> s.material().emissivity().isGray());
+        boolean allGray = surfaces.stream().allMatch(s -> s.material().isGray());
         if (allGray) {
             return BandSet.gray("default rule: every surface is gray");
         }
@@ -83,11 +84,13 @@ public final class DefaultBandRule {
         double lo = 500 / tMax;
         double hi = 50000 / tMin;
         for (EnclosureSurface s : surfaces) {
-            SpectralEmissivity e = s.material().emissivity();
-            if (!e.isGray()) {
-                for (double w : e.breakpointsUm()) {
-                    if (w >= lo && w <= hi) {
-                        edges.add(w);
+            for (SpectralEmissivity e : new SpectralEmissivity[] {s.material().emissivity(),
+                    s.material().transmissivity()}) {
+                if (e != null && !e.isGray()) {
+                    for (double w : e.breakpointsUm()) {
+                        if (w >= lo && w <= hi) {
+                            edges.add(w);
+                        }
                     }
                 }
             }

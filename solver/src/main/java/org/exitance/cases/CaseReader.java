@@ -39,6 +39,8 @@ public final class CaseReader {
     public static final double DEFAULT_ROW_SUM_TOLERANCE = 1e-6;
     /** Default relative reciprocity error |A_i F_ij − A_j F_ji| / max(...) beyond which a case is rejected. */
     public static final double DEFAULT_RECIPROCITY_TOLERANCE = 1e-2;
+    /** Share of a surface's radiation that may escape a geometry declared closed (no environment). */
+    public static final double OPEN_GEOMETRY = 1e-3;
     /** Relative reciprocity error above which a warning is printed. */
     public static final double RECIPROCITY_WARNING = 1e-6;
 
@@ -49,10 +51,15 @@ public final class CaseReader {
     private CaseReader() {
     }
 
-    /** Reads, validates and builds a case. */
+    /** Reads, validates and builds a case; a geometry case gets its view factors from the cache or computes them. */
     public static LoadedCase read(Path file) throws CaseException {
+        return read(file, ViewFactorStage.Request.DEFAULT);
+    }
+
+    /** As {@link #read(Path)}, with control over the cache, progress and cancellation of view factors. */
+    public static LoadedCase read(Path file, ViewFactorStage.Request request) throws CaseException {
         JsonNode root = parse(file);
-        return new Builder(file, JsonCursor.root(root, file)).build();
+        return new Builder(file, JsonCursor.root(root, file), request).build();
     }
 
     static JsonNode parse(Path file) throws CaseException {
@@ -125,15 +132,27 @@ public final class CaseReader {
         private final Path file;
         private final JsonCursor root;
         private final List<String> warnings = new ArrayList<>();
+        private final ViewFactorStage.Request request;
+        /** Surface areas from the geometry (m²), or null when the case gives areas and a matrix. */
+        private Map<String, Double> geometryAreas;
 
-        Builder(Path file, JsonCursor root) {
+        Builder(Path file, JsonCursor root, ViewFactorStage.Request request) {
             this.file = file;
             this.root = root;
+            this.request = request;
         }
 
         LoadedCase build() throws CaseException {
-            root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "bands",
-                    "conductiveLinks", "sources", "loadCases", "solver", "expected");
+            root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "geometry",
+                    "bands", "conductiveLinks", "sources", "loadCases", "solver", "expected");
+            root.exactlyOneOf("viewFactors", "geometry");
+            GeometryReader.Geometry geometry = root.has("geometry")
+                    ? GeometryReader.read(root.field("geometry"), file.toAbsolutePath().getParent()) : null;
+            if (geometry != null) {
+                geometryAreas = new LinkedHashMap<>();
+                geometry.scene().surfaces().forEach(x -> geometryAreas.put(x.name(), x.area()));
+                geometry.notes().forEach(n -> warnings.add("geometry: " + n));
+            }
             String title = root.optional("title").isPresent() ? root.field("title").text() : "";
             String notes = root.optional("notes").isPresent() ? root.field("notes").text() : "";
             Map<String, Material> materials = MaterialReader.readAll(root.field("materials"),
@@ -141,7 +160,15 @@ public final class CaseReader {
             List<EnclosureSurface> surfaces = surfaces(root.field("surfaces"), materials);
             Environment env = environment();
             List<ConductiveLink> links = links(surfaces);
-            double[][] f = viewFactors(root.field("viewFactors"), surfaces, env != null);
+            ComputedViewFactors computed = null;
+            double[][] f;
+            if (geometry != null) {
+                requireSameSurfaces(geometry, surfaces);
+                computed = ViewFactorStage.obtain(file, geometry, request);
+                f = fromGeometry(computed, surfaces, env != null);
+            } else {
+                f = viewFactors(root.field("viewFactors"), surfaces, env != null);
+            }
             BandSet bands = bands();
             SolverSettings settings = settings();
             Enclosure enclosure;
@@ -159,7 +186,63 @@ public final class CaseReader {
                     bands, settings, sources, loadCases);
             ExpectedValues expected = root.has("expected")
                     ? expected(root.field("expected"), surfaces, env) : null;
-            return new LoadedCase(file, model, warnings, expected);
+            return new LoadedCase(file, model, warnings, expected, computed);
+        }
+
+        /** Area of a surface: given in the case, or (for a geometry case) from its facets. */
+        private double area(JsonCursor s, String name) throws CaseException {
+            if (geometryAreas == null) {
+                return s.field("area_m2").positive();
+            }
+            if (s.has("area_m2")) {
+                throw s.field("area_m2").error("the area of a surface comes from the geometry; leave area_m2 out");
+            }
+            Double a = geometryAreas.get(name);
+            if (a == null) {
+                throw s.field("name").error("no geometry part makes a surface named '" + name + "' (the geometry has: "
+                        + String.join(", ", geometryAreas.keySet()) + ")");
+            }
+            return a;
+        }
+
+        private void requireSameSurfaces(GeometryReader.Geometry g, List<EnclosureSurface> surfaces)
+                throws CaseException {
+            for (String name : geometryAreas.keySet()) {
+                if (surfaces.stream().noneMatch(x -> x.name().equals(name))) {
+                    throw root.field("surfaces").error("the geometry makes a surface '" + name
+                            + "' that $.surfaces does not list (give it a material and a boundary condition)");
+                }
+            }
+        }
+
+        /** The computed surface matrix in case order; checks that an open geometry has an environment. */
+        private double[][] fromGeometry(ComputedViewFactors v, List<EnclosureSurface> surfaces, boolean open)
+                throws CaseException {
+            int n = surfaces.size();
+            int[] at = new int[n];
+            for (int i = 0; i < n; i++) {
+                at[i] = v.surfaceNames().indexOf(surfaces.get(i).name());
+            }
+            double[][] f = new double[n][n];
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    f[i][j] = v.matrix()[at[i]][at[j]];
+                }
+                double leaving = v.environmentFactors()[at[i]];
+                if (!open && leaving > OPEN_GEOMETRY) {
+                    throw root.field("geometry").error("the geometry is open: " + fmt(leaving) + " of the radiation"
+                            + " leaving '" + surfaces.get(i).name() + "' escapes; add an \"environment\" to receive it,"
+                            + " or close the geometry");
+                }
+            }
+            if (!open && v.maxRowSumDeviation() > 1e-9) {
+                warnings.add("view factors: closed geometry, largest facet row-sum error " + fmt(v.maxRowSumDeviation())
+                        + " (row " + v.worstRow() + "); the energy balance shows its effect");
+            }
+            if (v.maxRowSumExcess() > 1e-6) {
+                warnings.add("view factors: a facet row sums to " + fmt(1 + v.maxRowSumExcess()) + ", above 1");
+            }
+            return f;
         }
 
         private static java.util.Set<String> surfaceNames(List<EnclosureSurface> surfaces) {
@@ -178,7 +261,7 @@ public final class CaseReader {
             for (JsonCursor s : el) {
                 s.allowOnly("name", "material", "area_m2", "temperature_K", "temperature_C", "netHeat_W",
                         "netFlux_W_m2", "dissipation_W", "adiabatic", "convection", "initialTemperature_K",
-                        "initialTemperature_C", "description");
+                        "initialTemperature_C", "description", "otherFace");
                 JsonCursor nameCursor = s.field("name");
                 String name = nameCursor.nonEmptyText();
                 if (seen.containsKey(name)) {
@@ -192,15 +275,19 @@ public final class CaseReader {
                     throw matCursor.error("unknown material '" + matName + "' (declared: "
                             + String.join(", ", materials.keySet()) + ")");
                 }
-                double area = s.field("area_m2").positive();
-                BoundaryCondition bc = boundary(s);
+                double area = area(s, name);
+                String otherFace = s.has("otherFace") ? s.field("otherFace").nonEmptyText() : null;
+                BoundaryCondition bc = otherFace != null && WindowFaces.conditionLeftOut(s)
+                        ? new BoundaryCondition.OnOtherFace() : boundary(s);
                 double initial = temperature(s, "initialTemperature", false).orElse(Double.NaN);
                 if (!Double.isNaN(initial) && !bc.temperatureUnknown()) {
-                    throw s.error("initialTemperature is only for surfaces whose temperature is unknown");
+                    throw s.error("initialTemperature is only for surfaces whose temperature is unknown"
+                            + (otherFace != null ? " (on a window, give it on the face with the condition)" : ""));
                 }
                 Convection convection = s.has("convection") ? convection(s.field("convection")) : null;
-                out.add(new EnclosureSurface(name, m, area, bc, initial, convection));
+                out.add(new EnclosureSurface(name, m, area, bc, initial, convection, otherFace));
             }
+            WindowFaces.check(el, out);
             return out;
         }
 

@@ -12,8 +12,10 @@ import org.exitance.model.RadiationCase;
  * @param model     the validated model
  * @param warnings  non-fatal findings (e.g. small reciprocity errors), one line each
  * @param expected  reference values, or null for an ordinary case
+ * @param viewFactors  view factors computed from the case's geometry, or null when the case gives a matrix
  */
-public record LoadedCase(Path file, RadiationCase model, List<String> warnings, ExpectedValues expected) {
+public record LoadedCase(Path file, RadiationCase model, List<String> warnings, ExpectedValues expected,
+                         ComputedViewFactors viewFactors) {
     public LoadedCase {
         warnings = List.copyOf(warnings);
     }

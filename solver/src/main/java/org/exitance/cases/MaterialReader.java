@@ -13,7 +13,9 @@ import org.exitance.spectral.TemperatureTabulatedEmissivity;
 /**
  * Reads the {@code materials} object of a case. A material is gray ({@code "emissivity": 0.8})
  * or spectral ({@code "spectralEmissivity": {...}}) given inline, by temperature, or from a CSV
- * file beside the case.
+ * file beside the case. A semi-transparent material (a window) gives any two of emissivity,
+ * transmissivity and reflectivity, or all three, each gray or as a table or steps in λ
+ * ({@link SemiTransparentProperties} checks and completes them).
  */
 final class MaterialReader {
     private MaterialReader() {
@@ -36,8 +38,14 @@ final class MaterialReader {
     }
 
     private static Material read(String name, JsonCursor m, Path caseDir) throws CaseException {
-        m.allowOnly("emissivity", "spectralEmissivity", "description");
+        m.allowOnly("emissivity", "spectralEmissivity", "transmissivity", "spectralTransmissivity", "reflectivity",
+                "spectralReflectivity", "description");
         String description = m.has("description") ? m.field("description").text() : "";
+        boolean window = m.has("transmissivity") || m.has("spectralTransmissivity") || m.has("reflectivity")
+                || m.has("spectralReflectivity");
+        if (window) {
+            return SemiTransparentProperties.read(name, m, caseDir, description);
+        }
         String which = m.exactlyOneOf("emissivity", "spectralEmissivity");
         SpectralEmissivity model;
         if (which.equals("emissivity")) {
@@ -48,7 +56,7 @@ final class MaterialReader {
         return new Material(name, model, description);
     }
 
-    private static SpectralEmissivity spectral(JsonCursor s, Path caseDir) throws CaseException {
+    static SpectralEmissivity spectral(JsonCursor s, Path caseDir) throws CaseException {
         s.allowOnly("wavelength_um", "bandEdges_um", "emissivity", "byTemperature", "csv");
         String which = s.exactlyOneOf("wavelength_um", "bandEdges_um", "byTemperature", "csv");
         switch (which) {
@@ -102,11 +110,16 @@ final class MaterialReader {
      * one floating-point spacing apart, so band means over bands that share those edges are exact).
      */
     private static TabulatedEmissivity table(JsonCursor s) throws CaseException {
+        return table(s, "emissivity");
+    }
+
+    /** As {@link #table(JsonCursor)}, with the values under {@code valueKey} ("transmissivity", ...). */
+    static TabulatedEmissivity table(JsonCursor s, String valueKey) throws CaseException {
         if (s.has("bandEdges_um")) {
-            return steps(s);
+            return steps(s, valueKey);
         }
         JsonCursor wc = s.field("wavelength_um");
-        JsonCursor ec = s.field("emissivity");
+        JsonCursor ec = s.field(valueKey);
         List<JsonCursor> w = wc.elements();
         List<JsonCursor> e = ec.elements();
         if (w.isEmpty()) {
@@ -127,9 +140,9 @@ final class MaterialReader {
         return new TabulatedEmissivity(wl, em);
     }
 
-    private static TabulatedEmissivity steps(JsonCursor s) throws CaseException {
+    private static TabulatedEmissivity steps(JsonCursor s, String valueKey) throws CaseException {
         JsonCursor wc = s.field("bandEdges_um");
-        JsonCursor ec = s.field("emissivity");
+        JsonCursor ec = s.field(valueKey);
         List<JsonCursor> w = wc.elements();
         List<JsonCursor> e = ec.elements();
         if (e.size() != w.size() + 1) {

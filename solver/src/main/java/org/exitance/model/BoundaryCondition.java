@@ -34,9 +34,18 @@ public sealed interface BoundaryCondition {
      */
     record HeatInput(double powerW) implements BoundaryCondition { }
 
-    /** Whether the surface temperature is an unknown of the solve. */
+    /**
+     * The second face of a window: the window's condition is given on its other face, and both
+     * faces share that face's temperature (see {@link EnclosureSurface#otherFace()}).
+     */
+    record OnOtherFace() implements BoundaryCondition { }
+
+    /**
+     * Whether the surface temperature is an unknown of the solve, counted once per thermal node:
+     * false for {@link OnOtherFace}, whose temperature is the other face's (unknown or not).
+     */
     default boolean temperatureUnknown() {
-        return !(this instanceof FixedTemperature);
+        return !(this instanceof FixedTemperature) && !(this instanceof OnOtherFace);
     }
 
     /**
@@ -57,7 +66,8 @@ public sealed interface BoundaryCondition {
         if (this instanceof Adiabatic) {
             return 0.0;
         }
-        throw new IllegalStateException("a fixed-temperature surface has no target heat");
+        throw new IllegalStateException("a fixed-temperature surface (or a window face whose condition is on its"
+                + " other face) has no target heat");
     }
 
     /**
@@ -81,6 +91,9 @@ public sealed interface BoundaryCondition {
         }
         if (this instanceof HeatInput) {
             return "dissipation";
+        }
+        if (this instanceof OnOtherFace) {
+            return "window face";
         }
         return "adiabatic";
     }

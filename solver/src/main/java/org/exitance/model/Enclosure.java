@@ -8,7 +8,8 @@ import java.util.Set;
 
 /**
  * Surfaces, their surface-to-surface view factors and, for an open enclosure, the environment
- * that receives each row's remainder. View factors are F[i][j] = fraction of the diffuse
+ * that receives each row's remainder. A window contributes two surfaces, its faces, which name
+ * each other (see {@link EnclosureSurface}). View factors are F[i][j] = fraction of the diffuse
  * radiation leaving surface i that reaches surface j (dimensionless). Validation of closure
  * and reciprocity against a tolerance happens where the matrix is read; this type only checks
  * shape and ranges.
@@ -56,6 +57,61 @@ public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors,
                 throw new IllegalArgumentException("conductive link names an unknown surface: " + l);
             }
         }
+        checkWindows(surfaces);
+    }
+
+    /**
+     * Windows: a semi-transparent material needs an other face and an opaque one must not have
+     * one; faces name each other, share material and area, and exactly one carries the condition.
+     */
+    private static void checkWindows(List<EnclosureSurface> surfaces) {
+        java.util.Map<String, EnclosureSurface> byName = new java.util.HashMap<>();
+        surfaces.forEach(s -> byName.put(s.name(), s));
+        for (EnclosureSurface s : surfaces) {
+            if (s.material().semiTransparent() != s.isWindowFace()) {
+                throw new IllegalArgumentException("surface '" + s.name() + "': " + (s.isWindowFace()
+                        ? "names an other face but its material '" + s.material().name() + "' is opaque"
+                        : "its material '" + s.material().name() + "' is semi-transparent, so it is a window and"
+                        + " needs an other face"));
+            }
+            if (!s.isWindowFace()) {
+                continue;
+            }
+            EnclosureSurface o = byName.get(s.otherFace());
+            if (o == null || !s.name().equals(o.otherFace())) {
+                throw new IllegalArgumentException("window face '" + s.name() + "' names '" + s.otherFace()
+                        + "' as its other face, which does not name it back");
+            }
+            if (!o.material().equals(s.material()) || o.areaM2() != s.areaM2()) {
+                throw new IllegalArgumentException("window faces '" + s.name() + "' and '" + o.name()
+                        + "' must have the same material and area");
+            }
+            boolean here = !(s.boundary() instanceof BoundaryCondition.OnOtherFace);
+            boolean there = !(o.boundary() instanceof BoundaryCondition.OnOtherFace);
+            if (here == there) {
+                throw new IllegalArgumentException("window faces '" + s.name() + "' and '" + o.name()
+                        + "': exactly one of them must carry the boundary condition");
+            }
+        }
+    }
+
+    /** True when some surface is a window face. */
+    public boolean hasWindows() {
+        return surfaces.stream().anyMatch(EnclosureSurface::isWindowFace);
+    }
+
+    /**
+     * For each surface the index of the other face of its window, or −1 for an opaque surface.
+     *
+     * @return a new array of length N
+     */
+    public int[] otherFaceIndices() {
+        int[] out = new int[surfaces.size()];
+        for (int i = 0; i < out.length; i++) {
+            String o = surfaces.get(i).otherFace();
+            out[i] = o == null ? -1 : indexOf(o);
+        }
+        return out;
     }
 
     /** Index of the surface with this name, or −1. */

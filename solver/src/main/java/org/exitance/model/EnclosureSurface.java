@@ -4,7 +4,11 @@ import java.util.Objects;
 
 /**
  * One surface of the enclosure as the radiosity network sees it: isothermal, diffuse,
- * opaque, uniformly irradiated.
+ * uniformly irradiated. An opaque surface is one node of the network. A window (a
+ * semi-transparent material) is two surfaces, its two faces, that name each other in
+ * {@code otherFace}: each face is a row and column of the view-factor matrix and sees its own
+ * side, but both share one temperature. The boundary condition of a window is carried by one face;
+ * the other face has {@link BoundaryCondition.OnOtherFace}.
  *
  * @param name                 unique name
  * @param material             its material
@@ -12,14 +16,22 @@ import java.util.Objects;
  * @param boundary             what is known about its energy balance
  * @param initialTemperatureK  starting guess for an unknown temperature (K), or NaN for none
  * @param convection           convection to a fluid, or null for none
+ * @param otherFace            name of the other face of a window, or null for an opaque surface
  */
 public record EnclosureSurface(String name, Material material, double areaM2,
-                               BoundaryCondition boundary, double initialTemperatureK, Convection convection) {
+                               BoundaryCondition boundary, double initialTemperatureK, Convection convection,
+                               String otherFace) {
 
     /** A surface without convection. */
     public EnclosureSurface(String name, Material material, double areaM2, BoundaryCondition boundary,
                             double initialTemperatureK) {
-        this(name, material, areaM2, boundary, initialTemperatureK, null);
+        this(name, material, areaM2, boundary, initialTemperatureK, null, null);
+    }
+
+    /** An opaque surface (no other face). */
+    public EnclosureSurface(String name, Material material, double areaM2, BoundaryCondition boundary,
+                            double initialTemperatureK, Convection convection) {
+        this(name, material, areaM2, boundary, initialTemperatureK, convection, null);
     }
 
     public EnclosureSurface {
@@ -29,6 +41,19 @@ public record EnclosureSurface(String name, Material material, double areaM2,
         if (!(areaM2 > 0) || !Double.isFinite(areaM2)) {
             throw new IllegalArgumentException("area must be positive and finite: " + areaM2);
         }
+        if (otherFace != null && otherFace.equals(name)) {
+            throw new IllegalArgumentException("surface '" + name + "' names itself as its other face");
+        }
+    }
+
+    /** True for a face of a window. */
+    public boolean isWindowFace() {
+        return otherFace != null;
+    }
+
+    /** The same surface with another boundary condition (and initial temperature). */
+    public EnclosureSurface withBoundary(BoundaryCondition bc, double initialK) {
+        return new EnclosureSurface(name, material, areaM2, bc, initialK, convection, otherFace);
     }
 
     /** Heat leaving by convection at temperature t (W); 0 without convection. */

@@ -24,14 +24,23 @@ public record LoadCase(String name, String description, Map<String, BoundaryCond
         activeSources = activeSources == null ? null : List.copyOf(activeSources);
     }
 
-    /** The case as this load case sees it: boundaries replaced, inactive sources removed. */
+    /**
+     * The case as this load case sees it: boundaries replaced, inactive sources removed. A
+     * replacement named on either face of a window goes to the face that carries the window's
+     * condition.
+     */
     public RadiationCase applyTo(RadiationCase base) {
         Enclosure e = base.enclosure();
         List<EnclosureSurface> surfaces = new ArrayList<>();
         for (EnclosureSurface s : e.surfaces()) {
-            BoundaryCondition bc = boundaries.getOrDefault(s.name(), s.boundary());
+            BoundaryCondition bc = s.boundary();
+            if (!(bc instanceof BoundaryCondition.OnOtherFace)) {
+                // a window's condition belongs to the pair: a replacement named on either face applies
+                bc = boundaries.getOrDefault(s.name(), s.otherFace() == null ? bc
+                        : boundaries.getOrDefault(s.otherFace(), bc));
+            }
             double initial = bc.temperatureUnknown() ? s.initialTemperatureK() : Double.NaN;
-            surfaces.add(new EnclosureSurface(s.name(), s.material(), s.areaM2(), bc, initial, s.convection()));
+            surfaces.add(s.withBoundary(bc, initial));
         }
         List<ExternalSource> sources = base.sources().stream()
                 .filter(x -> activeSources == null || activeSources.contains(x.name())).toList();

@@ -4,18 +4,41 @@ import java.util.Objects;
 import org.exitance.spectral.SpectralEmissivity;
 
 /**
- * A named surface material: diffuse, opaque, with a spectral hemispherical emissivity.
- * By Kirchhoff's law for diffuse surfaces the spectral absorptivity equals the spectral
- * emissivity and the spectral reflectivity is {@code 1 − ε_λ}.
+ * A named surface material: diffuse, with a spectral hemispherical emissivity and, for a
+ * semi-transparent material (a window of glass, quartz or a polymer film), a spectral
+ * hemispherical transmissivity. By Kirchhoff's law for diffuse surfaces the spectral absorptivity
+ * equals the spectral emissivity, and energy conservation gives the spectral reflectivity
+ * {@code ρ_λ = 1 − ε_λ − τ_λ} (Siegel &amp; Howell, Thermal Radiation Heat Transfer, 5th ed.,
+ * ch. 3 and the treatment of partially transparent windows in enclosures; Modest, Radiative
+ * Heat Transfer, 3rd ed., §3.2 and §5.4, from memory). An opaque material has τ = 0.
  *
- * @param name        the material's name as written in the case
- * @param emissivity  spectral hemispherical emissivity model
- * @param description free text from the case, may be empty
+ * @param name            the material's name as written in the case
+ * @param emissivity      spectral hemispherical emissivity model (= absorptivity)
+ * @param transmissivity  spectral hemispherical transmissivity model, or null for an opaque material;
+ *                        ε_λ + τ_λ ≤ 1 at every wavelength (checked where the material is read)
+ * @param description     free text from the case, may be empty
  */
-public record Material(String name, SpectralEmissivity emissivity, String description) {
+public record Material(String name, SpectralEmissivity emissivity, SpectralEmissivity transmissivity,
+                       String description) {
+
+    /** An opaque material (τ = 0, ρ = 1 − ε). */
+    public Material(String name, SpectralEmissivity emissivity, String description) {
+        this(name, emissivity, null, description);
+    }
+
     public Material {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(emissivity, "emissivity");
         description = description == null ? "" : description;
+    }
+
+    /** True when the material passes radiation (it then belongs on a window: two faces, one temperature). */
+    public boolean semiTransparent() {
+        return transmissivity != null;
+    }
+
+    /** True when ε and τ are both independent of wavelength. */
+    public boolean isGray() {
+        return emissivity.isGray() && (transmissivity == null || transmissivity.isGray());
     }
 }

@@ -1,15 +1,21 @@
 package org.exitance.network;
 
 /**
- * The radiosity network of one wavelength band for diffuse opaque surfaces, with band-mean
+ * The radiosity network of one wavelength band for diffuse surfaces, with band-mean
  * properties held fixed (Siegel &amp; Howell, Thermal Radiation Heat Transfer, 5th ed., §6.3;
  * Modest, Radiative Heat Transfer, 3rd ed., §5.3, band form §5.7):
  *
  * <pre>
- *   J_i = ε_i E_i + ρ_i Σ_j F_ij J_j + R_i,   ρ_i = 1 − ε_i
+ *   J_i = ε_i E_i + ρ_i Σ_j F_ij J_j + τ_i Σ_j F_o(i),j J_j + R_i,   ρ_i = 1 − ε_i − τ_i
  *   G_i = Σ_j F_ij J_j + H_i
  *   q_i = J_i − G_i
  * </pre>
+ *
+ * For an opaque surface τ_i = 0. For a face i of a window, o(i) is its other face: what arrives
+ * at the other face from the surfaces and is transmitted leaves face i (Siegel &amp; Howell,
+ * 5th ed., enclosures with partially transparent windows, from memory). The external part R_i
+ * then holds the reflected part of face i's own external irradiation and the transmitted part of
+ * its other face's; the caller builds it.
  *
  * E_i is the band emissive power of surface i (W/m²). H_i is the irradiation from outside the
  * set of surfaces (the environment, the sun, a planet) and R_i the part of it that is reflected,
@@ -40,6 +46,19 @@ public final class BandNetwork {
      */
     public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] emissivity,
                        double[] externalIrradiation, double[] externalReflected, RadiositySolver solver) {
+        this(viewFactors, n, areasM2, emissivity, WindowCoupling.none(), externalIrradiation, externalReflected,
+                solver);
+    }
+
+    /**
+     * A band with windows.
+     *
+     * @param windows              band τ and other face per surface (not modified); ρ_i = 1 − ε_i − τ_i
+     * @param externalReflected    R_i, the external irradiation that leaves face i: reflected from
+     *                             H_i and, for a window face, transmitted from the other face's H (W/m²)
+     */
+    public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] emissivity, WindowCoupling windows,
+                       double[] externalIrradiation, double[] externalReflected, RadiositySolver solver) {
         this.n = n;
         this.f = viewFactors;
         this.eps = emissivity.clone();
@@ -47,9 +66,9 @@ public final class BandNetwork {
         this.irradiation = externalIrradiation.clone();
         this.reflected = externalReflected.clone();
         for (int i = 0; i < n; i++) {
-            rho[i] = 1.0 - eps[i];
+            rho[i] = Math.max(0.0, 1.0 - eps[i] - windows.tau(i));
         }
-        this.prepared = solver.prepare(f, n, rho, areasM2.clone());
+        this.prepared = solver.prepare(f, n, rho, areasM2.clone(), windows);
     }
 
     /**
@@ -75,7 +94,7 @@ public final class BandNetwork {
 
     /**
      * Sensitivity of every surface's net flux to surface k's emissive power, ∂q_i/∂E_k
-     * (dimensionless), from one extra solve: {@code (I − ρF) x = ε_k e_k}, then
+     * (dimensionless), from one extra solve: {@code (I − ρF − TF) x = ε_k e_k}, then
      * {@code ∂q_i/∂E_k = x_i − Σ_j F_ij x_j}.
      *
      * @param k  the surface whose emission is perturbed

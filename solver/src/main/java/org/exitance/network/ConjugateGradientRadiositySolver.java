@@ -27,8 +27,13 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
         this.maxIterations = maxIterations;
     }
 
+    /** Opaque enclosures only: a window's coupling breaks the symmetry this method needs. */
     @Override
-    public Prepared prepare(double[] f, int n, double[] rho, double[] area) {
+    public Prepared prepare(double[] f, int n, double[] rho, double[] area, WindowCoupling windows) {
+        if (!windows.isEmpty()) {
+            throw new IllegalArgumentException("conjugate gradients need a symmetric radiosity matrix; an enclosure"
+                    + " with windows needs the direct solver (RadiositySolver.forSize)");
+        }
         // Unknown (non-black) rows.
         int[] free = new int[n];
         int m = 0;

@@ -5,7 +5,9 @@ import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.linsol.LinearSolverDense;
 
 /**
- * LU factorization with partial pivoting (EJML) of {@code I − diag(ρ) F}. The matrix is
+ * LU factorization with partial pivoting (EJML) of {@code I − diag(ρ) F − T F} (T: the window
+ * coupling, {@link WindowCoupling}; absent for opaque enclosures). It handles the unsymmetric
+ * matrix that windows produce. The matrix is
  * non-singular whenever every closed sub-enclosure has some absorption (some ρ &lt; 1) in the band;
  * every solve checks its residual, and a singular or near-singular matrix is reported, never
  * solved silently.
@@ -15,13 +17,22 @@ public final class DirectRadiositySolver implements RadiositySolver {
     static final double SOLVE_CHECK = 1e-8;
 
     @Override
-    public Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2) {
+    public Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2,
+                            WindowCoupling windows) {
         DMatrixRMaj a = new DMatrixRMaj(n, n);
         double[] data = a.data;
         for (int i = 0; i < n; i++) {
             int row = i * n;
             for (int k = 0; k < n; k++) {
                 data[row + k] = -reflectivity[i] * viewFactors[row + k];
+            }
+            int o = windows.other(i);
+            double tau = windows.tau(i);
+            if (o >= 0 && tau != 0) {
+                int orow = o * n;
+                for (int k = 0; k < n; k++) {
+                    data[row + k] -= tau * viewFactors[orow + k];
+                }
             }
             data[row + i] += 1.0;
         }
@@ -39,7 +50,7 @@ public final class DirectRadiositySolver implements RadiositySolver {
                 DMatrixRMaj x = new DMatrixRMaj(n, 1);
                 lu.solve(rhs, x);
                 System.arraycopy(x.data, 0, j, 0, n);
-                residual = RadiositySolver.relativeResidual(viewFactors, n, reflectivity, b, j);
+                residual = RadiositySolver.relativeResidual(viewFactors, n, reflectivity, windows, b, j);
                 if (!(residual <= SOLVE_CHECK)) {
                     throw new NetworkConvergenceException("radiosity matrix is singular or too ill-conditioned"
                             + " (relative residual " + residual + " after LU): a closed part of the enclosure reflects"

@@ -2,8 +2,9 @@ package org.exitance.network;
 
 /**
  * Strategy for the linear system of one band's radiosity network,
- * {@code (I − diag(ρ) F) J = b}, where F is the N×N view-factor matrix (row-major), ρ the
- * band reflectivities and b the source vector (W/m²).
+ * {@code (I − diag(ρ) F − T F) J = b}, where F is the N×N view-factor matrix (row-major), ρ the
+ * band reflectivities, T the window coupling ({@link WindowCoupling}: row i holds τ_i in the column
+ * block of its other face, zero without windows) and b the source vector (W/m²).
  *
  * <p>Two strategies exist: {@link DirectRadiositySolver} (LU, exact to round-off, O(N³) once
  * then O(N²) per right-hand side) and {@link ConjugateGradientRadiositySolver} (the symmetric
@@ -24,12 +25,22 @@ public interface RadiositySolver {
      * @param areasM2      areas (m²), used by the symmetric form; not modified
      * @return a prepared operator that solves for any right-hand side
      */
-    Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2);
+    default Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2) {
+        return prepare(viewFactors, n, reflectivity, areasM2, WindowCoupling.none());
+    }
+
+    /**
+     * Prepares the operator of one band with windows.
+     *
+     * @param windows  τ and other face per surface, not modified
+     * @throws IllegalArgumentException if the strategy cannot handle windows (conjugate gradients)
+     */
+    Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2, WindowCoupling windows);
 
     /** A band operator ready to solve. */
     interface Prepared {
         /**
-         * Solves {@code (I − diag(ρ) F) J = b}.
+         * Solves {@code (I − diag(ρ) F − T F) J = b}.
          *
          * @param b  right-hand side (W/m²), not modified
          * @param j  receives J (W/m²); modified
@@ -44,22 +55,35 @@ public interface RadiositySolver {
         double lastRelativeResidual();
     }
 
-    /** The default rule: direct LU up to {@link #DIRECT_LIMIT} surfaces, conjugate gradients above. */
+    /** The default rule for an enclosure without windows: {@link #forSize(int, boolean)} with false. */
     static RadiositySolver forSize(int n) {
-        return n <= DIRECT_LIMIT ? new DirectRadiositySolver() : new ConjugateGradientRadiositySolver(1e-12, 10 * n + 1000);
+        return forSize(n, false);
+    }
+
+    /**
+     * The default rule: direct LU whenever the enclosure has a window (the window coupling makes
+     * the matrix unsymmetric, so conjugate gradients do not apply), and otherwise up to
+     * {@link #DIRECT_LIMIT} surfaces; conjugate gradients for larger enclosures without windows.
+     *
+     * @param n        surfaces
+     * @param windows  whether some surface is a window face
+     */
+    static RadiositySolver forSize(int n, boolean windows) {
+        return windows || n <= DIRECT_LIMIT ? new DirectRadiositySolver()
+                : new ConjugateGradientRadiositySolver(1e-12, 10 * n + 1000);
     }
 
     /** ‖b − (I − diag(ρ)F) x‖∞ / max(‖b‖∞, tiny); all arrays not modified. */
     static double relativeResidual(double[] f, int n, double[] rho, double[] b, double[] x) {
+        return relativeResidual(f, n, rho, WindowCoupling.none(), b, x);
+    }
+
+    /** ‖b − (I − diag(ρ)F − T F) x‖∞ / max(‖b‖∞, tiny); all arrays not modified. */
+    static double relativeResidual(double[] f, int n, double[] rho, WindowCoupling w, double[] b, double[] x) {
         double worst = 0;
         double scale = 0;
         for (int i = 0; i < n; i++) {
-            double s = 0;
-            int row = i * n;
-            for (int k = 0; k < n; k++) {
-                s += f[row + k] * x[k];
-            }
-            double r = b[i] - (x[i] - rho[i] * s);
+            double r = b[i] - w.rowTimes(f, n, rho, x, i);
             worst = Math.max(worst, Math.abs(r));
             scale = Math.max(scale, Math.abs(b[i]));
         }

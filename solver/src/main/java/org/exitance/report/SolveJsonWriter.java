@@ -54,6 +54,17 @@ public final class SolveJsonWriter {
                 bo.put("emissivity", s.bandEmissivity()[k]);
             }
         }
+        if (!r.windows().isEmpty()) {
+            ArrayNode wins = root.putArray("windows");
+            for (var w : r.windows()) {
+                ObjectNode o = wins.addObject();
+                o.put("face", w.face());
+                o.put("otherFace", w.otherFace());
+                o.put("temperature_K", w.temperatureK());
+                o.put("netHeat_W", w.netHeatW());
+                o.put("heatSupplied_W", w.heatSuppliedW());
+            }
+        }
         EnvironmentResult env = r.environment();
         if (env != null) {
             ObjectNode o = root.putObject("environment");

@@ -17,14 +17,24 @@ import org.exitance.model.Band;
  *                           environment's emission into the enclosure and P_ext (W)
  * @param solver             convergence report
  * @param sources            external sources and what they delivered
+ * @param windows            one entry per window: its two faces (both also in {@code surfaces}) and their totals
  */
 public record SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
                           EnvironmentResult environment, double energyBalanceW, double energyScaleW,
-                          SolverReport solver, List<SourceResult> sources) {
+                          SolverReport solver, List<SourceResult> sources, List<WindowResult> windows) {
+
+    /** A result without windows. */
+    public SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
+                       EnvironmentResult environment, double energyBalanceW, double energyScaleW,
+                       SolverReport solver, List<SourceResult> sources) {
+        this(title, bands, bandOrigin, surfaces, environment, energyBalanceW, energyScaleW, solver, sources, List.of());
+    }
+
     public SolveResult {
         bands = List.copyOf(bands);
         surfaces = List.copyOf(surfaces);
         sources = List.copyOf(sources);
+        windows = List.copyOf(windows);
     }
 
     /** |energy balance| relative to the scale. */

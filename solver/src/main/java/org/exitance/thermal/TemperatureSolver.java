@@ -19,11 +19,13 @@ import org.exitance.network.BandNetwork;
 import org.exitance.network.BandState;
 import org.exitance.network.ConjugateGradientRadiositySolver;
 import org.exitance.network.RadiositySolver;
+import org.exitance.network.WindowCoupling;
 import org.exitance.result.EnvironmentResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SolverReport;
 import org.exitance.result.SourceResult;
 import org.exitance.result.SurfaceResult;
+import org.exitance.result.WindowResult;
 import org.exitance.spectral.BandAverages;
 import org.exitance.spectral.PhysicalConstants;
 import org.exitance.spectral.Planck;
@@ -45,6 +47,11 @@ import org.exitance.spectral.SpectralEmissivity;
  *
  * <p>With more than one band and unknown temperatures, a one-band gray solve (each surface's
  * total hemispherical emissivity at its temperature) runs first as the starting point.
+ *
+ * <p>A window is one thermal node with two faces: both faces carry the node's temperature, its
+ * residual adds both faces' net heat (and the convection and links of either face), and its
+ * Jacobian column adds both faces' sensitivities, since raising the window's temperature raises
+ * the emission of both faces.
  */
 public final class TemperatureSolver {
     private static final double SIGMA = PhysicalConstants.STEFAN_BOLTZMANN_W_M2_K4;
@@ -55,10 +62,17 @@ public final class TemperatureSolver {
 
     /** A solver that picks the linear strategy by {@link RadiositySolver#forSize}. */
     public TemperatureSolver(RadiationCase c) {
-        this(c, RadiositySolver.forSize(c.enclosure().size()));
+        this(c, RadiositySolver.forSize(c.enclosure().size(), c.enclosure().hasWindows()));
     }
 
+    /**
+     * @throws IllegalArgumentException when the case has windows and the strategy is conjugate
+     *                                  gradients (which need a symmetric matrix)
+     */
     public TemperatureSolver(RadiationCase c, RadiositySolver linear) {
+        if (c.enclosure().hasWindows() && linear instanceof ConjugateGradientRadiositySolver) {
+            throw new IllegalArgumentException("an enclosure with windows needs the direct radiosity solver");
+        }
         this.radiationCase = c;
         this.settings = c.settings();
         this.linear = linear;
@@ -121,10 +135,13 @@ public final class TemperatureSolver {
 
     /** An unknown-temperature surface that emits in no band has no defined temperature. */
     private static void requireEmission(Problem p, double[][] eps) {
-        for (int u : p.unknown) {
+        for (int a = 0; a < p.unknown.length; a++) {
+            int u = p.unknown[a];
             boolean emits = false;
             for (double[] band : eps) {
-                emits |= band[u] > 0;
+                for (int i : p.faces[a]) {
+                    emits |= band[i] > 0;
+                }
             }
             if (!emits) {
                 throw new IllPosedCaseException("surface '" + p.enc.surface(u).name() + "' has zero emissivity in every"
@@ -142,7 +159,14 @@ public final class TemperatureSolver {
         double[][][] sens = new double[nb][m][];
         for (int k = 0; k < nb; k++) {
             for (int b = 0; b < m; b++) {
-                sens[k][b] = nets[k].fluxSensitivity(u[b]);
+                // a window node emits from both faces: the sensitivities add (the network is linear in E)
+                sens[k][b] = nets[k].fluxSensitivity(p.faces[b][0]);
+                for (int f = 1; f < p.faces[b].length; f++) {
+                    double[] more = nets[k].fluxSensitivity(p.faces[b][f]);
+                    for (int i = 0; i < more.length; i++) {
+                        sens[k][b][i] += more[i];
+                    }
+                }
             }
         }
         double[] t = start.clone();
@@ -156,17 +180,16 @@ public final class TemperatureSolver {
             }
             DMatrixRMaj jac = new DMatrixRMaj(m, m);
             for (int a = 0; a < m; a++) {
-                int ua = u[a];
                 for (int b = 0; b < m; b++) {
                     double s = 0;
                     for (int k = 0; k < nb; k++) {
-                        s += sens[k][b][ua] * BandProperties.emissivePowerDerivative(bands.get(k), t[u[b]]);
+                        double de = BandProperties.emissivePowerDerivative(bands.get(k), t[u[b]]);
+                        for (int i : p.faces[a]) {
+                            s += p.area[i] * sens[k][b][i] * de;
+                        }
                     }
-                    double other = 0;
-                    if (p.allPaths[a]) {
-                        other = a == b ? p.convG[ua] + p.linkSum[ua] : -p.linkBetween(ua, u[b]);
-                    }
-                    jac.set(a, b, p.area[ua] * s + other);
+                    double other = p.allPaths[a] ? p.otherPathsDerivative(a, b) : 0.0;
+                    jac.set(a, b, s + other);
                 }
             }
             String dead = zeroColumn(p, jac);
@@ -202,7 +225,10 @@ public final class TemperatureSolver {
             double[] rTrial = null;
             for (int ls = 0; ls < 40; ls++) {
                 for (int a = 0; a < m; a++) {
-                    trial[u[a]] = t[u[a]] + lambda * dx.get(a, 0);
+                    double ta = t[u[a]] + lambda * dx.get(a, 0);
+                    for (int i : p.faces[a]) {
+                        trial[i] = ta;
+                    }
                 }
                 rTrial = residual(p, bands, nets, trial, counters);
                 if (maxAbs(rTrial) <= (1 - 1e-4 * lambda) * rNorm || maxAbs(rTrial) <= tol) {
@@ -238,19 +264,21 @@ public final class TemperatureSolver {
         }
     }
 
-    /** R_u = A_u Σ_k q_uk − Q_u (W) for each unknown. */
+    /** R_u = Σ_faces A_i Σ_k q_ik − Q_u (W) for each unknown node (one face, or a window's two). */
     private double[] residual(Problem p, List<Band> bands, BandNetwork[] nets, double[] t, Counters counters) {
         BandState[] states = solveBands(p, bands, nets, t, counters);
         double[] r = new double[p.unknown.length];
         for (int a = 0; a < r.length; a++) {
-            int i = p.unknown[a];
-            double q = 0;
-            for (BandState s : states) {
-                q += s.netFlux()[i];
-            }
-            r[a] = p.area[i] * q - p.target[a];
-            if (p.allPaths[a]) {
-                r[a] += p.convectionW(i, t[i]) + p.conductionW(i, t);
+            r[a] = -p.target[a];
+            for (int i : p.faces[a]) {
+                double q = 0;
+                for (BandState s : states) {
+                    q += s.netFlux()[i];
+                }
+                r[a] += p.area[i] * q;
+                if (p.allPaths[a]) {
+                    r[a] += p.convectionW(i, t[i]) + p.conductionW(i, t);
+                }
             }
         }
         return r;
@@ -275,32 +303,49 @@ public final class TemperatureSolver {
     /**
      * One network per band at the current temperatures (K, not modified). External irradiation
      * (the environment, sources) is absorbed with the band absorptivity weighted by the source's
-     * own spectrum: a cold sink with its blackbody spectrum, the sun with its own.
+     * own spectrum: a cold sink with its blackbody spectrum, the sun with its own. On a window face
+     * the transmissivity is weighted the same way: the reflected part of the external irradiation
+     * leaves the face it arrives at, the transmitted part leaves the other face.
      */
     private BandNetwork[] networks(Problem p, List<Band> bands, double[][] eps, double[] t) {
         int n = p.enc.size();
+        double[][] tau = BandProperties.transmissivities(p.enc.surfaces(), bands, t);
         BandNetwork[] nets = new BandNetwork[bands.size()];
         for (int k = 0; k < nets.length; k++) {
             Band b = bands.get(k);
             double envE = p.envT > 0 ? Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), p.envT) : 0.0;
             double[] h = new double[n];
-            double[] refl = new double[n];
+            double[] leaving = new double[n];
             for (int i = 0; i < n; i++) {
                 SpectralEmissivity e = p.enc.surface(i).material().emissivity();
-                h[i] = p.envFactor[i] * envE;
-                if (h[i] > 0) {
-                    refl[i] = (1 - BandAverages.planckMean(e, b.lowerUm(), b.upperUm(), p.envT, t[i])) * h[i];
+                SpectralEmissivity tr = p.enc.surface(i).material().transmissivity();
+                int o = p.other[i];
+                double hEnv = p.envFactor[i] * envE;
+                if (hEnv > 0) {
+                    double alpha = BandAverages.planckMean(e, b.lowerUm(), b.upperUm(), p.envT, t[i]);
+                    double tauExt = tr == null ? 0.0 : BandAverages.planckMean(tr, b.lowerUm(), b.upperUm(), p.envT, t[i]);
+                    h[i] += hEnv;
+                    leaving[i] += Math.max(0.0, 1 - alpha - tauExt) * hEnv;
+                    if (o >= 0) {
+                        leaving[o] += tauExt * hEnv;
+                    }
                 }
                 for (ExternalSource src : radiationCase.sources()) {
                     double hs = src.irradianceOn(p.enc.surface(i).name())
                             * src.spectrum().bandFraction(b.lowerUm(), b.upperUm());
                     if (hs > 0) {
+                        double alpha = src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
+                        double tauExt = tr == null ? 0.0
+                                : src.spectrum().bandAbsorptivity(tr, b.lowerUm(), b.upperUm(), t[i]);
                         h[i] += hs;
-                        refl[i] += (1 - src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i])) * hs;
+                        leaving[i] += Math.max(0.0, 1 - alpha - tauExt) * hs;
+                        if (o >= 0) {
+                            leaving[o] += tauExt * hs;
+                        }
                     }
                 }
             }
-            nets[k] = new BandNetwork(p.f, n, p.area, eps[k], h, refl, linear);
+            nets[k] = new BandNetwork(p.f, n, p.area, eps[k], new WindowCoupling(tau[k], p.other), h, leaving, linear);
         }
         return nets;
     }
@@ -376,7 +421,7 @@ public final class TemperatureSolver {
      */
     public static void checkPosed(Enclosure enc) {
         boolean anchored = enc.environment() != null || enc.surfaces().stream().anyMatch(s ->
-                !s.boundary().temperatureUnknown()
+                s.boundary() instanceof BoundaryCondition.FixedTemperature
                         || s.boundary().balancesAllPaths() && s.convectionConductanceWPerK() > 0);
         if (!anchored) {
             throw new IllPosedCaseException("no surface has a fixed temperature, none convects to a fluid and"
@@ -420,10 +465,18 @@ public final class TemperatureSolver {
             } else {
                 double q = p.target[a] / p.area[i];
                 double arriving = 0;
-                for (ExternalSource src : sources) {
-                    arriving += src.irradianceOn(s.name());
+                for (int face : p.faces[a]) {
+                    for (ExternalSource src : sources) {
+                        arriving += src.irradianceOn(enc.surface(face).name());
+                    }
                 }
                 t[i] = Math.max(Math.pow(ref4 + (Math.max(q, 0) + arriving) / SIGMA, 0.25), 1.0);
+            }
+        }
+        // the face of a window without a condition takes the temperature of the face that has it
+        for (int i = 0; i < n; i++) {
+            if (enc.surface(i).boundary() instanceof BoundaryCondition.OnOtherFace) {
+                t[i] = t[p.other[i]];
             }
         }
         return t;
@@ -439,6 +492,7 @@ public final class TemperatureSolver {
         double scale = 0;
         for (int i = 0; i < n; i++) {
             EnclosureSurface s = enc.surface(i);
+            EnclosureSurface carrier = enc.surface(p.primary[i]);
             double[] bandQ = new double[nb];
             double[] bandEps = new double[nb];
             double q = 0;
@@ -451,8 +505,9 @@ public final class TemperatureSolver {
             total += q;
             double conv = p.convectionW(i, t[i]);
             double cond = p.conductionW(i, t);
-            out.add(new SurfaceResult(s.name(), s.areaM2(), s.boundary().label(), t[i],
-                    s.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond));
+            String label = s.isWindowFace() && carrier == s ? s.boundary().label() + " (window)" : s.boundary().label();
+            out.add(new SurfaceResult(s.name(), s.areaM2(), label, t[i],
+                    carrier.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond));
         }
         double external = externalPowerW(p);
         total += external;
@@ -473,15 +528,27 @@ public final class TemperatureSolver {
         }
         double residual = 0;
         for (int a = 0; a < p.unknown.length; a++) {
-            SurfaceResult sr = out.get(p.unknown[a]);
-            double achieved = p.allPaths[a] ? sr.heatSuppliedW() : sr.netHeatW();
+            double achieved = 0;
+            for (int i : p.faces[a]) {
+                SurfaceResult sr = out.get(i);
+                achieved += p.allPaths[a] ? sr.heatSuppliedW() : sr.netHeatW();
+            }
             residual = Math.max(residual, Math.abs(achieved - p.target[a]));
+        }
+        List<WindowResult> windows = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            if (p.other[i] >= 0 && p.primary[i] == i) {
+                SurfaceResult a = out.get(i);
+                SurfaceResult b = out.get(p.other[i]);
+                windows.add(new WindowResult(a.name(), b.name(), t[i], a.netHeatW() + b.netHeatW(),
+                        a.heatSuppliedW() + b.heatSuppliedW()));
+            }
         }
         SolverReport report = new SolverReport(linearName, counters.newtonIterations, counters.propertyIterations,
                 residual, p.unknown.length == 0 ? 0 : counters.lastStep, counters.maxLinearIterations,
                 counters.maxLinearResidual);
         return new SolveResult(radiationCase.title(), bands, bandSet.origin(), out, env, total, scale, report,
-                sourceResults(p, bands, t));
+                sourceResults(p, bands, t), windows);
     }
 
     /** Name of an unknown-temperature surface whose column of the Jacobian is zero, or null. */
@@ -527,18 +594,24 @@ public final class TemperatureSolver {
         final double[] area;
         final double[] envFactor;
         final double envT;
+        /** Per surface: the other face of its window, or −1. */
+        final int[] other;
+        /** Per surface: the surface that carries its boundary condition (itself, or its window's other face). */
+        final int[] primary;
+        /** Per unknown node: the surface that carries the condition. */
         final int[] unknown;
+        /** Per unknown node: its faces (the surface alone, or a window's two faces). */
+        final int[][] faces;
         final double[] target;
         /** Per unknown: whether its target counts convection and conduction too. */
         final boolean[] allPaths;
         /** Per surface: h A (W/K) and the fluid temperature (K). */
         final double[] convG;
         final double[] fluidT;
-        /** Conductive links: ends and conductances (W/K); per surface the sum of its links' G. */
+        /** Conductive links: ends and conductances (W/K). */
         final int[] linkA;
         final int[] linkB;
         final double[] linkG;
-        final double[] linkSum;
 
         Problem(Enclosure enc, RadiositySolver linear) {
             this.enc = enc;
@@ -547,7 +620,10 @@ public final class TemperatureSolver {
             area = new double[n];
             envFactor = new double[n];
             List<Integer> u = new ArrayList<>();
+            other = enc.otherFaceIndices();
+            primary = new int[n];
             for (int i = 0; i < n; i++) {
+                primary[i] = enc.surface(i).boundary() instanceof BoundaryCondition.OnOtherFace ? other[i] : i;
                 for (int j = 0; j < n; j++) {
                     f[i * n + j] = enc.viewFactor(i, j);
                 }
@@ -559,6 +635,11 @@ public final class TemperatureSolver {
             }
             envT = enc.environment() == null ? 0.0 : enc.environment().temperatureK();
             unknown = u.stream().mapToInt(Integer::intValue).toArray();
+            faces = new int[unknown.length][];
+            for (int a = 0; a < unknown.length; a++) {
+                int i = unknown[a];
+                faces[a] = other[i] >= 0 ? new int[] {i, other[i]} : new int[] {i};
+            }
             target = new double[unknown.length];
             allPaths = new boolean[unknown.length];
             for (int a = 0; a < unknown.length; a++) {
@@ -576,14 +657,11 @@ public final class TemperatureSolver {
             linkA = new int[nl];
             linkB = new int[nl];
             linkG = new double[nl];
-            linkSum = new double[n];
             for (int l = 0; l < nl; l++) {
                 ConductiveLink link = enc.links().get(l);
                 linkA[l] = enc.indexOf(link.surfaceA());
                 linkB[l] = enc.indexOf(link.surfaceB());
                 linkG[l] = link.conductanceWPerK();
-                linkSum[linkA[l]] += linkG[l];
-                linkSum[linkB[l]] += linkG[l];
             }
         }
 
@@ -605,15 +683,37 @@ public final class TemperatureSolver {
             return q;
         }
 
-        /** Total conductance of the links between surfaces i and j (W/K). */
-        double linkBetween(int i, int j) {
-            double g = 0;
-            for (int l = 0; l < linkG.length; l++) {
-                if (linkA[l] == i && linkB[l] == j || linkA[l] == j && linkB[l] == i) {
-                    g += linkG[l];
+        /**
+         * d/dT_b of the convection and link heat leaving unknown node a (W/K): h A of its faces on
+         * the diagonal, and for each link G (T_x − T_y) with x a face of a, G([x ∈ b] − [y ∈ b]).
+         * A link between the two faces of one window carries nothing and contributes nothing.
+         */
+        double otherPathsDerivative(int a, int b) {
+            double d = 0;
+            if (a == b) {
+                for (int i : faces[a]) {
+                    d += convG[i];
                 }
             }
-            return g;
+            for (int l = 0; l < linkG.length; l++) {
+                for (int end = 0; end < 2; end++) {
+                    int x = end == 0 ? linkA[l] : linkB[l];
+                    int y = end == 0 ? linkB[l] : linkA[l];
+                    if (contains(faces[a], x)) {
+                        d += linkG[l] * ((contains(faces[b], x) ? 1 : 0) - (contains(faces[b], y) ? 1 : 0));
+                    }
+                }
+            }
+            return d;
+        }
+
+        private static boolean contains(int[] set, int v) {
+            for (int x : set) {
+                if (x == v) {
+                    return true;
+                }
+            }
+            return false;
         }
     }
 

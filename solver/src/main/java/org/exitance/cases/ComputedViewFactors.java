@@ -1,0 +1,41 @@
+package org.exitance.cases;
+
+import java.util.List;
+
+/**
+ * Surface view factors computed from a case's geometry (or loaded from its cache), with what a
+ * reader of the numbers needs to judge them.
+ *
+ * @param surfaceNames        surface names in scene order
+ * @param areasM2             surface areas (m²)
+ * @param matrix              F[i][j] between surfaces
+ * @param environmentFactors  per surface, 1 − Σ_j F_ij: the share that leaves the geometry
+ * @param facetCount          facets in the scene
+ * @param maxRowSumDeviation  largest |1 − Σ_j F_ij| over facet rows: the closure error of a closed
+ *                            geometry; for an open one, the largest share leaving it
+ * @param maxRowSumExcess     largest Σ_j F_ij − 1 over facet rows (an error in any geometry)
+ * @param maxReciprocityError largest relative reciprocity error over facet pairs
+ * @param worstRow            the facet row with the largest |1 − Σ_j F_ij|
+ * @param maxRowErrorEstimate largest estimated error of a facet row from sampled (partly hidden) pairs
+ * @param methodSummary       how many facet pairs each method handled, as text
+ * @param smoothing           what closure enforcement did, as text ("none" when not requested)
+ * @param geometryHash        SHA-256 of the geometry and options
+ * @param seconds             compute time (s); 0 when loaded from the cache
+ * @param fromCache           whether the numbers came from the cache
+ */
+public record ComputedViewFactors(List<String> surfaceNames, double[] areasM2, double[][] matrix,
+                                  double[] environmentFactors, int facetCount, double maxRowSumDeviation,
+                                  double maxRowSumExcess,
+                                  double maxReciprocityError, String worstRow, double maxRowErrorEstimate,
+                                  String methodSummary, String smoothing, String geometryHash, double seconds,
+                                  boolean fromCache) {
+    public ComputedViewFactors {
+        surfaceNames = List.copyOf(surfaceNames);
+    }
+
+    /** The same numbers, marked as loaded from the cache. */
+    ComputedViewFactors cached() {
+        return new ComputedViewFactors(surfaceNames, areasM2, matrix, environmentFactors, facetCount, maxRowSumDeviation,
+                maxRowSumExcess, maxReciprocityError, worstRow, maxRowErrorEstimate, methodSummary, smoothing, geometryHash, 0, true);
+    }
+}

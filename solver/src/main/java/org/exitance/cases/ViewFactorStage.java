@@ -1,0 +1,173 @@
+package org.exitance.cases;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.BooleanSupplier;
+import org.exitance.geometry.viewfactor.ClosureDiagnostics;
+import org.exitance.geometry.viewfactor.MethodCounts;
+import org.exitance.geometry.viewfactor.ProgressListener;
+import org.exitance.geometry.viewfactor.SmoothingReport;
+import org.exitance.geometry.viewfactor.ViewFactorCalculator;
+import org.exitance.geometry.viewfactor.ViewFactorResult;
+
+/**
+ * Gets a geometry's surface view factors: from the cache beside the case when its geometry hash
+ * matches, else by computing them (and then writing the cache). The cache file is
+ * {@code <case file name>.vfcache} (JSON) in the case's directory; it is written to a temporary
+ * file and moved into place, so an interrupted run never leaves a corrupt cache, and a cache whose
+ * hash or content does not match is ignored and replaced.
+ */
+public final class ViewFactorStage {
+    private static final ObjectMapper JSON = new ObjectMapper();
+    static final String SUFFIX = ".vfcache";
+
+    /**
+     * How to get view factors.
+     *
+     * @param useCache  read and write the cache
+     * @param progress  progress listener (fraction of facet pairs done)
+     * @param cancel    polled between facet rows; true stops the computation
+     */
+    public record Request(boolean useCache, ProgressListener progress, BooleanSupplier cancel) {
+        /** Cache on, no progress, no cancellation. */
+        public static final Request DEFAULT = new Request(true, ProgressListener.NONE, () -> false);
+    }
+
+    private ViewFactorStage() {
+    }
+
+    /** The cache file of a case. */
+    public static Path cacheFile(Path caseFile) {
+        Path abs = caseFile.toAbsolutePath();
+        return abs.resolveSibling(abs.getFileName() + SUFFIX);
+    }
+
+    static ComputedViewFactors obtain(Path caseFile, GeometryReader.Geometry g, Request req) throws CaseException {
+        String hash = org.exitance.geometry.viewfactor.GeometryHash.of(g.scene(), g.options());
+        Path cache = cacheFile(caseFile);
+        if (req.useCache()) {
+            ComputedViewFactors hit = read(cache, hash);
+            if (hit != null) {
+                return hit;
+            }
+        }
+        ViewFactorResult r;
+        try {
+            r = ViewFactorCalculator.compute(g.scene(), g.options(), req.progress(), req.cancel());
+        } catch (java.util.concurrent.CancellationException e) {
+            throw new CaseException(caseFile, "$.geometry", "view-factor computation cancelled; nothing was cached");
+        }
+        ComputedViewFactors out = summarize(r);
+        if (req.useCache()) {
+            write(cache, out);
+        }
+        return out;
+    }
+
+    private static ComputedViewFactors summarize(ViewFactorResult r) {
+        ClosureDiagnostics c = r.facetClosure();
+        MethodCounts m = r.methodCounts();
+        String methods = String.format(java.util.Locale.ROOT,
+                "%d pairs: %d contour integral, %d area quadrature, %d clipped, %d partly hidden (sampled),"
+                        + " %d hidden, %d facing away or coplanar",
+                m.total(), m.contour(), m.quadrature(), m.clipped(), m.partlyHidden(), m.hidden(), m.zero());
+        SmoothingReport s = r.smoothing();
+        String smoothing = s.applied() ? String.format(java.util.Locale.ROOT,
+                "%s: largest change %.3g, rms change %.3g, %d entries held at 0", s.mode(), s.maxChange(),
+                s.rmsChange(), s.clampedToZero()) : "none";
+        return new ComputedViewFactors(r.surfaceNames(), r.surfaceAreas(), r.surfaceMatrix(), r.environmentFactors(),
+                r.facetCount(), c.maxRowSumError(), c.maxNegativeRemainder(), c.maxReciprocityError(), c.worstRow(),
+                r.maxRowErrorEstimate(), methods, smoothing, r.geometryHash(), r.seconds(), false);
+    }
+
+    /** The cached numbers if the file exists, parses and carries this hash; else null. */
+    private static ComputedViewFactors read(Path cache, String hash) {
+        if (!Files.isRegularFile(cache)) {
+            return null;
+        }
+        try {
+            JsonNode n = JSON.readTree(cache.toFile());
+            if (!hash.equals(n.path("geometryHash").asText())) {
+                return null;
+            }
+            List<String> names = new ArrayList<>();
+            n.get("surfaceNames").forEach(x -> names.add(x.asText()));
+            int k = names.size();
+            double[] areas = doubles(n.get("areas_m2"), k);
+            double[] env = doubles(n.get("environmentFactors"), k);
+            double[][] f = new double[k][];
+            for (int i = 0; i < k; i++) {
+                f[i] = doubles(n.get("matrix").get(i), k);
+            }
+            return new ComputedViewFactors(names, areas, f, env, n.get("facetCount").asInt(),
+                    n.get("maxRowSumDeviation").asDouble(), n.get("maxRowSumExcess").asDouble(),
+                    n.get("maxReciprocityError").asDouble(), n.get("worstRow").asText(),
+                    n.get("maxRowErrorEstimate").asDouble(), n.get("methods").asText(), n.get("smoothing").asText(),
+                    hash, 0, true);
+        } catch (IOException | RuntimeException e) {
+            return null; // unreadable or from another version: recompute and replace
+        }
+    }
+
+    private static double[] doubles(JsonNode a, int k) {
+        if (a == null || !a.isArray() || a.size() != k) {
+            throw new IllegalStateException("cache entry of the wrong size");
+        }
+        double[] out = new double[k];
+        for (int i = 0; i < k; i++) {
+            out[i] = a.get(i).doubleValue();
+        }
+        return out;
+    }
+
+    private static void write(Path cache, ComputedViewFactors v) throws CaseException {
+        ObjectNode n = JSON.createObjectNode();
+        n.put("program", "exitance");
+        n.put("note", "view-factor cache: written by exitance, safe to delete");
+        n.put("geometryHash", v.geometryHash());
+        ArrayNode names = n.putArray("surfaceNames");
+        v.surfaceNames().forEach(names::add);
+        ArrayNode areas = n.putArray("areas_m2");
+        for (double a : v.areasM2()) {
+            areas.add(a);
+        }
+        ArrayNode env = n.putArray("environmentFactors");
+        for (double a : v.environmentFactors()) {
+            env.add(a);
+        }
+        ArrayNode m = n.putArray("matrix");
+        for (double[] row : v.matrix()) {
+            ArrayNode r = m.addArray();
+            for (double x : row) {
+                r.add(x);
+            }
+        }
+        n.put("facetCount", v.facetCount());
+        n.put("maxRowSumDeviation", v.maxRowSumDeviation());
+        n.put("maxRowSumExcess", v.maxRowSumExcess());
+        n.put("maxReciprocityError", v.maxReciprocityError());
+        n.put("worstRow", v.worstRow());
+        n.put("maxRowErrorEstimate", v.maxRowErrorEstimate());
+        n.put("methods", v.methodSummary());
+        n.put("smoothing", v.smoothing());
+        try {
+            Path tmp = Files.createTempFile(cache.getParent(), ".exitance-", ".tmp");
+            try {
+                JSON.writeValue(tmp.toFile(), n);
+                Files.move(tmp, cache, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            } finally {
+                Files.deleteIfExists(tmp);
+            }
+        } catch (IOException e) {
+            // a cache that cannot be written costs time next run, not correctness
+        }
+    }
+}

@@ -1,0 +1,148 @@
+package org.exitance.thermal;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
+import org.exitance.model.BandSet;
+import org.exitance.model.BoundaryCondition;
+import org.exitance.model.Convection;
+import org.exitance.model.Enclosure;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.Environment;
+import org.exitance.model.ExternalSource;
+import org.exitance.model.Material;
+import org.exitance.model.RadiationCase;
+import org.exitance.model.SolverSettings;
+import org.exitance.properties.BlackbodySource;
+import org.exitance.result.SolveResult;
+import org.exitance.result.SurfaceResult;
+import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.support.RandomEnclosures;
+
+/**
+ * Laws that hold with windows: conservation of energy (common practice: the first law over the
+ * enclosure, e.g. Modest, Radiative Heat Transfer, 3rd ed., §5.3) and independence of surface
+ * order. Each case joins two random reciprocal enclosures by a window: its front face is a surface
+ * of the first, its back face a surface of the second, so the faces see different enclosures
+ * (either may be open to the environment, and the back face may be lit by a 5772 K source).
+ */
+class WindowPropertiesTest {
+    private static final BandSet BANDS = new BandSet(new double[] {1.5, 3, 6}, "test");
+
+    @Property(tries = 60)
+    void energyBalanceClosesWithAWindowBetweenTwoEnclosures(@ForAll long seed,
+                                                            @ForAll @IntRange(min = 1, max = 5) int nA,
+                                                            @ForAll @IntRange(min = 1, max = 5) int nB) {
+        RadiationCase c = joined(new Random(seed), nA, nB);
+        SolveResult res = new TemperatureSolver(c).solve(BANDS);
+        assertThat(res.relativeEnergyBalance()).isLessThan(1e-9);
+        assertThat(res.solver().linearSolver()).isEqualTo("direct LU");
+        // the window's condition holds for the pair of faces together
+        EnclosureSurface front = c.enclosure().surface(c.enclosure().indexOf("window_front"));
+        SurfaceResult a = res.surface("window_front");
+        SurfaceResult b = res.surface("window_back");
+        assertThat(b.temperatureK()).isEqualTo(a.temperatureK());
+        BoundaryCondition bc = front.boundary();
+        if (bc.temperatureUnknown()) {
+            double achieved = bc.balancesAllPaths() ? a.heatSuppliedW() + b.heatSuppliedW() : a.netHeatW() + b.netHeatW();
+            assertThat(achieved).isCloseTo(bc.targetNetHeatW(front.areaM2()), within(1e-9 * res.energyScaleW()));
+        }
+    }
+
+    @Property(tries = 40)
+    void windowResultsDoNotDependOnSurfaceOrder(@ForAll long seed, @ForAll @IntRange(min = 1, max = 4) int nA,
+                                                @ForAll @IntRange(min = 1, max = 4) int nB) {
+        Random r = new Random(seed);
+        RadiationCase c = joined(r, nA, nB);
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < c.enclosure().size(); i++) {
+            order.add(i);
+        }
+        Collections.shuffle(order, r);
+        RadiationCase p = c.withEnclosure(c.enclosure().permuted(order.stream().mapToInt(Integer::intValue).toArray()));
+        SolveResult x = new TemperatureSolver(c).solve(BANDS);
+        SolveResult y = new TemperatureSolver(p).solve(BANDS);
+        for (SurfaceResult s : x.surfaces()) {
+            SurfaceResult t = y.surface(s.name());
+            assertThat(t.temperatureK()).isCloseTo(s.temperatureK(), within(1e-9 * s.temperatureK()));
+            assertThat(t.netHeatW()).isCloseTo(s.netHeatW(), within(1e-9 * x.energyScaleW()));
+        }
+    }
+
+    /** Two random enclosures (nA + 1 and nB + 1 surfaces), the last surface of each a window face. */
+    private static RadiationCase joined(Random r, int nA, int nB) {
+        Enclosure ea = RandomEnclosures.random(r, nA + 1, r.nextBoolean(), 0.5);
+        Enclosure eb = RandomEnclosures.random(r, nB + 1, r.nextBoolean(), 0.5);
+        // scale the second enclosure so both window faces have the same area (view factors do not change)
+        double scale = ea.surface(nA).areaM2() / eb.surface(nB).areaM2();
+        int n = nA + nB + 2;
+        double[][] f = new double[n][n];
+        for (int i = 0; i <= nA; i++) {
+            for (int j = 0; j <= nA; j++) {
+                f[i][j] = ea.viewFactor(i, j);
+            }
+        }
+        for (int i = 0; i <= nB; i++) {
+            for (int j = 0; j <= nB; j++) {
+                f[nA + 1 + i][nA + 1 + j] = eb.viewFactor(i, j);
+            }
+        }
+        Material glass = randomWindowMaterial(r);
+        double area = ea.surface(nA).areaM2();
+        BoundaryCondition windowBc = switch (r.nextInt(4)) {
+            case 0 -> new BoundaryCondition.Adiabatic();
+            case 1 -> new BoundaryCondition.HeatInput(area * 1000 * r.nextDouble());
+            case 2 -> new BoundaryCondition.FixedNetHeat(area * 1000 * r.nextDouble());
+            default -> new BoundaryCondition.FixedTemperature(300 + 900 * r.nextDouble());
+        };
+        Convection conv = r.nextBoolean() ? new Convection(20 * r.nextDouble(), 280 + 40 * r.nextDouble()) : null;
+        List<EnclosureSurface> s = new ArrayList<>();
+        for (int i = 0; i < nA; i++) {
+            EnclosureSurface x = ea.surface(i);
+            s.add(new EnclosureSurface("a" + i, x.material(), x.areaM2(), x.boundary(), Double.NaN));
+        }
+        s.add(new EnclosureSurface("window_front", glass, area, windowBc, Double.NaN, null, "window_back"));
+        for (int i = 0; i < nB; i++) {
+            EnclosureSurface x = eb.surface(i);
+            s.add(new EnclosureSurface("b" + i, x.material(), x.areaM2() * scale, scaled(x.boundary(), scale),
+                    Double.NaN));
+        }
+        s.add(new EnclosureSurface("window_back", glass, area, new BoundaryCondition.OnOtherFace(), Double.NaN, conv,
+                "window_front"));
+        Environment env = ea.environment() != null ? ea.environment() : eb.environment();
+        List<ExternalSource> sources = r.nextBoolean() ? List.of(new ExternalSource("lamp",
+                new BlackbodySource(5772), 500 + 1000 * r.nextDouble(), Map.of("window_back", r.nextDouble())))
+                : List.of();
+        Enclosure e = new Enclosure(s, f, env);
+        return new RadiationCase("windows", "", List.of(glass), e, null, SolverSettings.DEFAULT, sources);
+    }
+
+    private static BoundaryCondition scaled(BoundaryCondition bc, double scale) {
+        return bc instanceof BoundaryCondition.FixedNetHeat h ? new BoundaryCondition.FixedNetHeat(h.netHeatW() * scale)
+                : bc;
+    }
+
+    /** ε and τ tables on the same nodes with ε + τ ≤ 1. */
+    private static Material randomWindowMaterial(Random r) {
+        int nodes = 2 + r.nextInt(3);
+        double[] w = new double[nodes];
+        double[] e = new double[nodes];
+        double[] t = new double[nodes];
+        double x = 0.5 + r.nextDouble();
+        for (int i = 0; i < nodes; i++) {
+            w[i] = x;
+            e[i] = 0.05 + 0.8 * r.nextDouble();
+            t[i] = (1 - e[i]) * 0.95 * r.nextDouble();
+            x *= 1.5 + 2 * r.nextDouble();
+        }
+        return new Material("glass", new TabulatedEmissivity(w, e), new TabulatedEmissivity(w, t), "");
+    }
+}
