@@ -63,9 +63,17 @@ final class CheckCommand implements Callable<Integer> {
             b.append(k == 1 ? ", edges µm: " : " ").append(Numbers.wavelength(list.get(k).lowerUm()));
         }
         out.println(b);
+        if (c.viewFactors() != null) {
+            out.println("  view factors: from geometry, " + c.viewFactors().facetCount() + " facets"
+                    + (c.viewFactors().fromCache() ? " (cached)" : String.format(java.util.Locale.ROOT,
+                    " (computed in %.2f s, now cached)", c.viewFactors().seconds())));
+        }
         for (EnclosureSurface s : e.surfaces()) {
             out.println("  - " + s.name() + ": " + s.material().name() + ", " + Numbers.area(s.areaM2()) + " m², "
-                    + s.boundary().label());
+                    + (s.otherFace() == null ? s.boundary().label()
+                    : s.boundary() instanceof org.exitance.model.BoundaryCondition.OnOtherFace
+                    ? "window face; its condition is on '" + s.otherFace() + "'"
+                    : s.boundary().label() + " (window face; other face '" + s.otherFace() + "')"));
         }
         if (c.expected() != null) {
             out.println("  validation case: " + c.expected().values().size() + " expected values from "
