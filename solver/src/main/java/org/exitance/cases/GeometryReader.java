@@ -58,8 +58,14 @@ final class GeometryReader {
         }
         Scene.Builder b = Scene.builder();
         bySurface.forEach(b::add);
+        Scene scene;
+        try {
+            scene = b.build();
+        } catch (GeometryException e) {
+            throw g.error(e.getMessage());
+        }
         ViewFactorOptions options = g.has("options") ? options(g.field("options")) : ViewFactorOptions.defaults();
-        return new Geometry(b.build(), options, notes);
+        return new Geometry(scene, options, notes);
     }
 
     private static final String[] SHAPES = {"rectangle", "polygon", "disc", "annulus", "cylinder", "cone", "sphere",

@@ -64,6 +64,8 @@ public final class ViewFactorStage {
             r = ViewFactorCalculator.compute(g.scene(), g.options(), req.progress(), req.cancel());
         } catch (java.util.concurrent.CancellationException e) {
             throw new CaseException(caseFile, "$.geometry", "view-factor computation cancelled; nothing was cached");
+        } catch (org.exitance.geometry.GeometryException e) {
+            throw new CaseException(caseFile, "$.geometry", e.getMessage());
         }
         ComputedViewFactors out = summarize(r);
         if (req.useCache()) {
