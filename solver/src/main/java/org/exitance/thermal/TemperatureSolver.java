@@ -1,6 +1,5 @@
 package org.exitance.thermal;
 
-import java.util.ArrayList;
 import java.util.List;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
@@ -9,7 +8,6 @@ import org.exitance.bands.BandProperties;
 import org.exitance.model.Band;
 import org.exitance.model.BandSet;
 import org.exitance.model.BoundaryCondition;
-import org.exitance.model.ConductiveLink;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.ExternalSource;
@@ -20,12 +18,7 @@ import org.exitance.network.BandState;
 import org.exitance.network.ConjugateGradientRadiositySolver;
 import org.exitance.network.RadiositySolver;
 import org.exitance.network.WindowCoupling;
-import org.exitance.result.EnvironmentResult;
 import org.exitance.result.SolveResult;
-import org.exitance.result.SolverReport;
-import org.exitance.result.SourceResult;
-import org.exitance.result.SurfaceResult;
-import org.exitance.result.WindowResult;
 import org.exitance.spectral.BandAverages;
 import org.exitance.spectral.PhysicalConstants;
 import org.exitance.spectral.Planck;
@@ -102,7 +95,7 @@ public final class TemperatureSolver {
         double[][] eps = BandProperties.emissivities(enc.surfaces(), bands, t);
         BandNetwork[] nets = networks(p, bands, eps, t);
         BandState[] states = solveBands(p, bands, nets, t, counters);
-        return assemble(p, bandSet, bands, eps, states, t, counters);
+        return new ResultAssembler(radiationCase, linearName).assemble(p, bandSet, bands, eps, states, t, counters);
     }
 
     /** Outer loop over property updates around a Newton solve; returns converged temperatures. */
@@ -350,52 +343,8 @@ public final class TemperatureSolver {
         return nets;
     }
 
-    /** Incident and first-absorbed power of every source at the solved temperatures. */
-    private List<SourceResult> sourceResults(Problem p, List<Band> bands, double[] t) {
-        List<SourceResult> out = new ArrayList<>();
-        for (ExternalSource src : radiationCase.sources()) {
-            double incident = 0;
-            double absorbed = 0;
-            for (int i = 0; i < p.area.length; i++) {
-                double w = p.area[i] * src.irradianceOn(p.enc.surface(i).name());
-                if (w == 0) {
-                    continue;
-                }
-                incident += w;
-                SpectralEmissivity e = p.enc.surface(i).material().emissivity();
-                for (Band b : bands) {
-                    absorbed += w * src.spectrum().bandFraction(b.lowerUm(), b.upperUm())
-                            * src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
-                }
-            }
-            out.add(new SourceResult(src.name(), src.spectrum().label(), incident, absorbed));
-        }
-        return out;
-    }
 
-    /** Power arriving from external sources on all surfaces (W), all bands. */
-    private double externalPowerW(Problem p) {
-        double w = 0;
-        for (ExternalSource src : radiationCase.sources()) {
-            for (int i = 0; i < p.area.length; i++) {
-                w += p.area[i] * src.irradianceOn(p.enc.surface(i).name());
-            }
-        }
-        return w;
-    }
 
-    /** Net power leaving the environment into the enclosure in one band (W). */
-    private static double environmentNetHeatW(Problem p, Band b, BandState s) {
-        if (p.enc.environment() == null) {
-            return 0.0;
-        }
-        double envE = p.envT > 0 ? Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), p.envT) : 0.0;
-        double q = 0;
-        for (int i = 0; i < p.area.length; i++) {
-            q += p.area[i] * p.envFactor[i] * (envE - s.radiosity()[i]);
-        }
-        return q;
-    }
 
     private double heatTolerance(Problem p, double[] t) {
         double scale = 0;
@@ -482,74 +431,6 @@ public final class TemperatureSolver {
         return t;
     }
 
-    private SolveResult assemble(Problem p, BandSet bandSet, List<Band> bands, double[][] eps, BandState[] states,
-                                 double[] t, Counters counters) {
-        Enclosure enc = p.enc;
-        int n = enc.size();
-        int nb = bands.size();
-        List<SurfaceResult> out = new ArrayList<>(n);
-        double total = 0;
-        double scale = 0;
-        for (int i = 0; i < n; i++) {
-            EnclosureSurface s = enc.surface(i);
-            EnclosureSurface carrier = enc.surface(p.primary[i]);
-            double[] bandQ = new double[nb];
-            double[] bandEps = new double[nb];
-            double q = 0;
-            for (int k = 0; k < nb; k++) {
-                bandQ[k] = p.area[i] * states[k].netFlux()[i];
-                bandEps[k] = eps[k][i];
-                q += bandQ[k];
-                scale += p.area[i] * Math.abs(states[k].radiosity()[i]);
-            }
-            total += q;
-            double conv = p.convectionW(i, t[i]);
-            double cond = p.conductionW(i, t);
-            String label = s.isWindowFace() && carrier == s ? s.boundary().label() + " (window)" : s.boundary().label();
-            out.add(new SurfaceResult(s.name(), s.areaM2(), label, t[i],
-                    carrier.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond));
-        }
-        double external = externalPowerW(p);
-        total += external;
-        scale += external;
-        EnvironmentResult env = null;
-        if (enc.environment() != null) {
-            double[] bandQ = new double[nb];
-            double q = 0;
-            for (int k = 0; k < nb; k++) {
-                bandQ[k] = environmentNetHeatW(p, bands.get(k), states[k]);
-                q += bandQ[k];
-            }
-            for (int i = 0; i < n; i++) {
-                scale += p.area[i] * p.envFactor[i] * SIGMA * Math.pow(p.envT, 4);
-            }
-            total += q;
-            env = new EnvironmentResult(enc.environment().name(), p.envT, q, bandQ);
-        }
-        double residual = 0;
-        for (int a = 0; a < p.unknown.length; a++) {
-            double achieved = 0;
-            for (int i : p.faces[a]) {
-                SurfaceResult sr = out.get(i);
-                achieved += p.allPaths[a] ? sr.heatSuppliedW() : sr.netHeatW();
-            }
-            residual = Math.max(residual, Math.abs(achieved - p.target[a]));
-        }
-        List<WindowResult> windows = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            if (p.other[i] >= 0 && p.primary[i] == i) {
-                SurfaceResult a = out.get(i);
-                SurfaceResult b = out.get(p.other[i]);
-                windows.add(new WindowResult(a.name(), b.name(), t[i], a.netHeatW() + b.netHeatW(),
-                        a.heatSuppliedW() + b.heatSuppliedW()));
-            }
-        }
-        SolverReport report = new SolverReport(linearName, counters.newtonIterations, counters.propertyIterations,
-                residual, p.unknown.length == 0 ? 0 : counters.lastStep, counters.maxLinearIterations,
-                counters.maxLinearResidual);
-        return new SolveResult(radiationCase.title(), bands, bandSet.origin(), out, env, total, scale, report,
-                sourceResults(p, bands, t), windows);
-    }
 
     /** Name of an unknown-temperature surface whose column of the Jacobian is zero, or null. */
     private static String zeroColumn(Problem p, DMatrixRMaj jac) {
@@ -585,146 +466,5 @@ public final class TemperatureSolver {
 
     private static String fmt(double v) {
         return String.format(java.util.Locale.ROOT, "%.6g", v);
-    }
-
-    /** Arrays derived once from the enclosure. */
-    private static final class Problem {
-        final Enclosure enc;
-        final double[] f;
-        final double[] area;
-        final double[] envFactor;
-        final double envT;
-        /** Per surface: the other face of its window, or −1. */
-        final int[] other;
-        /** Per surface: the surface that carries its boundary condition (itself, or its window's other face). */
-        final int[] primary;
-        /** Per unknown node: the surface that carries the condition. */
-        final int[] unknown;
-        /** Per unknown node: its faces (the surface alone, or a window's two faces). */
-        final int[][] faces;
-        final double[] target;
-        /** Per unknown: whether its target counts convection and conduction too. */
-        final boolean[] allPaths;
-        /** Per surface: h A (W/K) and the fluid temperature (K). */
-        final double[] convG;
-        final double[] fluidT;
-        /** Conductive links: ends and conductances (W/K). */
-        final int[] linkA;
-        final int[] linkB;
-        final double[] linkG;
-
-        Problem(Enclosure enc, RadiositySolver linear) {
-            this.enc = enc;
-            int n = enc.size();
-            f = new double[n * n];
-            area = new double[n];
-            envFactor = new double[n];
-            List<Integer> u = new ArrayList<>();
-            other = enc.otherFaceIndices();
-            primary = new int[n];
-            for (int i = 0; i < n; i++) {
-                primary[i] = enc.surface(i).boundary() instanceof BoundaryCondition.OnOtherFace ? other[i] : i;
-                for (int j = 0; j < n; j++) {
-                    f[i * n + j] = enc.viewFactor(i, j);
-                }
-                area[i] = enc.surface(i).areaM2();
-                envFactor[i] = enc.environmentFactor(i);
-                if (enc.surface(i).boundary().temperatureUnknown()) {
-                    u.add(i);
-                }
-            }
-            envT = enc.environment() == null ? 0.0 : enc.environment().temperatureK();
-            unknown = u.stream().mapToInt(Integer::intValue).toArray();
-            faces = new int[unknown.length][];
-            for (int a = 0; a < unknown.length; a++) {
-                int i = unknown[a];
-                faces[a] = other[i] >= 0 ? new int[] {i, other[i]} : new int[] {i};
-            }
-            target = new double[unknown.length];
-            allPaths = new boolean[unknown.length];
-            for (int a = 0; a < unknown.length; a++) {
-                target[a] = enc.surface(unknown[a]).boundary().targetNetHeatW(area[unknown[a]]);
-                allPaths[a] = enc.surface(unknown[a]).boundary().balancesAllPaths();
-            }
-            convG = new double[n];
-            fluidT = new double[n];
-            for (int i = 0; i < n; i++) {
-                EnclosureSurface s = enc.surface(i);
-                convG[i] = s.convectionConductanceWPerK();
-                fluidT[i] = s.convection() == null ? 0.0 : s.convection().fluidTemperatureK();
-            }
-            int nl = enc.links().size();
-            linkA = new int[nl];
-            linkB = new int[nl];
-            linkG = new double[nl];
-            for (int l = 0; l < nl; l++) {
-                ConductiveLink link = enc.links().get(l);
-                linkA[l] = enc.indexOf(link.surfaceA());
-                linkB[l] = enc.indexOf(link.surfaceB());
-                linkG[l] = link.conductanceWPerK();
-            }
-        }
-
-        /** Heat leaving surface i by convection at temperature ti (W). */
-        double convectionW(int i, double ti) {
-            return convG[i] * (ti - fluidT[i]);
-        }
-
-        /** Heat leaving surface i through its conductive links (W); t not modified. */
-        double conductionW(int i, double[] t) {
-            double q = 0;
-            for (int l = 0; l < linkG.length; l++) {
-                if (linkA[l] == i) {
-                    q += linkG[l] * (t[i] - t[linkB[l]]);
-                } else if (linkB[l] == i) {
-                    q += linkG[l] * (t[i] - t[linkA[l]]);
-                }
-            }
-            return q;
-        }
-
-        /**
-         * d/dT_b of the convection and link heat leaving unknown node a (W/K): h A of its faces on
-         * the diagonal, and for each link G (T_x − T_y) with x a face of a, G([x ∈ b] − [y ∈ b]).
-         * A link between the two faces of one window carries nothing and contributes nothing.
-         */
-        double otherPathsDerivative(int a, int b) {
-            double d = 0;
-            if (a == b) {
-                for (int i : faces[a]) {
-                    d += convG[i];
-                }
-            }
-            for (int l = 0; l < linkG.length; l++) {
-                for (int end = 0; end < 2; end++) {
-                    int x = end == 0 ? linkA[l] : linkB[l];
-                    int y = end == 0 ? linkB[l] : linkA[l];
-                    if (contains(faces[a], x)) {
-                        d += linkG[l] * ((contains(faces[b], x) ? 1 : 0) - (contains(faces[b], y) ? 1 : 0));
-                    }
-                }
-            }
-            return d;
-        }
-
-        private static boolean contains(int[] set, int v) {
-            for (int x : set) {
-                if (x == v) {
-                    return true;
-                }
-            }
-            return false;
-        }
-    }
-
-    /** Iteration bookkeeping for the report. */
-    private static final class Counters {
-        int newtonIterations;
-        int propertyIterations;
-        double residualW;
-        double lastStep = Double.POSITIVE_INFINITY;
-        double lastOuterMove;
-        int maxLinearIterations;
-        double maxLinearResidual;
     }
 }
