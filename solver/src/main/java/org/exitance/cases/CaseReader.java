@@ -178,7 +178,8 @@ public final class CaseReader {
                 throw root.error(e.getMessage());
             }
             List<ExternalSource> sources = root.has("sources")
-                    ? SourceReader.read(root.field("sources"), surfaceNames(surfaces), file.toAbsolutePath().getParent())
+                    ? SourceReader.read(root.field("sources"), surfaceNames(surfaces), file.toAbsolutePath().getParent(),
+                            geometry == null ? null : geometry.scene())
                     : List.of();
             List<LoadCase> loadCases = root.has("loadCases")
                     ? loadCases(root.field("loadCases"), surfaces, sources) : List.of();

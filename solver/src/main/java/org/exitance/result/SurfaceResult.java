@@ -17,9 +17,10 @@ package org.exitance.result;
  * @param conductionW        heat leaving through conductive links (W); 0 without links
  * @param heatSuppliedW      heat that must be supplied from outside the model to hold this state:
  *                           radiation + convection + conduction (W)
+ * @param bandIncidentW      radiation arriving on the surface per band, A·G_k (W); do not modify
  */
 public record SurfaceResult(String name, double areaM2, String boundary, double temperatureK,
                             boolean temperatureSolved, double netHeatW, double netFluxWPerM2,
                             double[] bandNetHeatW, double[] bandEmissivity, double convectionW,
-                            double conductionW, double heatSuppliedW) {
+                            double conductionW, double heatSuppliedW, double[] bandIncidentW) {
 }

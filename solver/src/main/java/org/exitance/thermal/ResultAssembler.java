@@ -105,8 +105,13 @@ final class ResultAssembler {
             double conv = p.convectionW(i, t[i]);
             double cond = p.conductionW(i, t);
             String label = s.isWindowFace() && carrier == s ? s.boundary().label() + " (window)" : s.boundary().label();
+            double[] bandG = new double[nb];
+            for (int k = 0; k < nb; k++) {
+                bandG[k] = p.area[i] * states[k].irradiation()[i];
+            }
             out.add(new SurfaceResult(s.name(), s.areaM2(), label, t[i],
-                    carrier.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond));
+                    carrier.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond,
+                    bandG));
         }
         double external = externalPowerW(p);
         total += external;

@@ -52,6 +52,7 @@ public final class TemperatureSolver {
     private final SolverSettings settings;
     private final RadiositySolver linear;
     private final String linearName;
+    private ExternalAbsorption absorption = ExternalAbsorption.SOURCE_SPECTRUM;
 
     /** A solver that picks the linear strategy by {@link RadiositySolver#forSize}. */
     public TemperatureSolver(RadiationCase c) {
@@ -70,6 +71,15 @@ public final class TemperatureSolver {
         this.settings = c.settings();
         this.linear = linear;
         this.linearName = linear instanceof ConjugateGradientRadiositySolver ? "conjugate gradients" : "direct LU";
+    }
+
+    /**
+     * Chooses how external irradiation (environment, sources) is absorbed; the default is
+     * {@link ExternalAbsorption#SOURCE_SPECTRUM}. Returns this solver.
+     */
+    public TemperatureSolver withExternalAbsorption(ExternalAbsorption mode) {
+        this.absorption = java.util.Objects.requireNonNull(mode);
+        return this;
     }
 
     /**
@@ -315,8 +325,10 @@ public final class TemperatureSolver {
                 int o = p.other[i];
                 double hEnv = p.envFactor[i] * envE;
                 if (hEnv > 0) {
-                    double alpha = BandAverages.planckMean(e, b.lowerUm(), b.upperUm(), p.envT, t[i]);
-                    double tauExt = tr == null ? 0.0 : BandAverages.planckMean(tr, b.lowerUm(), b.upperUm(), p.envT, t[i]);
+                    boolean own = absorption == ExternalAbsorption.OWN_EMISSIVITY;
+                    double alpha = own ? eps[k][i] : BandAverages.planckMean(e, b.lowerUm(), b.upperUm(), p.envT, t[i]);
+                    double tauExt = tr == null ? 0.0 : own ? tau[k][i]
+                            : BandAverages.planckMean(tr, b.lowerUm(), b.upperUm(), p.envT, t[i]);
                     h[i] += hEnv;
                     leaving[i] += Math.max(0.0, 1 - alpha - tauExt) * hEnv;
                     if (o >= 0) {
@@ -327,8 +339,9 @@ public final class TemperatureSolver {
                     double hs = src.irradianceOn(p.enc.surface(i).name())
                             * src.spectrum().bandFraction(b.lowerUm(), b.upperUm());
                     if (hs > 0) {
-                        double alpha = src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
-                        double tauExt = tr == null ? 0.0
+                        boolean own = absorption == ExternalAbsorption.OWN_EMISSIVITY;
+                        double alpha = own ? eps[k][i] : src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
+                        double tauExt = tr == null ? 0.0 : own ? tau[k][i]
                                 : src.spectrum().bandAbsorptivity(tr, b.lowerUm(), b.upperUm(), t[i]);
                         h[i] += hs;
                         leaving[i] += Math.max(0.0, 1 - alpha - tauExt) * hs;

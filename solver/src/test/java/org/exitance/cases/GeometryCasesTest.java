@@ -109,4 +109,49 @@ class GeometryCasesTest {
                     .hasMessageContaining(b[1]);
         }
     }
+
+    @Test
+    void sunDirectionAndPlanetArePlacedByTheGeometry(@TempDir Path dir) throws Exception {
+        // A cube lit along its body diagonal: three faces at cos θ = 1/√3, three dark (common
+        // practice); its top face looking straight away from a planet below sees none of it, its
+        // bottom face sees F = (R/(R + h))² (differential element facing a sphere's centre;
+        // Howell's catalog, element-to-sphere case, from memory).
+        Path c = dir.resolve("cube.json");
+        Files.writeString(c, """
+                {"materials": {"m": {"emissivity": 0.5}},
+                 "geometry": {"parts": [{"box": {"min_m": [0, 0, 0], "max_m": [1, 1, 1], "facing": "outward",
+                   "faces": {"bottom": "bottom", "top": "top", "front": "front", "back": "back",
+                             "left": "left", "right": "right"}}}]},
+                 "surfaces": [%s],
+                 "environment": {"name": "space", "temperature_K": 3},
+                 "sources": [
+                   {"name": "sun", "spectrum": {"blackbody_K": 5772}, "irradiance_W_m2": 1361, "direction": [1, 1, 1]},
+                   {"name": "planet", "spectrum": {"blackbody_K": 255}, "irradiance_W_m2": 240,
+                    "planet": {"direction": [0, 0, -1], "altitude_m": 400000}}]}
+                """.formatted(String.join(", ", java.util.stream.Stream.of("bottom", "top", "front", "back", "left",
+                "right").map(n -> "{\"name\": \"" + n + "\", \"material\": \"m\", \"adiabatic\": true}").toList())));
+        var model = CaseReader.read(c).model();
+        var sun = model.sources().get(0);
+        double third = 1 / Math.sqrt(3);
+        assertThat(sun.incidence().get("top")).isCloseTo(third, within(1e-12));
+        assertThat(sun.incidence().get("right")).isCloseTo(third, within(1e-12));
+        assertThat(sun.incidence().get("back")).isCloseTo(third, within(1e-12));
+        assertThat(sun.incidence().get("bottom")).isCloseTo(0, within(1e-12));
+        var planet = model.sources().get(1);
+        double ratio = 6.371e6 / (6.371e6 + 4e5);
+        assertThat(planet.incidence().get("bottom")).isCloseTo(ratio * ratio, within(1e-9));
+        assertThat(planet.incidence().get("top")).isCloseTo(0, within(1e-12));
+        SolveResult r = CaseSolver.solve(model, null);
+        assertThat(r.relativeEnergyBalance()).isLessThan(1e-9);
+    }
+
+    @Test
+    void aSunDirectionNeedsGeometry(@TempDir Path dir) throws Exception {
+        Path c = dir.resolve("plates.json");
+        String plates = Files.readString(RepoCases.root().resolve("cases/validation/gray-parallel-plates.json"));
+        Files.writeString(c, plates.replaceFirst("\\{", "{\"sources\": [{\"name\": \"sun\", \"spectrum\": "
+                + "{\"blackbody_K\": 5772}, \"irradiance_W_m2\": 1000, \"direction\": [0, 0, 1]}],"));
+        assertThatThrownBy(() -> CaseReader.read(c)).isInstanceOf(CaseException.class)
+                .hasMessageContaining("$.sources[0].direction").hasMessageContaining("geometry");
+    }
 }
