@@ -45,7 +45,7 @@ final class Runs {
         return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only));
     }
 
-    private static <T> T guarded(LoadedCase c, java.util.function.Supplier<T> work) {
+    static <T> T guarded(LoadedCase c, java.util.function.Supplier<T> work) {
         try {
             return work.get();
         } catch (IllPosedCaseException e) {

@@ -1,0 +1,93 @@
+package org.exitance.cli;
+
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.exitance.audit.AuditResult;
+import org.exitance.audit.GrayAudit;
+import org.exitance.cases.LoadedCase;
+import org.exitance.model.BandSet;
+import org.exitance.model.LoadCase;
+import org.exitance.model.RadiationCase;
+import org.exitance.report.AuditJsonWriter;
+import org.exitance.report.AuditTableWriter;
+import org.exitance.report.SolveJsonWriter;
+import org.exitance.thermal.CaseSolver;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code exitance audit CASE.json}: where the gray shortcut fails, by how much, and why. */
+@Command(name = "audit", mixinStandardHelpOptions = true,
+        description = {"Compare the band-wise solution with the gray shortcut, surface by surface.",
+                "Reports net heat and temperature under each model, the gray error in W, K and %, flags surfaces "
+                + "above a threshold and explains each flag by the absorptivity for what the surface receives "
+                + "against its emissivity, and the wavelength range that carries the difference."},
+        footer = {"", ExitCodes.HELP})
+final class AuditCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
+    private Path caseFile;
+
+    @Option(names = "--threshold", paramLabel = "PERCENT", defaultValue = "5",
+            description = "Flag surfaces whose gray error exceeds this many percent (default ${DEFAULT-VALUE}).")
+    private double thresholdPct;
+
+    @Option(names = "--json", description = "Write the audit as JSON.")
+    private boolean json;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE (never overwrites without --force).")
+    private Path output;
+
+    @Option(names = "--force", description = "Allow --output to replace an existing file.")
+    private boolean force;
+
+    @Option(names = "--band-edges", paramLabel = "µm,µm,...", description = "Reference band edges in µm (default: the case's, or the default rule).")
+    private String bandEdges;
+
+    @Option(names = "--load-case", paramLabel = "NAME", description = "Audit only this load case.")
+    private String loadCase;
+
+    @Override
+    public Integer call() throws Exception {
+        if (!(thresholdPct > 0) || !Double.isFinite(thresholdPct)) {
+            throw new UserError("--threshold must be a positive number of percent", ExitCodes.BAD_INPUT);
+        }
+        BandSet override = BandOption.parse(bandEdges, false);
+        LoadedCase c = Runs.load(caseFile);
+        RadiationCase base = c.model();
+        List<String> names = base.loadCases().stream().map(LoadCase::name).toList();
+        if (loadCase != null && !names.contains(loadCase)) {
+            throw new UserError(caseFile + ": --load-case: no load case named '" + loadCase + "'", ExitCodes.BAD_INPUT);
+        }
+        List<AuditResult> audits = Runs.guarded(c, () -> {
+            List<AuditResult> out = new ArrayList<>();
+            if (base.loadCases().isEmpty()) {
+                out.add(GrayAudit.run(base, CaseSolver.bandsFor(base, override), thresholdPct, "as given"));
+            }
+            for (LoadCase lc : base.loadCases()) {
+                if (loadCase == null || loadCase.equals(lc.name())) {
+                    RadiationCase v = lc.applyTo(base);
+                    out.add(GrayAudit.run(v, CaseSolver.bandsFor(v, override), thresholdPct, lc.name()));
+                }
+            }
+            return out;
+        });
+        PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
+                StandardCharsets.UTF_8);
+        if (json) {
+            String text = SolveJsonWriter.MAPPER.writeValueAsString(AuditJsonWriter.toJson(caseFile.toString(), audits));
+            OutputTarget.write(output, force, stdout, ps -> ps.println(text));
+        } else {
+            OutputTarget.write(output, force, stdout, ps -> AuditTableWriter.write(base.title(), audits, ps));
+        }
+        return ExitCodes.OK;
+    }
+}
