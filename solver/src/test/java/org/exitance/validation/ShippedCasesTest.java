@@ -39,4 +39,18 @@ class ShippedCasesTest {
             }
         }));
     }
+
+    @TestFactory
+    Stream<DynamicTest> theAuditRunsOnEveryShippedCase() throws IOException {
+        return shippedCases().stream().map(f -> DynamicTest.dynamicTest(f.getFileName().toString(), () -> {
+            var model = CaseReader.read(f).model();
+            java.util.List<org.exitance.model.RadiationCase> variants = model.loadCases().isEmpty() ? java.util.List.of(model)
+                    : model.loadCases().stream().map(lc -> lc.applyTo(model)).toList();
+            for (var v : variants) {
+                var a = org.exitance.audit.GrayAudit.run(v, CaseSolver.bandsFor(v, null), 5, "t");
+                assertThat(a.rows()).hasSize(v.enclosure().size());
+                assertThat(a.gray().relativeEnergyBalance()).isLessThan(1e-9);
+            }
+        }));
+    }
 }

@@ -1,0 +1,39 @@
+package org.exitance.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.exitance.cases.RepoCases;
+import org.junit.jupiter.api.Test;
+
+class AuditCommandTest {
+
+    @Test
+    void theDemoBuiltToFoolTheGrayShortcutIsFlaggedWithItsCause() throws Exception {
+        String c = RepoCases.root().resolve("cases/demo/selective-absorber-audit.json").toString();
+        CliRun r = CliRun.of("audit", c);
+        assertThat(r.exitCode()).isEqualTo(0);
+        assertThat(r.out()).contains("selective_plate", "FLAGGED", "Verdict", "Caution");
+        CliRun j = CliRun.of("audit", "--json", c);
+        JsonNode surfaces = new ObjectMapper().readTree(j.out()).get("audits").get(0).get("surfaces");
+        JsonNode plate = surfaces.get(1);
+        assertThat(plate.get("name").asText()).isEqualTo("selective_plate");
+        assertThat(plate.get("flagged").asBoolean()).isTrue();
+        assertThat(plate.get("netHeat_W").has("band")).isTrue();
+        assertThat(plate.get("temperature_K").get("gray").asDouble())
+                .isLessThan(plate.get("temperature_K").get("band").asDouble());
+        assertThat(plate.get("cause").get("effectiveAbsorptivity").asDouble())
+                .isGreaterThan(plate.get("cause").get("emissivityAtOwnTemperature").asDouble());
+        assertThat(plate.has("grayError_W") && plate.has("grayError_pct")).isTrue();
+    }
+
+    @Test
+    void aHigherThresholdClearsTheFlagAndANonsenseThresholdIsRejected() {
+        String c = RepoCases.root().resolve("cases/demo/selective-absorber-audit.json").toString();
+        assertThat(CliRun.of("audit", "--threshold", "50", c).out()).doesNotContain("FLAGGED");
+        CliRun bad = CliRun.of("audit", "--threshold", "-1", c);
+        assertThat(bad.exitCode()).isEqualTo(2);
+        assertThat(bad.err().lines().count()).isEqualTo(1);
+    }
+}
