@@ -16,7 +16,8 @@ package org.exitance.audit;
  * @param grayErrorW          gray − band net heat (W)
  * @param grayErrorK          gray − band temperature (K)
  * @param grayErrorPct        the error in percent: of |band net heat| for a fixed-temperature surface
- *                            (with a floor of 1 % of the largest |net heat| in the case); for a surface
+ *                            (with a floor of 1 % of the largest |net heat| in the case, and of 1e-9 of
+ *                            the power in play); for a surface
  *                            whose temperature is solved, the error of its emissive power σT⁴,
  *                            100·((T_gray/T_band)⁴ − 1), which is what its heat exchange feels
  * @param flagged             |grayErrorPct| above the threshold

@@ -60,7 +60,7 @@ public final class GrayAudit {
             double errW = g.netHeatW() - b.netHeatW();
             double errK = g.temperatureK() - b.temperatureK();
             double pct = b.temperatureSolved() ? 100 * (Math.pow(g.temperatureK() / b.temperatureK(), 4) - 1)
-                    : 100 * errW / Math.max(Math.abs(b.netHeatW()), 0.01 * maxQ);
+                    : 100 * errW / Math.max(Math.max(Math.abs(b.netHeatW()), 0.01 * maxQ), 1e-9 * band.energyScaleW());
             if (!Double.isFinite(pct)) {
                 pct = 0;
             }

@@ -52,6 +52,11 @@ final class AuditCommand implements Callable<Integer> {
     @Option(names = "--band-edges", paramLabel = "µm,µm,...", description = "Reference band edges in µm (default: the case's, or the default rule).")
     private String bandEdges;
 
+    @Option(names = "--band-tolerance", paramLabel = "PERCENT", defaultValue = "0.1",
+            description = "Adaptive bands (used when neither the case nor --band-edges gives bands) stop when no surface "
+                    + "changes by more than this percent of the largest |net heat| (default ${DEFAULT-VALUE}).")
+    private double bandTolerancePct;
+
     @Option(names = "--load-case", paramLabel = "NAME", description = "Audit only this load case.")
     private String loadCase;
 
@@ -61,6 +66,7 @@ final class AuditCommand implements Callable<Integer> {
             throw new UserError("--threshold must be a positive number of percent", ExitCodes.BAD_INPUT);
         }
         BandSet override = BandOption.parse(bandEdges, false);
+        double bandTolerance = Runs.bandTolerance(bandTolerancePct);
         LoadedCase c = Runs.load(caseFile);
         RadiationCase base = c.model();
         List<String> names = base.loadCases().stream().map(LoadCase::name).toList();
@@ -70,12 +76,12 @@ final class AuditCommand implements Callable<Integer> {
         List<AuditResult> audits = Runs.guarded(c, () -> {
             List<AuditResult> out = new ArrayList<>();
             if (base.loadCases().isEmpty()) {
-                out.add(GrayAudit.run(base, CaseSolver.bandsFor(base, override), thresholdPct, "as given"));
+                out.add(GrayAudit.run(base, CaseSolver.bandsFor(base, override, bandTolerance), thresholdPct, "as given"));
             }
             for (LoadCase lc : base.loadCases()) {
                 if (loadCase == null || loadCase.equals(lc.name())) {
                     RadiationCase v = lc.applyTo(base);
-                    out.add(GrayAudit.run(v, CaseSolver.bandsFor(v, override), thresholdPct, lc.name()));
+                    out.add(GrayAudit.run(v, CaseSolver.bandsFor(v, override, bandTolerance), thresholdPct, lc.name()));
                 }
             }
             return out;

@@ -56,9 +56,11 @@ final class CheckCommand implements Callable<Integer> {
         }
         out.println("  view factors: worst row-sum error " + Numbers.small(worstRow)
                 + ", worst relative reciprocity error " + Numbers.small(worstRec));
-        BandSet bands = CaseSolver.bandsFor(c.model(), null);
+        BandSet given = CaseSolver.givenBands(c.model(), null);
+        BandSet bands = given != null ? given : org.exitance.bands.DefaultBandRule.derive(c.model());
         List<Band> list = bands.bands();
-        StringBuilder b = new StringBuilder("  bands: " + list.size() + " (" + bands.origin() + ")");
+        StringBuilder b = new StringBuilder("  bands: " + list.size() + " (" + bands.origin()
+                + (given == null && list.size() > 1 ? "; a solve refines them adaptively" : "") + ")");
         for (int k = 1; k < list.size(); k++) {
             b.append(k == 1 ? ", edges µm: " : " ").append(Numbers.wavelength(list.get(k).lowerUm()));
         }

@@ -17,6 +17,14 @@ final class Runs {
     private Runs() {
     }
 
+    /** A band tolerance given in percent on the command line, as a fraction. */
+    static double bandTolerance(double percent) {
+        if (!(percent > 0) || !Double.isFinite(percent)) {
+            throw new UserError("--band-tolerance must be a positive number of percent", ExitCodes.BAD_INPUT);
+        }
+        return percent / 100;
+    }
+
     static LoadedCase load(Path file) throws CaseException {
         return CaseReader.read(file);
     }
@@ -35,14 +43,15 @@ final class Runs {
     }
 
     /** Every load case (or the one named), or the case as given when it has none. */
-    static java.util.List<CaseSolver.LoadCaseResult> solveAll(LoadedCase c, BandSet override, String only) {
+    static java.util.List<CaseSolver.LoadCaseResult> solveAll(LoadedCase c, BandSet override, String only,
+                                                              double bandTolerance) {
         java.util.List<String> names = c.model().loadCases().stream().map(org.exitance.model.LoadCase::name).toList();
         if (only != null && !names.contains(only)) {
             throw new UserError(c.file() + ": --load-case: no load case named '" + only + "'"
                     + (names.isEmpty() ? " (the case has none)" : " (the case has: " + String.join(", ", names) + ")"),
                     ExitCodes.BAD_INPUT);
         }
-        return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only));
+        return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only, bandTolerance));
     }
 
     static <T> T guarded(LoadedCase c, java.util.function.Supplier<T> work) {

@@ -46,6 +46,11 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--gray", description = "Solve with one band (the gray solution).")
     private boolean gray;
 
+    @Option(names = "--band-tolerance", paramLabel = "PERCENT", defaultValue = "0.1",
+            description = "Adaptive bands (used when neither the case nor --band-edges gives bands) stop when no surface "
+                    + "changes by more than this percent of the largest |net heat| (default ${DEFAULT-VALUE}).")
+    private double bandTolerancePct;
+
     @Option(names = "--load-case", paramLabel = "NAME",
             description = "Solve only this load case (default: every load case of the case, side by side).")
     private String loadCase;
@@ -57,7 +62,8 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         BandSet override = BandOption.parse(bandEdges, gray);
         LoadedCase c = Runs.load(caseFile);
-        List<CaseSolver.LoadCaseResult> results = Runs.solveAll(c, override, loadCase);
+        List<CaseSolver.LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
+                Runs.bandTolerance(bandTolerancePct));
         boolean variants = !c.model().loadCases().isEmpty();
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);

@@ -14,6 +14,8 @@ public final class SolveTableWriter {
     /** Relative energy imbalance above which the writer says the balance does not close. */
     public static final double BALANCE_WARNING = 1e-6;
     private static final int MAX_SPLIT_COLUMNS = 8;
+    private static final int MAX_SPLIT_ROWS = 24;
+    private static final int MAX_LISTED_EDGES = 30;
 
     private SolveTableWriter() {
     }
@@ -120,11 +122,14 @@ public final class SolveTableWriter {
     private static void writeBands(SolveResult r, PrintStream out) {
         List<Band> bands = r.bands();
         StringBuilder b = new StringBuilder("Bands: " + bands.size() + " (" + r.bandOrigin() + ")");
-        if (bands.size() > 1) {
+        if (bands.size() > 1 && bands.size() <= MAX_LISTED_EDGES) {
             b.append(", edges µm:");
             for (int k = 1; k < bands.size(); k++) {
                 b.append(' ').append(Numbers.wavelength(bands.get(k).lowerUm()));
             }
+        } else if (bands.size() > 1) {
+            b.append(", edges from ").append(Numbers.wavelength(bands.get(1).lowerUm())).append(" to ")
+                    .append(Numbers.wavelength(bands.get(bands.size() - 1).lowerUm())).append(" µm (all in --json)");
         }
         out.println(b);
     }
@@ -136,7 +141,10 @@ public final class SolveTableWriter {
             return;
         }
         List<SurfaceResult> s = r.surfaces();
-        if (s.size() <= MAX_SPLIT_COLUMNS) {
+        if (bands.size() > MAX_SPLIT_ROWS) {
+            out.println("Net heat per band: " + s.size() + " surfaces × " + bands.size()
+                    + " bands; use --json for the full split.");
+        } else if (s.size() <= MAX_SPLIT_COLUMNS) {
             List<String> head = new ArrayList<>();
             head.add("Band µm");
             boolean[] num = new boolean[s.size() + 1];

@@ -2,7 +2,6 @@ package org.exitance.thermal;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.exitance.bands.DefaultBandRule;
 import org.exitance.model.LoadCase;
 import org.exitance.model.BandSet;
 import org.exitance.model.RadiationCase;
@@ -14,20 +13,35 @@ public final class CaseSolver {
     }
 
     /**
-     * The band set a solve will use: the override if given, else the case's, else the default rule.
+     * The bands given for a solve: the override if given, else the case's; null when neither
+     * gives any (then the solve refines adaptively, see {@link AdaptiveBands}).
      *
      * @param override bands from the command line, or null
      */
-    public static BandSet bandsFor(RadiationCase c, BandSet override) {
-        if (override != null) {
-            return override;
-        }
-        return c.bands() != null ? c.bands() : DefaultBandRule.derive(c);
+    public static BandSet givenBands(RadiationCase c, BandSet override) {
+        return override != null ? override : c.bands();
     }
 
-    /** Solves with {@link #bandsFor}. */
+    /** The bands a solve uses: the given ones, or the result of adaptive refinement. */
+    public static BandSet bandsFor(RadiationCase c, BandSet override) {
+        return bandsFor(c, override, AdaptiveBands.DEFAULT_TOLERANCE);
+    }
+
+    /** As {@link #bandsFor(RadiationCase, BandSet)} with a refinement tolerance (fraction of max |Q|). */
+    public static BandSet bandsFor(RadiationCase c, BandSet override, double tolerance) {
+        BandSet given = givenBands(c, override);
+        return given != null ? given : AdaptiveBands.refine(c, tolerance).bands();
+    }
+
+    /** Solves with the given bands, or with adaptively refined bands when none are given. */
     public static SolveResult solve(RadiationCase c, BandSet override) {
-        return new TemperatureSolver(c).solve(bandsFor(c, override));
+        return solve(c, override, AdaptiveBands.DEFAULT_TOLERANCE);
+    }
+
+    /** As {@link #solve(RadiationCase, BandSet)} with a refinement tolerance (fraction of max |Q|). */
+    public static SolveResult solve(RadiationCase c, BandSet override, double tolerance) {
+        BandSet given = givenBands(c, override);
+        return given != null ? new TemperatureSolver(c).solve(given) : AdaptiveBands.refine(c, tolerance).result();
     }
 
     /** One solved load case. */
@@ -42,16 +56,21 @@ public final class CaseSolver {
      * @throws IllegalArgumentException when {@code only} names no load case
      */
     public static List<LoadCaseResult> solveAll(RadiationCase c, BandSet override, String only) {
+        return solveAll(c, override, only, AdaptiveBands.DEFAULT_TOLERANCE);
+    }
+
+    /** As {@link #solveAll(RadiationCase, BandSet, String)} with a band refinement tolerance. */
+    public static List<LoadCaseResult> solveAll(RadiationCase c, BandSet override, String only, double tolerance) {
         if (c.loadCases().isEmpty()) {
             if (only != null) {
                 throw new IllegalArgumentException("the case has no load cases, so none is named '" + only + "'");
             }
-            return List.of(new LoadCaseResult("as given", "", solve(c, override)));
+            return List.of(new LoadCaseResult("as given", "", solve(c, override, tolerance)));
         }
         List<LoadCaseResult> out = new ArrayList<>();
         for (LoadCase lc : c.loadCases()) {
             if (only == null || only.equals(lc.name())) {
-                out.add(new LoadCaseResult(lc.name(), lc.description(), solve(lc.applyTo(c), override)));
+                out.add(new LoadCaseResult(lc.name(), lc.description(), solve(lc.applyTo(c), override, tolerance)));
             }
         }
         if (out.isEmpty()) {
