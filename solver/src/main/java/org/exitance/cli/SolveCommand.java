@@ -9,6 +9,11 @@ import org.exitance.cases.LoadedCase;
 import org.exitance.model.BandSet;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.report.SolveTableWriter;
+import org.exitance.audit.AuditResult;
+import org.exitance.audit.GrayAudit;
+import org.exitance.model.RadiationCase;
+import org.exitance.report.AuditJsonWriter;
+import org.exitance.report.AuditTableWriter;
 import org.exitance.thermal.CaseSolver;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -55,6 +60,13 @@ final class SolveCommand implements Callable<Integer> {
             description = "Solve only this load case (default: every load case of the case, side by side).")
     private String loadCase;
 
+    @Option(names = "--no-audit", description = "Leave out the gray-body audit section.")
+    private boolean noAudit;
+
+    @Option(names = "--threshold", paramLabel = "PERCENT", defaultValue = "5",
+            description = "Audit: flag surfaces whose gray error exceeds this many percent (default ${DEFAULT-VALUE}).")
+    private double thresholdPct;
+
     @Option(names = {"-q", "--quiet"}, description = "Do not print warnings on standard error.")
     private boolean quiet;
 
@@ -65,22 +77,52 @@ final class SolveCommand implements Callable<Integer> {
         List<CaseSolver.LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
                 Runs.bandTolerance(bandTolerancePct));
         boolean variants = !c.model().loadCases().isEmpty();
+        List<AuditResult> audits = noAudit || gray ? List.of() : audit(c, results);
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);
         if (json) {
-            String text = SolveJsonWriter.MAPPER.writeValueAsString(variants
+            com.fasterxml.jackson.databind.node.ObjectNode node = variants
                     ? SolveJsonWriter.loadCasesToJson(results, caseFile.toString(), c.warnings())
-                    : SolveJsonWriter.toJson(results.get(0).result(), caseFile.toString(), c.warnings()));
+                    : SolveJsonWriter.toJson(results.get(0).result(), caseFile.toString(), c.warnings());
+            if (!audits.isEmpty()) {
+                var arr = AuditJsonWriter.toJson(caseFile.toString(), audits).get("audits");
+                if (variants) {
+                    for (int i = 0; i < arr.size(); i++) {
+                        ((com.fasterxml.jackson.databind.node.ObjectNode) node.get("loadCases").get(i)).set("audit", arr.get(i));
+                    }
+                } else {
+                    node.set("audit", arr.get(0));
+                }
+            }
+            String text = SolveJsonWriter.MAPPER.writeValueAsString(node);
             OutputTarget.write(output, force, stdout, ps -> ps.println(text));
             if (!quiet) {
                 c.warnings().forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
             }
         } else if (variants) {
-            OutputTarget.write(output, force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(), ps));
+            OutputTarget.write(output, force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
+                    AuditTableWriter.summaryLines(audits), ps));
         } else {
             OutputTarget.write(output, force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
-                    c.warnings(), ps));
+                    c.warnings(), AuditTableWriter.summaryLines(audits), ps));
         }
         return ExitCodes.OK;
+    }
+
+    /** The gray-body audit of every solved (load) case, with the bands the solve used. */
+    private List<AuditResult> audit(LoadedCase c, List<CaseSolver.LoadCaseResult> results) {
+        if (!(thresholdPct > 0) || !Double.isFinite(thresholdPct)) {
+            throw new UserError("--threshold must be a positive number of percent", ExitCodes.BAD_INPUT);
+        }
+        return Runs.guarded(c, () -> {
+            List<AuditResult> out = new java.util.ArrayList<>();
+            for (CaseSolver.LoadCaseResult r : results) {
+                RadiationCase v = c.model().loadCases().stream().filter(lc -> lc.name().equals(r.name())).findFirst()
+                        .map(lc -> lc.applyTo(c.model())).orElse(c.model());
+                double[] edges = r.result().bands().stream().skip(1).mapToDouble(b -> b.lowerUm()).toArray();
+                out.add(GrayAudit.run(v, new BandSet(edges, r.result().bandOrigin()), thresholdPct, r.name()));
+            }
+            return out;
+        });
     }
 }

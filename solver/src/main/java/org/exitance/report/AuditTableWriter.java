@@ -13,6 +13,31 @@ public final class AuditTableWriter {
     private AuditTableWriter() {
     }
 
+    /** A short audit section for the solve report: the verdict and each flagged surface's cause. */
+    public static List<String> summaryLines(List<AuditResult> audits) {
+        List<String> out = new ArrayList<>();
+        for (AuditResult a : audits) {
+            String where = audits.size() > 1 || !a.name().equals("as given") ? " (" + a.name() + ")" : "";
+            String thr = Numbers.ratio(a.thresholdPct()).replaceAll("0+$", "").replaceAll("\\.$", "");
+            if (a.flaggedCount() == 0) {
+                out.add("Gray-body audit" + where + ": the gray shortcut is within " + thr + " % on every surface.");
+                continue;
+            }
+            out.add("Gray-body audit" + where + ": " + a.flaggedCount() + " of " + a.rows().size()
+                    + " surfaces off by more than " + thr + " % under the gray shortcut (details: exitance audit):");
+            for (AuditRow r : a.rows()) {
+                if (r.flagged()) {
+                    out.add(String.format(Locale.ROOT, "  %s: gray error %s W, %.2f K (%+.1f %%); absorbs with α = %s,"
+                                    + " gray uses ε = %s; mostly %s–%s µm", r.surface(), Numbers.power(r.grayErrorW()),
+                            r.grayErrorK(), r.grayErrorPct(), Numbers.ratio(r.cause().effectiveAbsorptivity()),
+                            Numbers.ratio(r.cause().emissivityAtOwnTemperature()), Numbers.wavelength(r.cause().lowerUm()),
+                            Numbers.wavelength(r.cause().upperUm())));
+                }
+            }
+        }
+        return out;
+    }
+
     public static void write(String title, List<AuditResult> audits, PrintStream out) {
         out.println("Exitance " + Version.get() + " — gray-body audit" + (title.isEmpty() ? "" : ": " + title));
         for (AuditResult a : audits) {

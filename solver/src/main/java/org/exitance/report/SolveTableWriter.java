@@ -22,6 +22,12 @@ public final class SolveTableWriter {
 
     /** Several load cases: each in full, then a side-by-side summary of T and net heat. */
     public static void writeLoadCases(List<CaseSolver.LoadCaseResult> results, List<String> warnings, PrintStream out) {
+        writeLoadCases(results, warnings, List.of(), out);
+    }
+
+    /** As above, with extra lines (e.g. the audit summary) before the caution. */
+    public static void writeLoadCases(List<CaseSolver.LoadCaseResult> results, List<String> warnings,
+                                      List<String> extra, PrintStream out) {
         for (CaseSolver.LoadCaseResult r : results) {
             out.println("=".repeat(12) + " Load case: " + r.name()
                     + (r.description().isEmpty() ? "" : " — " + r.description()) + " " + "=".repeat(12));
@@ -50,6 +56,10 @@ public final class SolveTableWriter {
         }
         out.println("Load cases side by side (T: temperature; Q: heat supplied = radiation + convection + conduction):");
         t.render(0).forEach(out::println);
+        if (!extra.isEmpty()) {
+            out.println();
+            extra.forEach(out::println);
+        }
         for (String w : warnings) {
             out.println("Warning: " + w);
         }
@@ -58,7 +68,16 @@ public final class SolveTableWriter {
     }
 
     public static void write(SolveResult r, List<String> warnings, PrintStream out) {
+        write(r, warnings, List.of(), out);
+    }
+
+    /** As above, with extra lines (e.g. the audit summary) before the caution. */
+    public static void write(SolveResult r, List<String> warnings, List<String> extra, PrintStream out) {
         body(r, out);
+        if (!extra.isEmpty()) {
+            out.println();
+            extra.forEach(out::println);
+        }
         for (String w : warnings) {
             out.println("Warning: " + w);
         }

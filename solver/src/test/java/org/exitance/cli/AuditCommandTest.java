@@ -36,4 +36,14 @@ class AuditCommandTest {
         assertThat(bad.exitCode()).isEqualTo(2);
         assertThat(bad.err().lines().count()).isEqualTo(1);
     }
+
+    @Test
+    void solveCarriesTheAuditUnlessAskedNotTo() throws Exception {
+        String c = RepoCases.root().resolve("cases/demo/selective-absorber-audit.json").toString();
+        JsonNode with = new ObjectMapper().readTree(CliRun.of("solve", "--json", c).out());
+        assertThat(with.get("audit").get("flagged").asInt()).isEqualTo(1);
+        JsonNode without = new ObjectMapper().readTree(CliRun.of("solve", "--json", "--no-audit", c).out());
+        assertThat(without.has("audit")).isFalse();
+        assertThat(CliRun.of("solve", c).out()).contains("Gray-body audit");
+    }
 }
