@@ -46,7 +46,11 @@ final class AuditCommand implements Callable<Integer> {
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE (never overwrites without --force).")
     private Path output;
 
-    @Option(names = "--force", description = "Allow --output to replace an existing file.")
+    @Option(names = "--plot", paramLabel = "FILE.png",
+            description = "Also draw the models side by side per surface (PNG; one file per load case: NAME-LOADCASE.png).")
+    private Path plot;
+
+    @Option(names = "--force", description = "Allow --output and --plot to replace existing files.")
     private boolean force;
 
     @Option(names = "--band-edges", paramLabel = "µm,µm,...", description = "Reference band edges in µm (default: the case's, or the default rule).")
@@ -86,6 +90,22 @@ final class AuditCommand implements Callable<Integer> {
             }
             return out;
         });
+        if (plot != null) {
+            if (!plot.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".png")) {
+                throw new UserError("--plot: the plot is written as PNG; give a file name ending in .png", ExitCodes.BAD_INPUT);
+            }
+            for (AuditResult a : audits) {
+                Path file = audits.size() == 1 ? plot : plot.resolveSibling(plot.getFileName().toString()
+                        .replaceAll("(?i)\\.png$", "") + "-" + a.name().replaceAll("[^A-Za-z0-9_.-]", "_") + ".png");
+                OutputTarget.write(file, force, null, ps -> {
+                    try {
+                        org.exitance.report.AuditPlot.writePng(base.title(), a, ps);
+                    } catch (java.io.IOException e) {
+                        throw new UserError(file + ": cannot write the plot: " + e.getMessage(), ExitCodes.BAD_INPUT);
+                    }
+                });
+            }
+        }
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);
         if (json) {

@@ -46,4 +46,18 @@ class AuditCommandTest {
         assertThat(without.has("audit")).isFalse();
         assertThat(CliRun.of("solve", c).out()).contains("Gray-body audit");
     }
+
+    @Test
+    void thePlotIsAPngFileAndIsNotOverwrittenWithoutForce(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        String c = RepoCases.root().resolve("cases/demo/selective-absorber-audit.json").toString();
+        java.nio.file.Path png = dir.resolve("audit.png");
+        assertThat(CliRun.of("audit", "--plot", png.toString(), c).exitCode()).isEqualTo(0);
+        byte[] head = java.util.Arrays.copyOf(java.nio.file.Files.readAllBytes(png), 8);
+        // PNG signature (ISO/IEC 15948)
+        assertThat(head).isEqualTo(new byte[] {(byte) 0x89, 'P', 'N', 'G', 0x0D, 0x0A, 0x1A, 0x0A});
+        CliRun again = CliRun.of("audit", "--plot", png.toString(), c);
+        assertThat(again.exitCode()).isEqualTo(2);
+        assertThat(again.err()).contains("exists");
+    }
 }
