@@ -38,8 +38,14 @@ final class MaterialReader {
     }
 
     private static Material read(String name, JsonCursor m, Path caseDir) throws CaseException {
+        Material base = readProperties(name, m, caseDir);
+        return m.has("emissivityUncertainty")
+                ? base.withEmissivityUncertainty(m.field("emissivityUncertainty").fraction()) : base;
+    }
+
+    private static Material readProperties(String name, JsonCursor m, Path caseDir) throws CaseException {
         m.allowOnly("emissivity", "spectralEmissivity", "transmissivity", "spectralTransmissivity", "reflectivity",
-                "spectralReflectivity", "description");
+                "spectralReflectivity", "emissivityUncertainty", "description");
         String description = m.has("description") ? m.field("description").text() : "";
         boolean window = m.has("transmissivity") || m.has("spectralTransmissivity") || m.has("reflectivity")
                 || m.has("spectralReflectivity");

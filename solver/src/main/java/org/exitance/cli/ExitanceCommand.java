@@ -16,7 +16,7 @@ import picocli.CommandLine.Command;
         versionProvider = ExitanceCommand.VersionProvider.class,
         description = {"Thermal radiation exchange in enclosures whose surfaces are not gray:",
                 "band-wise radiosity network, net heat flows and unknown temperatures."},
-        subcommands = {SolveCommand.class, CheckCommand.class, ViewFactorsCommand.class, AuditCommand.class, VerifyCommand.class, MaterialCommand.class,
+        subcommands = {SolveCommand.class, CheckCommand.class, ViewFactorsCommand.class, AuditCommand.class, SensitivityCommand.class, VerifyCommand.class, MaterialCommand.class,
                 CommandLine.HelpCommand.class},
         footer = {"", ExitCodes.HELP, "Documentation: README.md and docs/ in the source tree."})
 public final class ExitanceCommand implements Runnable {

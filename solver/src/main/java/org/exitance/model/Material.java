@@ -17,19 +17,34 @@ import org.exitance.spectral.SpectralEmissivity;
  * @param transmissivity  spectral hemispherical transmissivity model, or null for an opaque material;
  *                        ε_λ + τ_λ ≤ 1 at every wavelength (checked where the material is read)
  * @param description     free text from the case, may be empty
+ * @param emissivityUncertainty  ± bound on ε (absolute, every wavelength), or NaN when not given;
+ *                        used to propagate property uncertainty into results
  */
 public record Material(String name, SpectralEmissivity emissivity, SpectralEmissivity transmissivity,
-                       String description) {
+                       String description, double emissivityUncertainty) {
 
     /** An opaque material (τ = 0, ρ = 1 − ε). */
     public Material(String name, SpectralEmissivity emissivity, String description) {
         this(name, emissivity, null, description);
     }
 
+    /** A material without a stated uncertainty. */
+    public Material(String name, SpectralEmissivity emissivity, SpectralEmissivity transmissivity, String description) {
+        this(name, emissivity, transmissivity, description, Double.NaN);
+    }
+
+    /** The same material with a ± bound on ε. */
+    public Material withEmissivityUncertainty(double plusMinus) {
+        return new Material(name, emissivity, transmissivity, description, plusMinus);
+    }
+
     public Material {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(emissivity, "emissivity");
         description = description == null ? "" : description;
+        if (!Double.isNaN(emissivityUncertainty) && !(emissivityUncertainty >= 0 && emissivityUncertainty <= 1)) {
+            throw new IllegalArgumentException("emissivity uncertainty must lie in [0, 1]: " + emissivityUncertainty);
+        }
     }
 
     /** True when the material passes radiation (it then belongs on a window: two faces, one temperature). */

@@ -113,6 +113,28 @@ public final class BandNetwork {
         return out;
     }
 
+    /**
+     * Change of every surface's net flux when surface j's band emissivity (and with it its
+     * absorptivity for external irradiation) rises by one, at fixed emissive powers:
+     * {@code x = (I − ρF − TF)⁻¹ e_j (E_j − G_j)}, then {@code ∂q/∂ε_j = x − F x} (W/m² per unit ε).
+     *
+     * @param j                     the surface
+     * @param emissiveMinusIrradiation  E_j − G_j of the solved state (W/m²)
+     * @return a new array of length N
+     */
+    public double[] emissivitySensitivity(int j, double emissiveMinusIrradiation) {
+        double[] b = new double[n];
+        b[j] = emissiveMinusIrradiation;
+        double[] x = new double[n];
+        prepared.solve(b, x);
+        double[] fx = irradiationFrom(x, new double[n]);
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            out[i] = x[i] - fx[i];
+        }
+        return out;
+    }
+
     /** G = F J + H; arrays not modified, result new. */
     private double[] irradiationFrom(double[] j, double[] external) {
         double[] g = new double[n];

@@ -153,12 +153,9 @@ public final class TemperatureSolver {
         }
     }
 
-    /** Damped Newton with fixed band properties. */
-    private double[] newton(Problem p, List<Band> bands, BandNetwork[] nets, double[] start, Counters counters) {
-        int[] u = p.unknown;
-        int m = u.length;
-        int nb = bands.size();
-        // ∂q_i/∂E_v per band and unknown v: sens[k][b][i]
+    /** ∂q_i/∂E_v per band and unknown node v, [band][node][surface]; a window node adds both faces. */
+    private static double[][][] nodeSensitivities(Problem p, int nb, BandNetwork[] nets) {
+        int m = p.unknown.length;
         double[][][] sens = new double[nb][m][];
         for (int k = 0; k < nb; k++) {
             for (int b = 0; b < m; b++) {
@@ -172,6 +169,116 @@ public final class TemperatureSolver {
                 }
             }
         }
+        return sens;
+    }
+
+    /** ∂R_a/∂T_b (W/K) of the unknown nodes at temperatures t (K, not modified). */
+    private static DMatrixRMaj jacobian(Problem p, List<Band> bands, double[][][] sens, double[] t) {
+        int[] u = p.unknown;
+        int m = u.length;
+        DMatrixRMaj jac = new DMatrixRMaj(m, m);
+        for (int a = 0; a < m; a++) {
+            for (int b = 0; b < m; b++) {
+                double s = 0;
+                for (int k = 0; k < bands.size(); k++) {
+                    double de = BandProperties.emissivePowerDerivative(bands.get(k), t[u[b]]);
+                    for (int i : p.faces[a]) {
+                        s += p.area[i] * sens[k][b][i] * de;
+                    }
+                }
+                double other = p.allPaths[a] ? p.otherPathsDerivative(a, b) : 0.0;
+                jac.set(a, b, s + other);
+            }
+        }
+        return jac;
+    }
+
+    /**
+     * Sensitivities of every surface's net heat (W) and temperature (K) to the band-mean
+     * emissivity of every surface in every band, at the converged state of a solve with these bands.
+     * The parameter ε_jk stands for ε_λ of surface j raised uniformly inside band k, so that its
+     * absorptivity for external sources in that band rises with it. Tangent-linear method: for each
+     * parameter, one solve with the band's factored matrix, {@code (I − ρF − TF) x = e_j (E_j − G_j)},
+     * gives the flux change at fixed temperatures, {@code x − F x}; the temperature change follows
+     * from Newton's Jacobian, {@code ΔT = −J⁻¹ ∂R/∂ε} (implicit function theorem). The band means'
+     * own drift with temperature (Planck weighting, ε(λ, T) tables) is held fixed: exact where ε is
+     * constant inside each band.
+     *
+     * @return [surface i][surface j][band k] derivatives ∂Q_i/∂ε_jk and ∂T_i/∂ε_jk
+     */
+    public EmissivitySensitivities sensitivities(BandSet bandSet) {
+        SolveResult solved = solve(bandSet);
+        Enclosure enc = radiationCase.enclosure();
+        int n = enc.size();
+        List<Band> bands = bandSet.bands();
+        int nb = bands.size();
+        Problem p = new Problem(enc, linear);
+        double[] t = new double[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = solved.surfaces().get(i).temperatureK();
+        }
+        double[][] eps = BandProperties.emissivities(enc.surfaces(), bands, t);
+        BandNetwork[] nets = networks(p, bands, eps, t);
+        BandState[] states = solveBands(p, bands, nets, t, new Counters());
+        int m = p.unknown.length;
+        double[][][] sens = nodeSensitivities(p, nb, nets);
+        LinearSolverDense<DMatrixRMaj> lu = null;
+        if (m > 0) {
+            lu = LinearSolverFactory_DDRM.lu(m);
+            if (!lu.setA(jacobian(p, bands, sens, t))) {
+                throw new IllPosedCaseException("the heat balances do not determine the unknown temperatures"
+                        + " (singular Jacobian)");
+            }
+        }
+        double[][][] dq = new double[n][n][nb];
+        double[][][] dT = new double[n][n][nb];
+        for (int k = 0; k < nb; k++) {
+            Band b = bands.get(k);
+            for (int j = 0; j < n; j++) {
+                double e = Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), t[j]);
+                double[] d = nets[k].emissivitySensitivity(j, e - states[k].irradiation()[j]);
+                double[] dt = new double[m];
+                if (m > 0) {
+                    DMatrixRMaj rhs = new DMatrixRMaj(m, 1);
+                    for (int a = 0; a < m; a++) {
+                        double r = 0;
+                        for (int i : p.faces[a]) {
+                            r += p.area[i] * d[i];
+                        }
+                        rhs.set(a, 0, -r);
+                    }
+                    DMatrixRMaj x = new DMatrixRMaj(m, 1);
+                    lu.solve(rhs, x);
+                    for (int a = 0; a < m; a++) {
+                        dt[a] = x.get(a, 0);
+                    }
+                }
+                for (int i = 0; i < n; i++) {
+                    double total = d[i];
+                    for (int kk = 0; kk < nb; kk++) {
+                        for (int a = 0; a < m; a++) {
+                            total += sens[kk][a][i] * BandProperties.emissivePowerDerivative(bands.get(kk), t[p.unknown[a]])
+                                    * dt[a];
+                        }
+                    }
+                    dq[i][j][k] = p.area[i] * total;
+                }
+                for (int a = 0; a < m; a++) {
+                    for (int i : p.faces[a]) {
+                        dT[i][j][k] = dt[a];
+                    }
+                }
+            }
+        }
+        return new EmissivitySensitivities(solved, dq, dT);
+    }
+
+    /** Damped Newton with fixed band properties. */
+    private double[] newton(Problem p, List<Band> bands, BandNetwork[] nets, double[] start, Counters counters) {
+        int[] u = p.unknown;
+        int m = u.length;
+        int nb = bands.size();
+        double[][][] sens = nodeSensitivities(p, nb, nets);
         double[] t = start.clone();
         double[] r = residual(p, bands, nets, t, counters);
         for (int it = 0; it < settings.maxNewtonIterations(); it++) {
@@ -181,20 +288,7 @@ public final class TemperatureSolver {
             if (rNorm <= tol) {
                 return t;
             }
-            DMatrixRMaj jac = new DMatrixRMaj(m, m);
-            for (int a = 0; a < m; a++) {
-                for (int b = 0; b < m; b++) {
-                    double s = 0;
-                    for (int k = 0; k < nb; k++) {
-                        double de = BandProperties.emissivePowerDerivative(bands.get(k), t[u[b]]);
-                        for (int i : p.faces[a]) {
-                            s += p.area[i] * sens[k][b][i] * de;
-                        }
-                    }
-                    double other = p.allPaths[a] ? p.otherPathsDerivative(a, b) : 0.0;
-                    jac.set(a, b, s + other);
-                }
-            }
+            DMatrixRMaj jac = jacobian(p, bands, sens, t);
             String dead = zeroColumn(p, jac);
             if (dead != null) {
                 throw new IllPosedCaseException("the temperature of surface '" + dead
