@@ -2,8 +2,6 @@ package org.exitance.geometry.external;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.CancellationException;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -65,29 +63,11 @@ final class FacetParallel {
                 th.setDaemon(true);
                 return th;
             });
-            try {
-                List<Future<?>> futures = new ArrayList<>();
-                for (int k = 0; k < nt; k++) {
-                    futures.add(pool.submit(body));
-                }
-                for (Future<?> fu : futures) {
-                    fu.get();
-                }
-            } catch (ExecutionException e) {
-                Throwable cause = e.getCause();
-                if (cause instanceof RuntimeException re) {
-                    throw re;
-                }
-                if (cause instanceof Error er) {
-                    throw er;
-                }
-                throw new IllegalStateException(cause);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new CancellationException("interrupted");
-            } finally {
-                pool.shutdownNow();
+            List<Future<?>> futures = new ArrayList<>();
+            for (int k = 0; k < nt; k++) {
+                futures.add(pool.submit(body));
             }
+            org.exitance.geometry.Workers.awaitAll(pool, futures);
         }
         long total = 0;
         for (long r : rays) {

@@ -56,8 +56,9 @@ public final class ObjReader {
                     if (tok.length < 4) {
                         throw new MeshFormatException(name, where, "expected 'v x y z'");
                     }
-                    vertices.add(new Vec3(num(tok[1], name, where) * options.scale(),
-                            num(tok[2], name, where) * options.scale(), num(tok[3], name, where) * options.scale()));
+                    double k = options.scale();
+                    vertices.add(new Vec3(MeshNumbers.parse(tok[1], name, where) * k,
+                            MeshNumbers.parse(tok[2], name, where) * k, MeshNumbers.parse(tok[3], name, where) * k));
                 }
                 case "f" -> {
                     if (tok.length < 4) {
@@ -92,17 +93,5 @@ public final class ObjReader {
                     + " vertices read so far)");
         }
         return resolved;
-    }
-
-    private static double num(String s, String name, String where) throws MeshFormatException {
-        try {
-            double v = Double.parseDouble(s);
-            if (!Double.isFinite(v)) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new MeshFormatException(name, where, "not a finite number: '" + s + "'");
-        }
     }
 }

@@ -128,7 +128,8 @@ public final class StlReader {
                     if (tok.length != 5 || !tok[1].equals("normal")) {
                         throw new MeshFormatException(name, where, "expected 'facet normal nx ny nz'");
                     }
-                    normal = new Vec3(num(tok[2], name, where), num(tok[3], name, where), num(tok[4], name, where));
+                    normal = new Vec3(MeshNumbers.parse(tok[2], name, where), MeshNumbers.parse(tok[3], name, where),
+                            MeshNumbers.parse(tok[4], name, where));
                     facet++;
                     facetLine = ln + 1;
                 }
@@ -148,8 +149,9 @@ public final class StlReader {
                     if (tok.length != 4) {
                         throw new MeshFormatException(name, where, "expected 'vertex x y z'");
                     }
-                    loop[nv++] = new Vec3(num(tok[1], name, where) * o.scale(), num(tok[2], name, where) * o.scale(),
-                            num(tok[3], name, where) * o.scale());
+                    double k = o.scale();
+                    loop[nv++] = new Vec3(MeshNumbers.parse(tok[1], name, where) * k,
+                            MeshNumbers.parse(tok[2], name, where) * k, MeshNumbers.parse(tok[3], name, where) * k);
                 }
                 case "endloop" -> {
                     if (nv != 3) {
@@ -186,15 +188,4 @@ public final class StlReader {
         }
     }
 
-    private static double num(String s, String name, String where) throws MeshFormatException {
-        try {
-            double v = Double.parseDouble(s);
-            if (!Double.isFinite(v)) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new MeshFormatException(name, where, "not a finite number: '" + s + "'");
-        }
-    }
 }

@@ -3,7 +3,6 @@ package org.exitance.geometry.viewfactor;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CancellationException;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -75,58 +74,40 @@ public final class ViewFactorCalculator {
             th.setDaemon(true);
             return th;
         });
-        try {
-            List<Future<?>> futures = new ArrayList<>();
-            for (int w = 0; w < threads; w++) {
-                futures.add(pool.submit(() -> {
-                    PairEvaluator ev = new PairEvaluator(t, occluders, rule, options.contourOrder(),
-                            options.visibilityOrder());
-                    for (int c = nextChunk.getAndIncrement(); c < chunks; c = nextChunk.getAndIncrement()) {
-                        java.util.Arrays.fill(ev.counters, 0);
-                        double[] err = chunkError[c];
-                        for (int i = c; i < n; i += chunks) {
-                            if (cancelRequested.getAsBoolean()) {
-                                throw new CancellationException("view-factor computation cancelled");
-                            }
-                            for (int j = i + 1; j < n; j++) {
-                                double s = ev.exchangeArea(i, j);
-                                f[i * n + j] = s / t.area[i];
-                                f[j * n + i] = s / t.area[j];
-                                err[i] += ev.lastError;
-                                err[j] += ev.lastError;
-                            }
-                            long done = pairsDone.addAndGet(n - 1 - i);
-                            synchronized (lock) {
-                                double frac = done / totalPairs;
-                                if (frac > reported[0]) {
-                                    reported[0] = frac;
-                                    progress.progress(Math.min(1, frac));
-                                }
+        List<Future<?>> futures = new ArrayList<>();
+        for (int w = 0; w < threads; w++) {
+            futures.add(pool.submit(() -> {
+                PairEvaluator ev = new PairEvaluator(t, occluders, rule, options.contourOrder(),
+                        options.visibilityOrder());
+                for (int c = nextChunk.getAndIncrement(); c < chunks; c = nextChunk.getAndIncrement()) {
+                    java.util.Arrays.fill(ev.counters, 0);
+                    double[] err = chunkError[c];
+                    for (int i = c; i < n; i += chunks) {
+                        if (cancelRequested.getAsBoolean()) {
+                            throw new CancellationException("view-factor computation cancelled");
+                        }
+                        for (int j = i + 1; j < n; j++) {
+                            double s = ev.exchangeArea(i, j);
+                            f[i * n + j] = s / t.area[i];
+                            f[j * n + i] = s / t.area[j];
+                            err[i] += ev.lastError;
+                            err[j] += ev.lastError;
+                        }
+                        long done = pairsDone.addAndGet(n - 1 - i);
+                        synchronized (lock) {
+                            double frac = done / totalPairs;
+                            if (frac > reported[0]) {
+                                reported[0] = frac;
+                                progress.progress(Math.min(1, frac));
                             }
                         }
-                        System.arraycopy(ev.counters, 0, chunkCounts[c], 0, PairEvaluator.COUNTERS);
                     }
-                    return null;
-                }));
-            }
-            for (Future<?> fu : futures) {
-                fu.get();
-            }
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException re) {
-                throw re;
-            }
-            if (cause instanceof Error er) {
-                throw er;
-            }
-            throw new IllegalStateException(cause);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new CancellationException("interrupted");
-        } finally {
-            pool.shutdownNow();
+                    System.arraycopy(ev.counters, 0, chunkCounts[c], 0, PairEvaluator.COUNTERS);
+                }
+                return null;
+            }));
         }
+        org.exitance.geometry.Workers.awaitAll(pool, futures);
         long[] counts = new long[PairEvaluator.COUNTERS];
         double[] rowError = new double[n];
         for (int c = 0; c < chunks; c++) {
