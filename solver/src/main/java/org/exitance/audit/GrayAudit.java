@@ -46,7 +46,14 @@ public final class GrayAudit {
      * @param name         label of this audit (load case)
      */
     public static AuditResult run(RadiationCase c, BandSet bands, double thresholdPct, String name) {
-        SolveResult band = new TemperatureSolver(c).solve(bands);
+        return run(c, new TemperatureSolver(c).solve(bands), thresholdPct, name);
+    }
+
+    /**
+     * As {@link #run(RadiationCase, BandSet, double, String)} with the reference band-wise solution
+     * already at hand (it is not solved again).
+     */
+    public static AuditResult run(RadiationCase c, SolveResult band, double thresholdPct, String name) {
         SolveResult gray = new TemperatureSolver(c).withExternalAbsorption(ExternalAbsorption.OWN_EMISSIVITY)
                 .solve(BandSet.gray("gray shortcut"));
         SolveResult two = c.sources().isEmpty() ? null

@@ -80,12 +80,12 @@ final class AuditCommand implements Callable<Integer> {
         List<AuditResult> audits = Runs.guarded(c, () -> {
             List<AuditResult> out = new ArrayList<>();
             if (base.loadCases().isEmpty()) {
-                out.add(GrayAudit.run(base, CaseSolver.bandsFor(base, override, bandTolerance), thresholdPct, "as given"));
+                out.add(GrayAudit.run(base, CaseSolver.solve(base, override, bandTolerance), thresholdPct, "as given"));
             }
             for (LoadCase lc : base.loadCases()) {
                 if (loadCase == null || loadCase.equals(lc.name())) {
                     RadiationCase v = lc.applyTo(base);
-                    out.add(GrayAudit.run(v, CaseSolver.bandsFor(v, override, bandTolerance), thresholdPct, lc.name()));
+                    out.add(GrayAudit.run(v, CaseSolver.solve(v, override, bandTolerance), thresholdPct, lc.name()));
                 }
             }
             return out;

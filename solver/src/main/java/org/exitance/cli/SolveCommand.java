@@ -119,8 +119,7 @@ final class SolveCommand implements Callable<Integer> {
             for (CaseSolver.LoadCaseResult r : results) {
                 RadiationCase v = c.model().loadCases().stream().filter(lc -> lc.name().equals(r.name())).findFirst()
                         .map(lc -> lc.applyTo(c.model())).orElse(c.model());
-                double[] edges = r.result().bands().stream().skip(1).mapToDouble(b -> b.lowerUm()).toArray();
-                out.add(GrayAudit.run(v, new BandSet(edges, r.result().bandOrigin()), thresholdPct, r.name()));
+                out.add(GrayAudit.run(v, r.result(), thresholdPct, r.name()));
             }
             return out;
         });
