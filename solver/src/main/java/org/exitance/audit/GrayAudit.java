@@ -74,9 +74,18 @@ public final class GrayAudit {
             rows.add(new AuditRow(b.name(), b.temperatureSolved(), b.netHeatW(), g.netHeatW(),
                     t == null ? Double.NaN : t.netHeatW(), b.temperatureK(), g.temperatureK(),
                     t == null ? Double.NaN : t.temperatureK(), errW, errK, pct, Math.abs(pct) > thresholdPct,
-                    cause(c.enclosure().surface(i), b, band.bands())));
+                    cause(surfaceNamed(c, b.name()), b, band.bands())));
         }
         return new AuditResult(name, thresholdPct, rows, band, gray, two);
+    }
+
+    /** The enclosure surface of a result row: itself, or for a case solved on facets its first facet. */
+    private static EnclosureSurface surfaceNamed(RadiationCase c, String name) {
+        int i = c.enclosure().indexOf(name);
+        if (i < 0 && c.facetGroups() != null) {
+            i = c.enclosure().indexOf(c.facetGroups().facetsBySurface().get(name).get(0));
+        }
+        return c.enclosure().surface(i);
     }
 
     /** The cause in numbers, from the band solution of one surface. */

@@ -162,10 +162,21 @@ public final class CaseReader {
             List<ConductiveLink> links = links(surfaces);
             ComputedViewFactors computed = null;
             double[][] f;
+            List<EnclosureSurface> solvedOn = surfaces;
+            FacetExpansion.Result facets = null;
             if (geometry != null) {
                 requireSameSurfaces(geometry, surfaces);
-                computed = ViewFactorStage.obtain(file, geometry, request);
+                computed = ViewFactorStage.obtain(file, geometry, request, geometry.solveOnFacets());
                 f = fromGeometry(computed, surfaces, env != null);
+                if (geometry.solveOnFacets()) {
+                    JsonCursor where = root.field("geometry").field("options").field("resolution");
+                    if (!links.isEmpty()) {
+                        throw where.error("conductive links join surfaces: leave \"resolution\" at \"surfaces\"");
+                    }
+                    facets = FacetExpansion.expand(computed, surfaces, where);
+                    solvedOn = facets.surfaces();
+                    f = facets.matrix();
+                }
             } else {
                 f = viewFactors(root.field("viewFactors"), surfaces, env != null);
             }
@@ -173,18 +184,21 @@ public final class CaseReader {
             SolverSettings settings = settings();
             Enclosure enclosure;
             try {
-                enclosure = new Enclosure(surfaces, f, env, links);
+                enclosure = new Enclosure(solvedOn, f, env, links);
             } catch (IllegalArgumentException e) {
                 throw root.error(e.getMessage());
             }
             List<ExternalSource> sources = root.has("sources")
                     ? SourceReader.read(root.field("sources"), surfaceNames(surfaces), file.toAbsolutePath().getParent(),
-                            geometry == null ? null : geometry.scene())
+                            geometry == null ? null : geometry.scene(), facets == null ? null : facets.sceneOrder())
                     : List.of();
+            if (facets != null) {
+                sources = FacetExpansion.spreadOverFacets(sources, facets.groups());
+            }
             List<LoadCase> loadCases = root.has("loadCases")
                     ? loadCases(root.field("loadCases"), surfaces, sources) : List.of();
             RadiationCase model = new RadiationCase(title, notes, new ArrayList<>(materials.values()), enclosure,
-                    bands, settings, sources, loadCases);
+                    bands, settings, sources, loadCases, facets == null ? null : facets.groups());
             ExpectedValues expected = root.has("expected")
                     ? expected(root.field("expected"), surfaces, env) : null;
             return new LoadedCase(file, model, warnings, expected, computed);

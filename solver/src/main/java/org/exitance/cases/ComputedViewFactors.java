@@ -22,13 +22,27 @@ import java.util.List;
  * @param geometryHash        SHA-256 of the geometry and options
  * @param seconds             compute time (s); 0 when loaded from the cache
  * @param fromCache           whether the numbers came from the cache
+ * @param facets              facet-level view factors when the case is solved on facets, else null
  */
 public record ComputedViewFactors(List<String> surfaceNames, double[] areasM2, double[][] matrix,
                                   double[] environmentFactors, int facetCount, double maxRowSumDeviation,
                                   double maxRowSumExcess,
                                   double maxReciprocityError, String worstRow, double maxRowErrorEstimate,
                                   String methodSummary, String smoothing, String geometryHash, double seconds,
-                                  boolean fromCache) {
+                                  boolean fromCache, FacetFactors facets) {
+
+    /**
+     * Facet-level view factors.
+     *
+     * @param areasM2      facet areas (m²), scene order
+     * @param surfaceIndex index into surfaceNames of each facet's surface
+     * @param matrix       F between facets, row-major n × n
+     */
+    public record FacetFactors(double[] areasM2, int[] surfaceIndex, double[] matrix) {
+        public int count() {
+            return areasM2.length;
+        }
+    }
     public ComputedViewFactors {
         surfaceNames = List.copyOf(surfaceNames);
     }
@@ -36,6 +50,7 @@ public record ComputedViewFactors(List<String> surfaceNames, double[] areasM2, d
     /** The same numbers, marked as loaded from the cache. */
     ComputedViewFactors cached() {
         return new ComputedViewFactors(surfaceNames, areasM2, matrix, environmentFactors, facetCount, maxRowSumDeviation,
-                maxRowSumExcess, maxReciprocityError, worstRow, maxRowErrorEstimate, methodSummary, smoothing, geometryHash, 0, true);
+                maxRowSumExcess, maxReciprocityError, worstRow, maxRowErrorEstimate, methodSummary, smoothing, geometryHash, 0, true,
+                facets);
     }
 }

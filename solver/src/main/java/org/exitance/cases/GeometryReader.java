@@ -36,7 +36,7 @@ final class GeometryReader {
     }
 
     /** A read geometry: the scene, the view-factor options, and notes about mesh repairs. */
-    record Geometry(Scene scene, ViewFactorOptions options, List<String> notes) {
+    record Geometry(Scene scene, ViewFactorOptions options, List<String> notes, boolean solveOnFacets) {
     }
 
     static Geometry read(JsonCursor g, Path caseDir) throws CaseException {
@@ -65,7 +65,16 @@ final class GeometryReader {
             throw g.error(e.getMessage());
         }
         ViewFactorOptions options = g.has("options") ? options(g.field("options")) : ViewFactorOptions.defaults();
-        return new Geometry(scene, options, notes);
+        boolean facets = false;
+        if (g.has("options") && g.field("options").has("resolution")) {
+            JsonCursor r = g.field("options").field("resolution");
+            facets = switch (r.text()) {
+                case "surfaces" -> false;
+                case "facets" -> true;
+                default -> throw r.error("must be \"surfaces\" or \"facets\", got \"" + r.text() + "\"");
+            };
+        }
+        return new Geometry(scene, options, notes, facets);
     }
 
     private static final String[] SHAPES = {"rectangle", "polygon", "disc", "annulus", "cylinder", "cone", "sphere",
@@ -270,7 +279,7 @@ final class GeometryReader {
     }
 
     private static ViewFactorOptions options(JsonCursor o) throws CaseException {
-        o.allowOnly("threads", "pairTolerance", "obstruction", "closure", "visibilityOrder");
+        o.allowOnly("threads", "pairTolerance", "obstruction", "closure", "visibilityOrder", "resolution");
         ViewFactorOptions v = ViewFactorOptions.defaults();
         if (o.has("threads")) {
             JsonCursor t = o.field("threads");

@@ -28,9 +28,15 @@ final class SourceReader {
     private SourceReader() {
     }
 
-    /** Per-surface factors of a geometry computation. */
-    private static Map<String, Double> factors(IncidenceResult r) {
+    /** Per-surface (or, with facet names, per-facet) factors of a geometry computation. */
+    private static Map<String, Double> factors(IncidenceResult r, List<String> facetNames) {
         Map<String, Double> out = new LinkedHashMap<>();
+        if (facetNames != null) {
+            for (int f = 0; f < facetNames.size(); f++) {
+                out.put(facetNames.get(f), Math.min(1.0, Math.max(0.0, r.facetFactors()[f])));
+            }
+            return out;
+        }
         for (int i = 0; i < r.surfaceNames().size(); i++) {
             out.put(r.surfaceNames().get(i), Math.min(1.0, Math.max(0.0, r.surfaceFactors()[i])));
         }
@@ -38,14 +44,14 @@ final class SourceReader {
     }
 
     /** {@code {"direction": [x, y, z], "altitude_m": h, "radius_m": R, "shadowing": false}}. */
-    private static Map<String, Double> planet(JsonCursor p, Scene scene) throws CaseException {
+    private static Map<String, Double> planet(JsonCursor p, Scene scene, List<String> facetNames) throws CaseException {
         p.allowOnly("direction", "altitude_m", "radius_m", "shadowing");
         Vec3 toward = direction(p.field("direction"));
         double altitude = p.field("altitude_m").positive();
         double radius = p.has("radius_m") ? p.field("radius_m").positive() : PlanetViewFactor.EARTH_RADIUS_M;
         boolean shadowing = p.has("shadowing") && p.field("shadowing").bool();
         return factors(shadowing ? new ShadowedPlanetView(scene).compute(toward, altitude, radius)
-                : PlanetViewFactor.compute(scene, toward, altitude, radius));
+                : PlanetViewFactor.compute(scene, toward, altitude, radius), facetNames);
     }
 
     private static Vec3 direction(JsonCursor c) throws CaseException {
@@ -66,6 +72,15 @@ final class SourceReader {
      */
     static List<ExternalSource> read(JsonCursor arr, Set<String> surfaceNames, Path caseDir, Scene scene)
             throws CaseException {
+        return read(arr, surfaceNames, caseDir, scene, null);
+    }
+
+    /**
+     * @param facetNames for a case solved on facets, the facets' names in scene order: a source placed
+     *                   by the geometry then gets a factor per facet; null to get one per surface
+     */
+    static List<ExternalSource> read(JsonCursor arr, Set<String> surfaceNames, Path caseDir, Scene scene,
+                                     List<String> facetNames) throws CaseException {
         List<ExternalSource> out = new ArrayList<>();
         Set<String> names = new java.util.HashSet<>();
         for (JsonCursor s : arr.elements()) {
@@ -108,9 +123,9 @@ final class SourceReader {
                 throw s.field(placement).error("\"" + placement + "\" needs a case with \"geometry\"; with a"
                         + " view-factor matrix give \"incidence\" per surface");
             } else if (placement.equals("direction")) {
-                incidence = factors(new CollimatedIncidence(scene).compute(direction(s.field("direction"))));
+                incidence = factors(new CollimatedIncidence(scene).compute(direction(s.field("direction"))), facetNames);
             } else {
-                incidence = planet(s.field("planet"), scene);
+                incidence = planet(s.field("planet"), scene, facetNames);
             }
             out.add(new ExternalSource(name, spectrum, irradiance, incidence));
         }

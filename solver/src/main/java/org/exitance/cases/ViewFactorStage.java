@@ -50,10 +50,16 @@ public final class ViewFactorStage {
         return abs.resolveSibling(abs.getFileName() + SUFFIX);
     }
 
-    static ComputedViewFactors obtain(Path caseFile, GeometryReader.Geometry g, Request req) throws CaseException {
+    /**
+     * @param facets also keep the facet-level factors (for a case solved on facets); the cache holds
+     *               surface factors only, so it is then neither read nor written
+     */
+    static ComputedViewFactors obtain(Path caseFile, GeometryReader.Geometry g, Request req, boolean facets)
+            throws CaseException {
         String hash = org.exitance.geometry.viewfactor.GeometryHash.of(g.scene(), g.options());
         Path cache = cacheFile(caseFile);
-        if (req.useCache()) {
+        boolean useCache = req.useCache() && !facets;
+        if (useCache) {
             ComputedViewFactors hit = read(cache, hash);
             if (hit != null) {
                 return hit;
@@ -67,14 +73,14 @@ public final class ViewFactorStage {
         } catch (org.exitance.geometry.GeometryException e) {
             throw new CaseException(caseFile, "$.geometry", e.getMessage());
         }
-        ComputedViewFactors out = summarize(r);
-        if (req.useCache()) {
+        ComputedViewFactors out = summarize(r, facets);
+        if (useCache) {
             write(cache, out);
         }
         return out;
     }
 
-    private static ComputedViewFactors summarize(ViewFactorResult r) {
+    private static ComputedViewFactors summarize(ViewFactorResult r, boolean facets) {
         ClosureDiagnostics c = r.facetClosure();
         MethodCounts m = r.methodCounts();
         String methods = String.format(java.util.Locale.ROOT,
@@ -87,7 +93,19 @@ public final class ViewFactorStage {
                 s.rmsChange(), s.clampedToZero()) : "none";
         return new ComputedViewFactors(r.surfaceNames(), r.surfaceAreas(), r.surfaceMatrix(), r.environmentFactors(),
                 r.facetCount(), c.maxRowSumError(), c.maxNegativeRemainder(), c.maxReciprocityError(), c.worstRow(),
-                r.maxRowErrorEstimate(), methods, smoothing, r.geometryHash(), r.seconds(), false);
+                r.maxRowErrorEstimate(), methods, smoothing, r.geometryHash(), r.seconds(), false,
+                facets ? facetFactors(r) : null);
+    }
+
+    private static ComputedViewFactors.FacetFactors facetFactors(ViewFactorResult r) {
+        int n = r.facetCount();
+        double[] f = new double[n * n];
+        double[] row = new double[n];
+        for (int i = 0; i < n; i++) {
+            r.copyFacetRow(i, row);
+            System.arraycopy(row, 0, f, i * n, n);
+        }
+        return new ComputedViewFactors.FacetFactors(r.facetAreas(), r.facetSurfaces(), f);
     }
 
     /** The cached numbers if the file exists, parses and carries this hash; else null. */
@@ -113,7 +131,7 @@ public final class ViewFactorStage {
                     n.get("maxRowSumDeviation").asDouble(), n.get("maxRowSumExcess").asDouble(),
                     n.get("maxReciprocityError").asDouble(), n.get("worstRow").asText(),
                     n.get("maxRowErrorEstimate").asDouble(), n.get("methods").asText(), n.get("smoothing").asText(),
-                    hash, 0, true);
+                    hash, 0, true, null);
         } catch (IOException | RuntimeException e) {
             return null; // unreadable or from another version: recompute and replace
         }

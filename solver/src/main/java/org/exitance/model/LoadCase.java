@@ -32,9 +32,19 @@ public record LoadCase(String name, String description, Map<String, BoundaryCond
     public RadiationCase applyTo(RadiationCase base) {
         Enclosure e = base.enclosure();
         List<EnclosureSurface> surfaces = new ArrayList<>();
+        FacetGroups groups = base.facetGroups();
         for (EnclosureSurface s : e.surfaces()) {
             BoundaryCondition bc = s.boundary();
-            if (!(bc instanceof BoundaryCondition.OnOtherFace)) {
+            String owner = groups == null ? null : groups.surfaceOf(s.name());
+            if (owner != null) {
+                if (boundaries.containsKey(owner)) {
+                    double area = 0;
+                    for (String f : groups.facetsBySurface().get(owner)) {
+                        area += e.surface(e.indexOf(f)).areaM2();
+                    }
+                    bc = FacetGroups.forFacet(boundaries.get(owner), s.areaM2(), area);
+                }
+            } else if (!(bc instanceof BoundaryCondition.OnOtherFace)) {
                 // a window's condition belongs to the pair: a replacement named on either face applies
                 bc = boundaries.getOrDefault(s.name(), s.otherFace() == null ? bc
                         : boundaries.getOrDefault(s.otherFace(), bc));
@@ -46,6 +56,6 @@ public record LoadCase(String name, String description, Map<String, BoundaryCond
                 .filter(x -> activeSources == null || activeSources.contains(x.name())).toList();
         return new RadiationCase(base.title() + " — " + name, base.notes(), base.materials(),
                 new Enclosure(surfaces, e.viewFactors(), e.environment(), e.links()), base.bands(), base.settings(),
-                sources, List.of());
+                sources, List.of(), groups);
     }
 }

@@ -15,10 +15,18 @@ import java.util.Objects;
  * @param settings   solver settings
  * @param sources    radiation arriving from outside the surfaces (sun, planet, lamp)
  * @param loadCases  named variants solved side by side; empty when the case is solved as given
+ * @param facetGroups for a case solved on facets, how facets group into the case's surfaces (results
+ *                    are reported by surface); null when the enclosure's surfaces are the case's
  */
 public record RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure,
                             BandSet bands, SolverSettings settings, List<ExternalSource> sources,
-                            List<LoadCase> loadCases) {
+                            List<LoadCase> loadCases, FacetGroups facetGroups) {
+
+    /** A case solved on its own surfaces. */
+    public RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure, BandSet bands,
+                         SolverSettings settings, List<ExternalSource> sources, List<LoadCase> loadCases) {
+        this(title, notes, materials, enclosure, bands, settings, sources, loadCases, null);
+    }
 
     /** A case without external sources or load cases. */
     public RadiationCase(String title, String notes, List<Material> materials, Enclosure enclosure, BandSet bands,
@@ -43,10 +51,10 @@ public record RadiationCase(String title, String notes, List<Material> materials
     }
 
     public RadiationCase withBands(BandSet newBands) {
-        return new RadiationCase(title, notes, materials, enclosure, newBands, settings, sources, loadCases);
+        return new RadiationCase(title, notes, materials, enclosure, newBands, settings, sources, loadCases, facetGroups);
     }
 
     public RadiationCase withEnclosure(Enclosure newEnclosure) {
-        return new RadiationCase(title, notes, materials, newEnclosure, bands, settings, sources, loadCases);
+        return new RadiationCase(title, notes, materials, newEnclosure, bands, settings, sources, loadCases, facetGroups);
     }
 }

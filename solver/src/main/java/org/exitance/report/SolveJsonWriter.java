@@ -65,6 +65,17 @@ public final class SolveJsonWriter {
                 o.put("heatSupplied_W", w.heatSuppliedW());
             }
         }
+        if (!r.facets().isEmpty()) {
+            ArrayNode fa = root.putArray("facets");
+            for (SurfaceResult f : r.facets()) {
+                ObjectNode o = fa.addObject();
+                o.put("name", f.name());
+                o.put("area_m2", f.areaM2());
+                o.put("temperature_K", f.temperatureK());
+                o.put("netHeat_W", f.netHeatW());
+                o.put("netFlux_W_m2", f.netFluxWPerM2());
+            }
+        }
         EnvironmentResult env = r.environment();
         if (env != null) {
             ObjectNode o = root.putObject("environment");

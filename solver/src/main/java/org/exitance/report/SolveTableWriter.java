@@ -105,6 +105,7 @@ public final class SolveTableWriter {
                     + " W = emitted − absorbed; heat supplied " + Numbers.power(w.heatSuppliedW()) + " W");
         }
         writeOtherPaths(r, out);
+        writeFacetSpread(r, out);
         for (var src : r.sources()) {
             out.println("Source '" + src.name() + "' (" + src.spectrum() + "): " + Numbers.power(src.incidentW())
                     + " W arrives, " + Numbers.power(src.absorbedW()) + " W absorbed where it lands, the rest reflected");
@@ -119,6 +120,29 @@ public final class SolveTableWriter {
         writeBandSplit(r, out);
         out.println();
         writeBalance(r, out);
+    }
+
+    /** For a solve on facets: how many facets, and each surface's facet temperature range. */
+    private static void writeFacetSpread(SolveResult r, PrintStream out) {
+        if (r.facets().isEmpty()) {
+            return;
+        }
+        out.println();
+        out.println("Solved on " + r.facets().size() + " facets (T above: area-weighted mean); facet temperatures:");
+        for (SurfaceResult s : r.surfaces()) {
+            double min = Double.POSITIVE_INFINITY;
+            double max = 0;
+            int count = 0;
+            for (SurfaceResult f : r.facets()) {
+                if (f.name().startsWith(s.name() + "#")) {
+                    min = Math.min(min, f.temperatureK());
+                    max = Math.max(max, f.temperatureK());
+                    count++;
+                }
+            }
+            out.println("  " + s.name() + ": " + count + " facets, " + Numbers.temperature(min) + "–"
+                    + Numbers.temperature(max) + " K");
+        }
     }
 
     /** Convection, conduction and heat supplied, when any surface has them. */

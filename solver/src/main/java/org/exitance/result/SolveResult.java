@@ -16,12 +16,23 @@ import org.exitance.model.Band;
  * @param energyScaleW       the power that balance is measured against: Σ_i A_i Σ_k J_ik plus the
  *                           environment's emission into the enclosure and P_ext (W)
  * @param solver             convergence report
+ * (windows: window pairs; facets: for a case solved on facets, every facet's own result; the
+ * surfaces then aggregate them)
  * @param sources            external sources and what they delivered
  * @param windows            one entry per window: its two faces (both also in {@code surfaces}) and their totals
  */
 public record SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
                           EnvironmentResult environment, double energyBalanceW, double energyScaleW,
-                          SolverReport solver, List<SourceResult> sources, List<WindowResult> windows) {
+                          SolverReport solver, List<SourceResult> sources, List<WindowResult> windows,
+                          List<SurfaceResult> facets) {
+
+    /** A result solved on the case's own surfaces (no facet detail). */
+    public SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
+                       EnvironmentResult environment, double energyBalanceW, double energyScaleW,
+                       SolverReport solver, List<SourceResult> sources, List<WindowResult> windows) {
+        this(title, bands, bandOrigin, surfaces, environment, energyBalanceW, energyScaleW, solver, sources, windows,
+                List.of());
+    }
 
     /** A result without windows. */
     public SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
@@ -31,6 +42,7 @@ public record SolveResult(String title, List<Band> bands, String bandOrigin, Lis
     }
 
     public SolveResult {
+        facets = List.copyOf(facets);
         bands = List.copyOf(bands);
         surfaces = List.copyOf(surfaces);
         sources = List.copyOf(sources);

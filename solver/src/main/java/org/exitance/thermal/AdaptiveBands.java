@@ -82,7 +82,7 @@ public final class AdaptiveBands {
 
     private static SolveResult relabel(SolveResult r, String origin) {
         return new SolveResult(r.title(), r.bands(), origin, r.surfaces(), r.environment(), r.energyBalanceW(),
-                r.energyScaleW(), r.solver(), r.sources(), r.windows());
+                r.energyScaleW(), r.solver(), r.sources(), r.windows(), r.facets());
     }
 
     /** Largest change between two solves, in W (see class doc). */

@@ -105,7 +105,8 @@ public final class TemperatureSolver {
         double[][] eps = BandProperties.emissivities(enc.surfaces(), bands, t);
         BandNetwork[] nets = networks(p, bands, eps, t);
         BandState[] states = solveBands(p, bands, nets, t, counters);
-        return new ResultAssembler(radiationCase, linearName).assemble(p, bandSet, bands, eps, states, t, counters);
+        SolveResult r = new ResultAssembler(radiationCase, linearName).assemble(p, bandSet, bands, eps, states, t, counters);
+        return radiationCase.facetGroups() == null ? r : FacetAggregation.bySurface(r, radiationCase.facetGroups());
     }
 
     /** Outer loop over property updates around a Newton solve; returns converged temperatures. */
@@ -207,6 +208,10 @@ public final class TemperatureSolver {
      * @return [surface i][surface j][band k] derivatives ∂Q_i/∂ε_jk and ∂T_i/∂ε_jk
      */
     public EmissivitySensitivities sensitivities(BandSet bandSet) {
+        if (radiationCase.facetGroups() != null) {
+            throw new IllPosedCaseException("sensitivities are computed on surfaces: set the geometry's"
+                    + " \"resolution\" to \"surfaces\"");
+        }
         SolveResult solved = solve(bandSet);
         Enclosure enc = radiationCase.enclosure();
         int n = enc.size();

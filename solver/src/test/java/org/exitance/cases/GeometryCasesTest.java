@@ -154,4 +154,63 @@ class GeometryCasesTest {
         assertThatThrownBy(() -> CaseReader.read(c)).isInstanceOf(CaseException.class)
                 .hasMessageContaining("$.sources[0].direction").hasMessageContaining("geometry");
     }
+
+    private static final String CAVITY = """
+            {"materials": {"black": {"emissivity": 1.0}, "grey": {"emissivity": 0.6}},
+             "geometry": {"parts": [{"cylindricalCavity": {"baseCenter_m": [0, 0, 0], "axis": [0, 0, 1],
+                "radius_m": 0.2, "height_m": 0.3, "divisions": [12, 3, 2],
+                "faces": {"wall": "wall", "base": "base", "lid": "lid"}}}],
+                "options": {"resolution": "%s"}},
+             "surfaces": [
+               {"name": "wall", "material": "%s", "temperature_K": 900},
+               {"name": "base", "material": "%s", "temperature_K": 500},
+               {"name": "lid", "material": "%s", %s}]}
+            """;
+
+    private static SolveResult cavity(Path dir, String resolution, String material, String lid) throws Exception {
+        Path c = dir.resolve(resolution + material + ".json");
+        Files.writeString(c, CAVITY.formatted(resolution, material, material, material, lid));
+        return CaseSolver.solve(CaseReader.read(c).model(), null);
+    }
+
+    @Test
+    void blackSurfacesGiveTheSameHeatsOnFacetsAsOnSurfaces(@TempDir Path dir) throws Exception {
+        // Black isothermal surfaces: Q_I = Σ_J A_I F_IJ σ (T_I⁴ − T_J⁴) with F_IJ the area-weighted sum
+        // of the facet factors (view-factor algebra; common practice), so both resolutions agree.
+        SolveResult s = cavity(dir, "surfaces", "black", "\"temperature_K\": 300");
+        SolveResult f = cavity(dir, "facets", "black", "\"temperature_K\": 300");
+        assertThat(f.facets()).hasSizeGreaterThan(3);
+        for (SurfaceResult a : s.surfaces()) {
+            assertThat(f.surface(a.name()).netHeatW()).isCloseTo(a.netHeatW(), within(1e-9 * Math.abs(a.netHeatW())));
+        }
+    }
+
+    @Test
+    void anAdiabaticSurfaceOnFacetsBalancesFacetByFacet(@TempDir Path dir) throws Exception {
+        SolveResult f = cavity(dir, "facets", "grey", "\"adiabatic\": true");
+        assertThat(f.relativeEnergyBalance()).isLessThan(1e-9);
+        double min = Double.POSITIVE_INFINITY;
+        double max = 0;
+        for (SurfaceResult x : f.facets()) {
+            if (x.name().startsWith("lid#")) {
+                // every facet of a reradiating wall has zero net radiative heat (common practice)
+                assertThat(x.netHeatW()).isCloseTo(0, within(1e-9 * f.energyScaleW()));
+                min = Math.min(min, x.temperatureK());
+                max = Math.max(max, x.temperatureK());
+            }
+        }
+        assertThat(max - min).as("the lid's facets see the hot wall differently").isGreaterThan(1.0);
+        assertThat(f.surface("lid").temperatureK()).isBetween(min, max);
+    }
+
+    @Test
+    void conductiveLinksNeedSurfaceResolution(@TempDir Path dir) throws Exception {
+        Path c = dir.resolve("links.json");
+        String text = CAVITY.formatted("facets", "grey", "grey", "grey", "\"adiabatic\": true")
+                .replaceFirst("\"surfaces\": \\[", "\"conductiveLinks\": [{\"between\": [\"lid\", \"base\"],"
+                        + " \"conductance_W_K\": 1}], \"surfaces\": [");
+        Files.writeString(c, text);
+        assertThatThrownBy(() -> CaseReader.read(c)).isInstanceOf(CaseException.class)
+                .hasMessageContaining("$.geometry.options.resolution");
+    }
 }

@@ -1,0 +1,88 @@
+package org.exitance.cases;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.ExternalSource;
+import org.exitance.model.FacetGroups;
+
+/**
+ * Turns a geometry case solved on facets into an enclosure of facets: each facet of surface S
+ * becomes an enclosure surface {@code S#k} with S's material, convection and boundary condition
+ * as a facet carries it ({@link FacetGroups#forFacet}), and the facet view-factor matrix. Results
+ * are reported back by surface.
+ */
+final class FacetExpansion {
+    /**
+     * @param surfaces    the facet surfaces, case-surface order then scene order within a surface
+     * @param matrix      facet view factors in that order
+     * @param groups      the grouping back to the case's surfaces
+     * @param sceneOrder  facet names in scene order (as the geometry numbers facets)
+     */
+    record Result(List<EnclosureSurface> surfaces, double[][] matrix, FacetGroups groups, List<String> sceneOrder) {
+    }
+
+    private FacetExpansion() {
+    }
+
+    static Result expand(ComputedViewFactors v, List<EnclosureSurface> caseSurfaces, JsonCursor where)
+            throws CaseException {
+        ComputedViewFactors.FacetFactors ff = v.facets();
+        int n = ff.count();
+        String[] sceneNames = new String[n];
+        int[] counter = new int[v.surfaceNames().size()];
+        for (int f = 0; f < n; f++) {
+            int s = ff.surfaceIndex()[f];
+            sceneNames[f] = FacetGroups.facetName(v.surfaceNames().get(s), ++counter[s]);
+        }
+        List<EnclosureSurface> out = new ArrayList<>();
+        List<Integer> order = new ArrayList<>();
+        Map<String, List<String>> groups = new LinkedHashMap<>();
+        for (EnclosureSurface s : caseSurfaces) {
+            if (s.isWindowFace()) {
+                throw where.error("windows are solved on surfaces: leave \"resolution\" at \"surfaces\" (surface '"
+                        + s.name() + "' is a window face)");
+            }
+            int si = v.surfaceNames().indexOf(s.name());
+            List<String> names = new ArrayList<>();
+            for (int f = 0; f < n; f++) {
+                if (ff.surfaceIndex()[f] == si) {
+                    double a = ff.areasM2()[f];
+                    out.add(new EnclosureSurface(sceneNames[f], s.material(), a,
+                            FacetGroups.forFacet(s.boundary(), a, s.areaM2()), s.initialTemperatureK(), s.convection()));
+                    order.add(f);
+                    names.add(sceneNames[f]);
+                }
+            }
+            groups.put(s.name(), names);
+        }
+        double[][] m = new double[n][n];
+        for (int a = 0; a < n; a++) {
+            int fa = order.get(a);
+            for (int b = 0; b < n; b++) {
+                m[a][b] = Math.max(0.0, ff.matrix()[fa * n + order.get(b)]);
+            }
+        }
+        return new Result(out, m, new FacetGroups(groups), List.of(sceneNames));
+    }
+
+    /** Spreads incidence factors given per case surface onto that surface's facets. */
+    static List<ExternalSource> spreadOverFacets(List<ExternalSource> sources, FacetGroups groups) {
+        List<ExternalSource> out = new ArrayList<>();
+        for (ExternalSource src : sources) {
+            Map<String, Double> inc = new LinkedHashMap<>();
+            for (Map.Entry<String, Double> e : src.incidence().entrySet()) {
+                List<String> facets = groups.facetsBySurface().get(e.getKey());
+                if (facets == null) {
+                    inc.put(e.getKey(), e.getValue()); // already per facet
+                } else {
+                    facets.forEach(f -> inc.put(f, e.getValue()));
+                }
+            }
+            out.add(new ExternalSource(src.name(), src.spectrum(), src.irradianceWPerM2(), inc));
+        }
+        return out;
+    }
+}
