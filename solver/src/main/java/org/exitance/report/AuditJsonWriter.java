@@ -12,9 +12,7 @@ public final class AuditJsonWriter {
     }
 
     public static ObjectNode toJson(String caseFile, List<AuditResult> audits) {
-        ObjectNode root = SolveJsonWriter.MAPPER.createObjectNode();
-        root.put("program", "exitance");
-        root.put("version", Version.get());
+        ObjectNode root = SolveJsonWriter.document();
         root.put("case", caseFile);
         ArrayNode arr = root.putArray("audits");
         for (AuditResult a : audits) {

@@ -25,9 +25,7 @@ public final class MaterialJsonWriter {
      * @param surveys one per material, all with the same sources
      */
     public static ObjectNode toJson(String file, boolean isCase, String title, List<MaterialSurvey> surveys) {
-        ObjectNode root = SolveJsonWriter.MAPPER.createObjectNode();
-        root.put("program", "exitance");
-        root.put("version", Version.get());
+        ObjectNode root = SolveJsonWriter.document();
         root.put("file", file);
         root.put("fileKind", isCase ? "case" : "materials");
         root.put("title", title);

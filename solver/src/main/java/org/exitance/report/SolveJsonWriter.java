@@ -22,10 +22,16 @@ public final class SolveJsonWriter {
     private SolveJsonWriter() {
     }
 
-    public static ObjectNode toJson(SolveResult r, String caseFile, List<String> warnings) {
+    /** A new JSON document carrying the program's name and version, as every machine output starts. */
+    public static ObjectNode document() {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("program", "exitance");
         root.put("version", Version.get());
+        return root;
+    }
+
+    public static ObjectNode toJson(SolveResult r, String caseFile, List<String> warnings) {
+        ObjectNode root = SolveJsonWriter.document();
         root.put("case", caseFile);
         root.put("title", r.title());
         ArrayNode bands = root.putArray("bands");
@@ -121,9 +127,7 @@ public final class SolveJsonWriter {
     /** Several load cases: {@code loadCases[] {name, description, result}} with one result each. */
     public static ObjectNode loadCasesToJson(List<CaseSolver.LoadCaseResult> results, String caseFile,
                                              List<String> warnings) {
-        ObjectNode root = MAPPER.createObjectNode();
-        root.put("program", "exitance");
-        root.put("version", Version.get());
+        ObjectNode root = SolveJsonWriter.document();
         root.put("case", caseFile);
         ArrayNode arr = root.putArray("loadCases");
         for (CaseSolver.LoadCaseResult r : results) {
