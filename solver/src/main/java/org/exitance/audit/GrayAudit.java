@@ -11,7 +11,7 @@ import org.exitance.model.RadiationCase;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.spectral.BandAverages;
-import org.exitance.thermal.ExternalAbsorption;
+import org.exitance.bands.ExternalAbsorption;
 import org.exitance.thermal.TemperatureSolver;
 
 /**
@@ -54,7 +54,7 @@ public final class GrayAudit {
      * already at hand (it is not solved again).
      */
     public static AuditResult run(RadiationCase c, SolveResult band, double thresholdPct, String name) {
-        SolveResult gray = new TemperatureSolver(c).withExternalAbsorption(ExternalAbsorption.OWN_EMISSIVITY)
+        SolveResult gray = new TemperatureSolver(c, ExternalAbsorption.OWN_EMISSIVITY)
                 .solve(BandSet.gray("gray shortcut"));
         SolveResult two = c.sources().isEmpty() ? null
                 : new TemperatureSolver(c).solve(new BandSet(new double[] {TWO_BAND_SPLIT_UM}, "solar + infrared"));

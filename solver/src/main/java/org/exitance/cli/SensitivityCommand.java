@@ -22,7 +22,8 @@ import org.exitance.report.Numbers;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.report.TextTable;
 import org.exitance.thermal.CaseSolver;
-import org.exitance.thermal.EmissivitySensitivities;
+import org.exitance.sensitivity.EmissivitySensitivities;
+import org.exitance.sensitivity.TangentLinear;
 import org.exitance.thermal.TemperatureSolver;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -86,8 +87,8 @@ final class SensitivityCommand implements Callable<Integer> {
                     + "' is fixed; study its net-heat", ExitCodes.BAD_INPUT);
         }
         BandSet override = BandOption.parse(bandEdges, false);
-        EmissivitySensitivities s = Runs.guarded(c, () -> new TemperatureSolver(model)
-                .sensitivities(CaseSolver.bandsFor(model, override)));
+        EmissivitySensitivities s = Runs.guarded(c, () -> TangentLinear.compute(model,
+                CaseSolver.bandsFor(model, override)));
         List<Band> bands = s.solved().bands();
         double[][] d = temperature ? s.temperature()[i] : s.netHeat()[i];
         double value = temperature ? s.solved().surfaces().get(i).temperatureK() : s.solved().surfaces().get(i).netHeatW();

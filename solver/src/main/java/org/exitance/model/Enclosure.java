@@ -14,38 +14,52 @@ import java.util.Set;
  * and reciprocity against a tolerance happens where the matrix is read; this type only checks
  * shape and ranges.
  *
- * @param surfaces     the surfaces, in case order
- * @param viewFactors  N×N matrix, copied
- * @param environment  the surroundings, or null for a closed enclosure
- * @param links        conductive links between surfaces (by name)
+ * <p>The view-factor matrix is held once ({@link ViewFactorMatrix}): an enclosure built from rows
+ * copies them once; one built from a matrix shares it (as do {@link #withSurfaces} and the load
+ * cases derived from it).
  */
-public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment,
-                        List<ConductiveLink> links) {
+public final class Enclosure {
+    private final List<EnclosureSurface> surfaces;
+    private final ViewFactorMatrix viewFactors;
+    private final Environment environment;
+    private final List<ConductiveLink> links;
 
-    /** An enclosure without conductive links. */
+    /** An enclosure without conductive links; the rows are copied once. */
     public Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment) {
         this(surfaces, viewFactors, environment, List.of());
     }
 
-    public Enclosure {
-        surfaces = List.copyOf(surfaces);
-        links = List.copyOf(links);
-        int n = surfaces.size();
+    /**
+     * @param surfaces     the surfaces, in case order
+     * @param viewFactors  N×N matrix as rows; copied once, not modified
+     * @param environment  the surroundings, or null for a closed enclosure
+     * @param links        conductive links between surfaces (by name)
+     */
+    public Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment,
+                     List<ConductiveLink> links) {
+        this(surfaces, rows(viewFactors, surfaces.size()), environment, links);
+    }
+
+    /**
+     * @param surfaces     the surfaces, in case order
+     * @param viewFactors  the N×N matrix, shared (not copied)
+     * @param environment  the surroundings, or null for a closed enclosure
+     * @param links        conductive links between surfaces (by name)
+     */
+    public Enclosure(List<EnclosureSurface> surfaces, ViewFactorMatrix viewFactors, Environment environment,
+                     List<ConductiveLink> links) {
+        this.surfaces = List.copyOf(surfaces);
+        this.links = List.copyOf(links);
+        this.environment = environment;
+        int n = this.surfaces.size();
         if (n == 0) {
             throw new IllegalArgumentException("an enclosure needs at least one surface");
         }
         Objects.requireNonNull(viewFactors, "viewFactors");
-        if (viewFactors.length != n) {
-            throw new IllegalArgumentException("view-factor matrix has " + viewFactors.length + " rows for " + n + " surfaces");
+        if (viewFactors.size() != n) {
+            throw new IllegalArgumentException("view-factor matrix has " + viewFactors.size() + " rows for " + n + " surfaces");
         }
-        double[][] copy = new double[n][];
-        for (int i = 0; i < n; i++) {
-            if (viewFactors[i].length != n) {
-                throw new IllegalArgumentException("view-factor row " + i + " has " + viewFactors[i].length + " entries for " + n + " surfaces");
-            }
-            copy[i] = viewFactors[i].clone();
-        }
-        viewFactors = copy;
+        this.viewFactors = viewFactors;
         Set<String> names = new HashSet<>();
         for (EnclosureSurface s : surfaces) {
             if (!names.add(s.name())) {
@@ -57,7 +71,40 @@ public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors,
                 throw new IllegalArgumentException("conductive link names an unknown surface: " + l);
             }
         }
-        checkWindows(surfaces);
+        checkWindows(this.surfaces);
+    }
+
+    private static ViewFactorMatrix rows(double[][] viewFactors, int n) {
+        Objects.requireNonNull(viewFactors, "viewFactors");
+        if (viewFactors.length != n) {
+            throw new IllegalArgumentException("view-factor matrix has " + viewFactors.length + " rows for " + n + " surfaces");
+        }
+        return ViewFactorMatrix.copyOf(viewFactors);
+    }
+
+    /** The surfaces, in case order. */
+    public List<EnclosureSurface> surfaces() {
+        return surfaces;
+    }
+
+    /** The surroundings, or null for a closed enclosure. */
+    public Environment environment() {
+        return environment;
+    }
+
+    /** Conductive links between surfaces (by name). */
+    public List<ConductiveLink> links() {
+        return links;
+    }
+
+    /** The view-factor matrix, shared (read only). */
+    public ViewFactorMatrix matrix() {
+        return viewFactors;
+    }
+
+    /** The same view factors, environment and links with other surfaces (same count and order). */
+    public Enclosure withSurfaces(List<EnclosureSurface> replaced) {
+        return new Enclosure(replaced, viewFactors, environment, links);
     }
 
     /**
@@ -128,28 +175,19 @@ public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors,
         return surfaces.size();
     }
 
-    /** A copy of the view-factor matrix. */
-    @Override
+    /** A copy of the view-factor matrix as rows (8·N² bytes: prefer {@link #matrix()}). */
     public double[][] viewFactors() {
-        double[][] copy = new double[viewFactors.length][];
-        for (int i = 0; i < copy.length; i++) {
-            copy[i] = viewFactors[i].clone();
-        }
-        return copy;
+        return viewFactors.toRows();
     }
 
     /** F[i][j] without copying. */
     public double viewFactor(int i, int j) {
-        return viewFactors[i][j];
+        return viewFactors.get(i, j);
     }
 
     /** Row remainder 1 − Σ_j F_ij: the factor from surface i to the environment. */
     public double environmentFactor(int i) {
-        double s = 0;
-        for (double f : viewFactors[i]) {
-            s += f;
-        }
-        return environment == null ? 0.0 : Math.max(0.0, 1.0 - s);
+        return environment == null ? 0.0 : Math.max(0.0, 1.0 - viewFactors.rowSum(i));
     }
 
     public Optional<Environment> environmentIfAny() {
@@ -167,13 +205,9 @@ public record Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors,
             throw new IllegalArgumentException("permutation length");
         }
         EnclosureSurface[] s = new EnclosureSurface[n];
-        double[][] f = new double[n][n];
         for (int a = 0; a < n; a++) {
             s[a] = surfaces.get(order[a]);
-            for (int b = 0; b < n; b++) {
-                f[a][b] = viewFactors[order[a]][order[b]];
-            }
         }
-        return new Enclosure(List.of(s), f, environment, links);
+        return new Enclosure(List.of(s), viewFactors.permuted(order), environment, links);
     }
 }

@@ -55,7 +55,7 @@ public record LoadCase(String name, String description, Map<String, BoundaryCond
         List<ExternalSource> sources = base.sources().stream()
                 .filter(x -> activeSources == null || activeSources.contains(x.name())).toList();
         return new RadiationCase(base.title() + " — " + name, base.notes(), base.materials(),
-                new Enclosure(surfaces, e.viewFactors(), e.environment(), e.links()), base.bands(), base.settings(),
+                e.withSurfaces(surfaces), base.bands(), base.settings(),
                 sources, List.of(), groups);
     }
 }

@@ -27,6 +27,16 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
         this.maxIterations = maxIterations;
     }
 
+    @Override
+    public String name() {
+        return "conjugate gradients";
+    }
+
+    @Override
+    public boolean supportsWindows() {
+        return false;
+    }
+
     /** Opaque enclosures only: a window's coupling breaks the symmetry this method needs. */
     @Override
     public Prepared prepare(double[] f, int n, double[] rho, double[] area, WindowCoupling windows) {

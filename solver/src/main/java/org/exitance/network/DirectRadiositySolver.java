@@ -17,6 +17,16 @@ public final class DirectRadiositySolver implements RadiositySolver {
     static final double SOLVE_CHECK = 1e-8;
 
     @Override
+    public String name() {
+        return "direct LU";
+    }
+
+    @Override
+    public boolean supportsWindows() {
+        return true;
+    }
+
+    @Override
     public Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2,
                             WindowCoupling windows) {
         DMatrixRMaj a = new DMatrixRMaj(n, n);

@@ -16,6 +16,12 @@ public interface RadiositySolver {
     /** Above this many surfaces (or facets) the default rule switches to conjugate gradients. */
     int DIRECT_LIMIT = 2000;
 
+    /** The strategy's name for reports, e.g. "direct LU". */
+    String name();
+
+    /** Whether the strategy solves enclosures with windows (whose coupled matrix is unsymmetric). */
+    boolean supportsWindows();
+
     /**
      * Prepares the operator of one band.
      *

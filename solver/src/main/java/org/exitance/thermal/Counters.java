@@ -1,6 +1,8 @@
 package org.exitance.thermal;
 
-/** Iteration bookkeeping for the report. */
+import org.exitance.bands.BandLoop;
+
+/** Iteration bookkeeping of one solve, for the report. */
 final class Counters {
     int newtonIterations;
     int propertyIterations;
@@ -9,4 +11,10 @@ final class Counters {
     double lastOuterMove;
     int maxLinearIterations;
     double maxLinearResidual;
+
+    /** Folds in the linear-solver statistics of a band loop. */
+    void addLinear(BandLoop loop) {
+        maxLinearIterations = Math.max(maxLinearIterations, loop.maxIterations());
+        maxLinearResidual = Math.max(maxLinearResidual, loop.maxRelativeResidual());
+    }
 }

@@ -6,11 +6,19 @@ import org.exitance.model.BoundaryCondition;
 import org.exitance.model.ConductiveLink;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
-import org.exitance.network.RadiositySolver;
+import org.exitance.bands.RadiativeArrays;
+import org.exitance.model.ExternalSource;
 
-/** Arrays derived once from the enclosure. */
+/**
+ * The arrays of a temperature solve, derived once from the enclosure: the radiative arrays the
+ * band loop reads ({@link RadiativeArrays}, whose view factors are the enclosure's own, shared)
+ * and the thermal nodes: which temperatures are unknown, their targets, convection and links.
+ * The fields below repeat the radiative arrays' references for brevity; nothing is copied.
+ */
 final class Problem {
+    final RadiativeArrays radiative;
     final Enclosure enc;
+    /** F, N×N row-major: the enclosure's own array, shared, read only. */
     final double[] f;
     final double[] area;
     final double[] envFactor;
@@ -34,27 +42,23 @@ final class Problem {
     final int[] linkB;
     final double[] linkG;
 
-    Problem(Enclosure enc, RadiositySolver linear) {
+    Problem(Enclosure enc, List<ExternalSource> sources) {
+        this.radiative = new RadiativeArrays(enc, sources);
         this.enc = enc;
         int n = enc.size();
-        f = new double[n * n];
-        area = new double[n];
-        envFactor = new double[n];
+        f = radiative.viewFactors;
+        area = radiative.area;
+        envFactor = radiative.environmentFactor;
+        envT = radiative.environmentK;
+        other = radiative.otherFace;
         List<Integer> u = new ArrayList<>();
-        other = enc.otherFaceIndices();
         primary = new int[n];
         for (int i = 0; i < n; i++) {
             primary[i] = enc.surface(i).boundary() instanceof BoundaryCondition.OnOtherFace ? other[i] : i;
-            for (int j = 0; j < n; j++) {
-                f[i * n + j] = enc.viewFactor(i, j);
-            }
-            area[i] = enc.surface(i).areaM2();
-            envFactor[i] = enc.environmentFactor(i);
             if (enc.surface(i).boundary().temperatureUnknown()) {
                 u.add(i);
             }
         }
-        envT = enc.environment() == null ? 0.0 : enc.environment().temperatureK();
         unknown = u.stream().mapToInt(Integer::intValue).toArray();
         faces = new int[unknown.length][];
         for (int a = 0; a < unknown.length; a++) {

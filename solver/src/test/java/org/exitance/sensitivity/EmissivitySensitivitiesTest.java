@@ -1,4 +1,4 @@
-package org.exitance.thermal;
+package org.exitance.sensitivity;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -17,6 +17,7 @@ import org.exitance.model.RadiationCase;
 import org.exitance.model.SolverSettings;
 import org.exitance.properties.BlackbodySource;
 import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.thermal.TemperatureSolver;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -69,7 +70,7 @@ class EmissivitySensitivitiesTest {
             }
         }
         BandSet bands = new BandSet(EDGES, "t");
-        EmissivitySensitivities sens = new TemperatureSolver(build(eps)).sensitivities(bands);
+        EmissivitySensitivities sens = TangentLinear.compute(build(eps), bands);
         double h = 1e-5;
         // below these, a difference quotient is Newton's stopping noise over 2h, not a derivative
         double floorQ = 1e-7 * sens.solved().energyScaleW();

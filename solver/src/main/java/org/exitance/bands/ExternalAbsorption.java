@@ -1,4 +1,4 @@
-package org.exitance.thermal;
+package org.exitance.bands;
 
 /** How a surface absorbs irradiation from outside the surfaces (the environment, sources). */
 public enum ExternalAbsorption {

@@ -1,10 +1,10 @@
-package org.exitance.thermal;
+package org.exitance.sensitivity;
 
 import org.exitance.result.SolveResult;
 
 /**
  * Sensitivities of a solved case to its band-mean emissivities (see
- * {@link TemperatureSolver#sensitivities}).
+ * {@link TangentLinear#compute}).
  *
  * @param solved         the solve they belong to
  * @param netHeat        ∂Q_i/∂ε_jk (W per unit ε), indexed [i][j][k]; do not modify

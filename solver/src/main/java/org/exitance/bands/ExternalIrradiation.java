@@ -1,0 +1,82 @@
+package org.exitance.bands;
+
+import org.exitance.model.Band;
+import org.exitance.model.ExternalSource;
+import org.exitance.spectral.BandAverages;
+import org.exitance.spectral.Planck;
+import org.exitance.spectral.SpectralEmissivity;
+
+/**
+ * Irradiation of one band from outside the surfaces, per surface (W/m²): the environment and
+ * every external source, each absorbed as {@link ExternalAbsorption} says, the rest reflected or,
+ * on a window face, transmitted to the other face.
+ *
+ * <p>The environment is one more blackbody term: a black surface at its temperature irradiates
+ * surface i with {@code F_i,env f_k(T_env) σT_env⁴}, and is absorbed with the band absorptivity
+ * Planck-weighted at T_env (Kirchhoff, α_λ = ε_λ; Siegel &amp; Howell, 5th ed., §6.4). A source
+ * delivers {@code S_i f_k,source} with its own band absorptivity. Every term then goes through the
+ * same absorb, reflect and transmit step.
+ *
+ * @param irradiance  H_i, all external irradiation arriving at surface i in the band
+ * @param leaving     R_i, the part of it that leaves face i unabsorbed: reflected from H_i and,
+ *                    for a window face, transmitted from the other face's H
+ */
+public record ExternalIrradiation(double[] irradiance, double[] leaving) {
+
+    /**
+     * The external irradiation of band {@code b} at surface temperatures {@code t}.
+     *
+     * @param r           the enclosure's arrays
+     * @param b           the band
+     * @param absorption  how external irradiation is absorbed
+     * @param eps         band-mean ε per surface (used with {@link ExternalAbsorption#OWN_EMISSIVITY}); not modified
+     * @param tau         band-mean τ per surface; not modified
+     * @param t           surface temperatures (K); not modified
+     */
+    public static ExternalIrradiation of(RadiativeArrays r, Band b, ExternalAbsorption absorption, double[] eps,
+                                         double[] tau, double[] t) {
+        int n = r.n;
+        boolean own = absorption == ExternalAbsorption.OWN_EMISSIVITY;
+        double envE = r.environmentK > 0 ? Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), r.environmentK) : 0.0;
+        int ns = r.sources.size();
+        double[] fraction = new double[ns];
+        for (int s = 0; s < ns; s++) {
+            fraction[s] = r.sources.get(s).spectrum().bandFraction(b.lowerUm(), b.upperUm());
+        }
+        double[] h = new double[n];
+        double[] leaving = new double[n];
+        for (int i = 0; i < n; i++) {
+            SpectralEmissivity e = r.surface(i).material().emissivity();
+            SpectralEmissivity tr = r.surface(i).material().transmissivity();
+            double hEnv = r.environmentFactor[i] * envE;
+            if (hEnv > 0) {
+                double alpha = own ? eps[i] : BandAverages.planckMean(e, b.lowerUm(), b.upperUm(), r.environmentK, t[i]);
+                double tauExt = tr == null ? 0.0 : own ? tau[i]
+                        : BandAverages.planckMean(tr, b.lowerUm(), b.upperUm(), r.environmentK, t[i]);
+                absorb(r, i, hEnv, alpha, tauExt, h, leaving);
+            }
+            for (int s = 0; s < ns; s++) {
+                ExternalSource src = r.sources.get(s);
+                double hs = src.irradianceOn(r.surface(i).name()) * fraction[s];
+                if (hs > 0) {
+                    double alpha = own ? eps[i] : src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
+                    double tauExt = tr == null ? 0.0 : own ? tau[i]
+                            : src.spectrum().bandAbsorptivity(tr, b.lowerUm(), b.upperUm(), t[i]);
+                    absorb(r, i, hs, alpha, tauExt, h, leaving);
+                }
+            }
+        }
+        return new ExternalIrradiation(h, leaving);
+    }
+
+    /** One term H arriving at face i: α H is absorbed, τ H leaves the other face, the rest is reflected. */
+    private static void absorb(RadiativeArrays r, int i, double arriving, double alpha, double tauExt, double[] h,
+                               double[] leaving) {
+        h[i] += arriving;
+        leaving[i] += Math.max(0.0, 1 - alpha - tauExt) * arriving;
+        int o = r.otherFace[i];
+        if (o >= 0) {
+            leaving[o] += tauExt * arriving;
+        }
+    }
+}

@@ -1,0 +1,183 @@
+package org.exitance.thermal;
+
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
+import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.exitance.bands.BandLoop;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.SolverSettings;
+import org.exitance.network.BandState;
+import org.exitance.spectral.PhysicalConstants;
+
+/**
+ * Damped Newton on the unknown temperatures with band properties held fixed (Kelley, Solving
+ * Nonlinear Equations with Newton's Method, SIAM 2003, ch. 1–2). The residual of node a is its
+ * heat balance summed over bands, {@code R_a = Σ_{i ∈ a} A_i Σ_k q_ik(T) − Q_a} (plus convection
+ * and links where the condition balances every path); the Jacobian is exact ({@link Jacobian}).
+ * No temperature changes by more than half its value in a step, and a backtracking line search
+ * (Armijo) keeps the residual decreasing.
+ */
+final class NewtonIteration {
+    private static final double SIGMA = PhysicalConstants.STEFAN_BOLTZMANN_W_M2_K4;
+    private final Problem p;
+    private final SolverSettings settings;
+    private final Counters counters;
+
+    NewtonIteration(Problem p, SolverSettings settings, Counters counters) {
+        this.p = p;
+        this.settings = settings;
+        this.counters = counters;
+    }
+
+    /**
+     * Solves for the unknown temperatures with the band networks of {@code loop}.
+     *
+     * @param start  starting temperatures (K), not modified
+     * @return the converged temperatures (a new array)
+     * @throws SolveFailedException when Newton does not converge or a demand needs T ≤ 0 K
+     */
+    double[] solve(BandLoop loop, double[] start) {
+        int[] u = p.unknown;
+        int m = u.length;
+        double[][][] sens = Jacobian.nodeSensitivities(p, loop);
+        double[] t = start.clone();
+        double[] r = residual(loop, t);
+        for (int it = 0; it < settings.maxNewtonIterations(); it++) {
+            double rNorm = maxAbs(r);
+            double tol = heatTolerance(t);
+            counters.residualW = rNorm;
+            if (rNorm <= tol) {
+                return t;
+            }
+            DMatrixRMaj jac = Jacobian.of(p, sens, loop.emissivePowerDerivatives(t));
+            Posedness.requireLiveColumns(p, jac);
+            double[] dx = step(jac, r);
+            double lambda = 1.0;
+            for (int a = 0; a < m; a++) {
+                double d = Math.abs(dx[a]);
+                if (d > 0.5 * t[u[a]]) {
+                    lambda = Math.min(lambda, 0.5 * t[u[a]] / d);
+                }
+            }
+            double[] trial = t.clone();
+            double[] rTrial = null;
+            for (int ls = 0; ls < 40; ls++) {
+                for (int a = 0; a < m; a++) {
+                    double ta = t[u[a]] + lambda * dx[a];
+                    for (int i : p.faces[a]) {
+                        trial[i] = ta;
+                    }
+                }
+                rTrial = residual(loop, trial);
+                if (maxAbs(rTrial) <= (1 - 1e-4 * lambda) * rNorm || maxAbs(rTrial) <= tol) {
+                    break;
+                }
+                lambda *= 0.5;
+            }
+            double stepK = 0;
+            for (int a = 0; a < m; a++) {
+                stepK = Math.max(stepK, Math.abs(trial[u[a]] - t[u[a]]));
+            }
+            counters.lastStep = stepK;
+            counters.newtonIterations++;
+            t = trial;
+            r = rTrial;
+            checkFloor(t, r, counters.newtonIterations);
+        }
+        throw new SolveFailedException("Newton's method did not converge in " + settings.maxNewtonIterations()
+                + " iterations: largest heat residual " + fmt(maxAbs(r)) + " W at "
+                + p.enc.surface(u[argMaxAbs(r)]).name(), counters.newtonIterations, maxAbs(r));
+    }
+
+    /** The Newton step −J⁻¹ r by LU (a new array). */
+    private double[] step(DMatrixRMaj jac, double[] r) {
+        int m = r.length;
+        LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(m);
+        DMatrixRMaj rhs = new DMatrixRMaj(m, 1);
+        for (int a = 0; a < m; a++) {
+            rhs.set(a, 0, -r[a]);
+        }
+        DMatrixRMaj dx = new DMatrixRMaj(m, 1);
+        if (!lu.setA(jac.copy())) {
+            throw Posedness.singular();
+        }
+        lu.solve(rhs, dx);
+        for (int a = 0; a < m; a++) {
+            if (!Double.isFinite(dx.get(a, 0))) {
+                throw Posedness.singular();
+            }
+        }
+        return dx.data.clone();
+    }
+
+    /** A demand that needs a temperature at or below 0 K is impossible: say so. */
+    private void checkFloor(double[] t, double[] r, int iterations) {
+        for (int a = 0; a < p.unknown.length; a++) {
+            int i = p.unknown[a];
+            if (t[i] < 1e-3 && r[a] > 0) {
+                EnclosureSurface s = p.enc.surface(i);
+                throw new SolveFailedException("surface '" + s.name() + "' cannot reach its " + s.boundary().label()
+                        + " demand of " + fmt(p.target[a]) + " W: even near 0 K its net heat would be "
+                        + fmt(r[a] + p.target[a]) + " W", iterations, r[a]);
+            }
+        }
+    }
+
+    /** R_a = Σ_faces A_i Σ_k q_ik − Q_a (W) for each unknown node (one face, or a window's two). */
+    private double[] residual(BandLoop loop, double[] t) {
+        BandState[] states = loop.solve(t);
+        double[] r = new double[p.unknown.length];
+        for (int a = 0; a < r.length; a++) {
+            r[a] = -p.target[a];
+            for (int i : p.faces[a]) {
+                double q = 0;
+                for (BandState s : states) {
+                    q += s.netFlux()[i];
+                }
+                r[a] += p.area[i] * q;
+                if (p.allPaths[a]) {
+                    r[a] += p.convectionW(i, t[i]) + p.conductionW(i, t);
+                }
+            }
+        }
+        return r;
+    }
+
+    private double heatTolerance(double[] t) {
+        double scale = 0;
+        for (int i = 0; i < t.length; i++) {
+            scale = Math.max(scale, p.area[i] * SIGMA * Math.pow(t[i], 4));
+        }
+        for (double q : p.target) {
+            scale = Math.max(scale, Math.abs(q));
+        }
+        if (p.envT > 0) {
+            for (int i = 0; i < t.length; i++) {
+                scale = Math.max(scale, p.area[i] * SIGMA * Math.pow(p.envT, 4));
+            }
+        }
+        return Math.max(settings.relativeHeatTolerance() * scale, 1e-300);
+    }
+
+    private static double maxAbs(double[] v) {
+        double m = 0;
+        for (double x : v) {
+            m = Math.max(m, Math.abs(x));
+        }
+        return m;
+    }
+
+    private static int argMaxAbs(double[] v) {
+        int best = 0;
+        for (int i = 1; i < v.length; i++) {
+            if (Math.abs(v[i]) > Math.abs(v[best])) {
+                best = i;
+            }
+        }
+        return best;
+    }
+
+    static String fmt(double v) {
+        return String.format(java.util.Locale.ROOT, "%.6g", v);
+    }
+}
