@@ -9,11 +9,11 @@ import org.exitance.model.BandSet;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.ExternalSource;
 import org.exitance.model.RadiationCase;
-import org.exitance.properties.BlackbodySource;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.spectral.Planck;
 import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
 
 /**
  * Adaptive band refinement. Starts from the default rule's edges and splits, at their geometric
