@@ -81,8 +81,7 @@ public final class AdaptiveBands {
     }
 
     private static SolveResult relabel(SolveResult r, String origin) {
-        return new SolveResult(r.title(), r.bands(), origin, r.surfaces(), r.environment(), r.energyBalanceW(),
-                r.energyScaleW(), r.solver(), r.sources(), r.windows(), r.facets());
+        return r.toBuilder().bandOrigin(origin).build();
     }
 
     /** Largest change between two solves, in W (see class doc). */
