@@ -8,10 +8,10 @@ import org.exitance.model.BoundaryCondition;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.ExternalSource;
 import org.exitance.model.RadiationCase;
-import org.exitance.properties.BlackbodySource;
-import org.exitance.properties.SourceSpectrum;
 import org.exitance.spectral.PhysicalConstants;
 import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.SourceSpectrum;
 
 /**
  * The band edges Exitance uses when a case names none. The rule, stated once (also in

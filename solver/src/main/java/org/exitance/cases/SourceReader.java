@@ -14,9 +14,9 @@ import org.exitance.geometry.external.IncidenceResult;
 import org.exitance.geometry.external.PlanetViewFactor;
 import org.exitance.geometry.external.ShadowedPlanetView;
 import org.exitance.model.ExternalSource;
-import org.exitance.properties.BlackbodySource;
-import org.exitance.properties.IrradiationSource;
-import org.exitance.properties.SourceSpectrum;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.IrradiationSource;
+import org.exitance.spectral.source.SourceSpectrum;
 
 /**
  * Reads the {@code sources} array of a case: external irradiation with a spectrum (a blackbody

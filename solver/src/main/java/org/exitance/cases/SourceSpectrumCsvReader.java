@@ -11,7 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import org.exitance.properties.SourceSpectrum;
+import org.exitance.spectral.source.SourceSpectrum;
 
 /**
  * Reads a source spectrum from a CSV file (Jackson's CSV module):

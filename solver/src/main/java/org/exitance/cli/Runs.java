@@ -6,6 +6,7 @@ import org.exitance.cases.CaseReader;
 import org.exitance.cases.LoadedCase;
 import org.exitance.model.BandSet;
 import org.exitance.network.NetworkConvergenceException;
+import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 import org.exitance.thermal.CaseSolver;
 import org.exitance.thermal.IllPosedCaseException;
@@ -43,8 +44,8 @@ final class Runs {
     }
 
     /** Every load case (or the one named), or the case as given when it has none. */
-    static java.util.List<CaseSolver.LoadCaseResult> solveAll(LoadedCase c, BandSet override, String only,
-                                                              double bandTolerance) {
+    static java.util.List<LoadCaseResult> solveAll(LoadedCase c, BandSet override, String only,
+                                                   double bandTolerance) {
         java.util.List<String> names = c.model().loadCases().stream().map(org.exitance.model.LoadCase::name).toList();
         if (only != null && !names.contains(only)) {
             throw new UserError(c.file() + ": --load-case: no load case named '" + only + "'"

@@ -14,7 +14,7 @@ import org.exitance.audit.GrayAudit;
 import org.exitance.model.RadiationCase;
 import org.exitance.report.AuditJsonWriter;
 import org.exitance.report.AuditTableWriter;
-import org.exitance.thermal.CaseSolver;
+import org.exitance.result.LoadCaseResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -74,7 +74,7 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         BandSet override = BandOption.parse(bandEdges, gray);
         LoadedCase c = Runs.load(caseFile);
-        List<CaseSolver.LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
+        List<LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
                 Runs.bandTolerance(bandTolerancePct));
         boolean variants = !c.model().loadCases().isEmpty();
         List<AuditResult> audits = noAudit || gray ? List.of() : audit(c, results);
@@ -110,13 +110,13 @@ final class SolveCommand implements Callable<Integer> {
     }
 
     /** The gray-body audit of every solved (load) case, with the bands the solve used. */
-    private List<AuditResult> audit(LoadedCase c, List<CaseSolver.LoadCaseResult> results) {
+    private List<AuditResult> audit(LoadedCase c, List<LoadCaseResult> results) {
         if (!(thresholdPct > 0) || !Double.isFinite(thresholdPct)) {
             throw new UserError("--threshold must be a positive number of percent", ExitCodes.BAD_INPUT);
         }
         return Runs.guarded(c, () -> {
             List<AuditResult> out = new java.util.ArrayList<>();
-            for (CaseSolver.LoadCaseResult r : results) {
+            for (LoadCaseResult r : results) {
                 RadiationCase v = c.model().loadCases().stream().filter(lc -> lc.name().equals(r.name())).findFirst()
                         .map(lc -> lc.applyTo(c.model())).orElse(c.model());
                 out.add(GrayAudit.run(v, r.result(), thresholdPct, r.name()));

@@ -2,7 +2,7 @@ package org.exitance.model;
 
 import java.util.Map;
 import java.util.Objects;
-import org.exitance.properties.IrradiationSource;
+import org.exitance.spectral.source.IrradiationSource;
 
 /**
  * Radiation arriving from outside the enclosure's surfaces: the sun or a distant lamp

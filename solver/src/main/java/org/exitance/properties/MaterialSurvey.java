@@ -5,6 +5,7 @@ import java.util.List;
 import org.exitance.model.Material;
 import org.exitance.spectral.BandAverages;
 import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.spectral.source.IrradiationSource;
 
 /**
  * Total properties of one material over a range of surface temperatures: ε(T) and, for each

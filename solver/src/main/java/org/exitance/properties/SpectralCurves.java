@@ -6,6 +6,9 @@ import java.util.List;
 import org.exitance.model.Material;
 import org.exitance.spectral.Planck;
 import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.IrradiationSource;
+import org.exitance.spectral.source.SourceSpectrum;
 
 /**
  * The curves of a spectrum plot: ε(λ) of a material, and normalized Planck curves

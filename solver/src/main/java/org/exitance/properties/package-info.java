@@ -1,8 +1,9 @@
 /**
- * Property summaries of one material: total hemispherical emissivity ε(T) over a temperature
- * range, total absorptivity α for a blackbody source or a tabulated source spectrum, the ratio
- * α/ε, and the curves a spectrum plot draws. Takes model objects, returns records; no files, no
- * JSON (the readers live in {@code org.exitance.cases}, the writers in {@code org.exitance.report}).
+ * The material survey: property summaries of one material, i.e. total hemispherical emissivity
+ * ε(T) over a temperature range, total absorptivity α for an irradiation source (the sources
+ * themselves live in {@code org.exitance.spectral.source}), the ratio α/ε, and the curves a
+ * spectrum plot draws. Takes model objects, returns records; no files, no JSON (the readers live
+ * in {@code org.exitance.cases}, the writers in {@code org.exitance.report}).
  *
  * <p>Units: wavelength in µm, temperature in K, spectral irradiance in W/(m²·µm), irradiance in
  * W/m². Definitions of total emissivity and absorptivity and Kirchhoff's law for diffuse

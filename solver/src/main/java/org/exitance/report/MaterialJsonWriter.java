@@ -3,11 +3,11 @@ package org.exitance.report;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
-import org.exitance.properties.BlackbodySource;
-import org.exitance.properties.IrradiationSource;
 import org.exitance.properties.MaterialSurvey;
-import org.exitance.properties.SourceSpectrum;
 import org.exitance.properties.SurveyRow;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.IrradiationSource;
+import org.exitance.spectral.source.SourceSpectrum;
 
 /**
  * The machine-readable form of material property surveys (documented in docs/command-line.md).

@@ -5,11 +5,11 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
-import org.exitance.properties.BlackbodySource;
-import org.exitance.properties.IrradiationSource;
 import org.exitance.properties.MaterialSurvey;
-import org.exitance.properties.SourceSpectrum;
 import org.exitance.properties.SurveyRow;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.IrradiationSource;
+import org.exitance.spectral.source.SourceSpectrum;
 
 /**
  * Writes material property surveys as readable text: per material a table of surface

@@ -7,10 +7,10 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import org.exitance.model.Band;
 import org.exitance.result.EnvironmentResult;
+import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SolverReport;
 import org.exitance.result.SurfaceResult;
-import org.exitance.thermal.CaseSolver;
 
 /**
  * The machine-readable result (documented in docs/output-format.md). Keys carry their units;
@@ -125,12 +125,12 @@ public final class SolveJsonWriter {
     }
 
     /** Several load cases: {@code loadCases[] {name, description, result}} with one result each. */
-    public static ObjectNode loadCasesToJson(List<CaseSolver.LoadCaseResult> results, String caseFile,
+    public static ObjectNode loadCasesToJson(List<LoadCaseResult> results, String caseFile,
                                              List<String> warnings) {
         ObjectNode root = SolveJsonWriter.document();
         root.put("case", caseFile);
         ArrayNode arr = root.putArray("loadCases");
-        for (CaseSolver.LoadCaseResult r : results) {
+        for (LoadCaseResult r : results) {
             ObjectNode o = arr.addObject();
             o.put("name", r.name());
             o.put("description", r.description());

@@ -5,9 +5,9 @@ import java.util.ArrayList;
 import java.util.List;
 import org.exitance.model.Band;
 import org.exitance.result.EnvironmentResult;
+import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
-import org.exitance.thermal.CaseSolver;
 
 /** Writes a solve result as readable text tables. Reads the result; computes no physics. */
 public final class SolveTableWriter {
@@ -21,14 +21,14 @@ public final class SolveTableWriter {
     }
 
     /** Several load cases: each in full, then a side-by-side summary of T and net heat. */
-    public static void writeLoadCases(List<CaseSolver.LoadCaseResult> results, List<String> warnings, PrintStream out) {
+    public static void writeLoadCases(List<LoadCaseResult> results, List<String> warnings, PrintStream out) {
         writeLoadCases(results, warnings, List.of(), out);
     }
 
     /** As above, with extra lines (e.g. the audit summary) before the caution. */
-    public static void writeLoadCases(List<CaseSolver.LoadCaseResult> results, List<String> warnings,
+    public static void writeLoadCases(List<LoadCaseResult> results, List<String> warnings,
                                       List<String> extra, PrintStream out) {
-        for (CaseSolver.LoadCaseResult r : results) {
+        for (LoadCaseResult r : results) {
             out.println("=".repeat(12) + " Load case: " + r.name()
                     + (r.description().isEmpty() ? "" : " — " + r.description()) + " " + "=".repeat(12));
             body(r.result(), out);
@@ -36,7 +36,7 @@ public final class SolveTableWriter {
         }
         List<String> head = new ArrayList<>();
         head.add("Surface");
-        for (CaseSolver.LoadCaseResult r : results) {
+        for (LoadCaseResult r : results) {
             head.add(r.name() + " T K");
             head.add(r.name() + " Q W");
         }
@@ -47,7 +47,7 @@ public final class SolveTableWriter {
         for (int i = 0; i < results.get(0).result().surfaces().size(); i++) {
             List<String> row = new ArrayList<>();
             row.add(results.get(0).result().surfaces().get(i).name());
-            for (CaseSolver.LoadCaseResult r : results) {
+            for (LoadCaseResult r : results) {
                 SurfaceResult s = r.result().surfaces().get(i);
                 row.add(Numbers.temperature(s.temperatureK()));
                 row.add(Numbers.power(s.heatSuppliedW()));

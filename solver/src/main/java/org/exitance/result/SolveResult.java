@@ -1,52 +1,124 @@
 package org.exitance.result;
 
 import java.util.List;
+import java.util.Objects;
 import org.exitance.model.Band;
 
 /**
  * The immutable outcome of a band-wise solve; writers read it, none computes physics.
  *
- * @param title              case title
- * @param bands              the bands used
- * @param bandOrigin         how the bands were chosen
- * @param surfaces           one result per surface, in case order
- * @param environment        the environment's result, or null for a closed enclosure
- * @param energyBalanceW     Σ_i Q_i + Q_env + P_ext (P_ext: power arriving from external sources):
- *                           zero for an exact, reciprocal network (W)
- * @param energyScaleW       the power that balance is measured against: Σ_i A_i Σ_k J_ik plus the
- *                           environment's emission into the enclosure and P_ext (W)
- * @param solver             convergence report
- * (windows: window pairs; facets: for a case solved on facets, every facet's own result; the
- * surfaces then aggregate them)
- * @param sources            external sources and what they delivered
- * @param windows            one entry per window: its two faces (both also in {@code surfaces}) and their totals
+ * <p>Built in one way only: {@link #builder()} with named setters, then {@link Builder#build()}.
+ * A derived copy (relabelled bands, facet results aggregated onto surfaces) starts from
+ * {@link #toBuilder()}, changes what differs and builds again; the original is left as it is.
+ *
+ * <p>Parts (accessors of the same name):
+ * <ul>
+ *   <li>{@code title}: case title</li>
+ *   <li>{@code bands}: the bands used</li>
+ *   <li>{@code bandOrigin}: how the bands were chosen</li>
+ *   <li>{@code surfaces}: one result per surface, in case order</li>
+ *   <li>{@code environment}: the environment's result, or null for a closed enclosure</li>
+ *   <li>{@code energyBalanceW}: Σ_i Q_i + Q_env + P_ext (P_ext: power arriving from external
+ *       sources); zero for an exact, reciprocal network (W)</li>
+ *   <li>{@code energyScaleW}: the power that balance is measured against: Σ_i A_i Σ_k J_ik plus
+ *       the environment's emission into the enclosure and P_ext (W)</li>
+ *   <li>{@code solver}: convergence report</li>
+ *   <li>{@code sources}: external sources and what they delivered (empty when there are none)</li>
+ *   <li>{@code windows}: one entry per window: its two faces (both also in {@code surfaces}) and
+ *       their totals (empty when there are none)</li>
+ *   <li>{@code facets}: for a case solved on facets, every facet's own result, which the
+ *       surfaces then aggregate; empty otherwise</li>
+ * </ul>
+ * Lists are unmodifiable copies.
  */
-public record SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
-                          EnvironmentResult environment, double energyBalanceW, double energyScaleW,
-                          SolverReport solver, List<SourceResult> sources, List<WindowResult> windows,
-                          List<SurfaceResult> facets) {
+public final class SolveResult {
+    private final String title;
+    private final List<Band> bands;
+    private final String bandOrigin;
+    private final List<SurfaceResult> surfaces;
+    private final EnvironmentResult environment;
+    private final double energyBalanceW;
+    private final double energyScaleW;
+    private final SolverReport solver;
+    private final List<SourceResult> sources;
+    private final List<WindowResult> windows;
+    private final List<SurfaceResult> facets;
 
-    /** A result solved on the case's own surfaces (no facet detail). */
-    public SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
-                       EnvironmentResult environment, double energyBalanceW, double energyScaleW,
-                       SolverReport solver, List<SourceResult> sources, List<WindowResult> windows) {
-        this(title, bands, bandOrigin, surfaces, environment, energyBalanceW, energyScaleW, solver, sources, windows,
-                List.of());
+    private SolveResult(Builder b) {
+        title = require(b.title, "title");
+        bands = List.copyOf(require(b.bands, "bands"));
+        bandOrigin = require(b.bandOrigin, "bandOrigin");
+        surfaces = List.copyOf(require(b.surfaces, "surfaces"));
+        environment = b.environment;
+        energyBalanceW = require(b.energyBalanceW, "energyBalanceW");
+        energyScaleW = require(b.energyScaleW, "energyScaleW");
+        solver = require(b.solver, "solver");
+        sources = List.copyOf(b.sources);
+        windows = List.copyOf(b.windows);
+        facets = List.copyOf(b.facets);
     }
 
-    /** A result without windows. */
-    public SolveResult(String title, List<Band> bands, String bandOrigin, List<SurfaceResult> surfaces,
-                       EnvironmentResult environment, double energyBalanceW, double energyScaleW,
-                       SolverReport solver, List<SourceResult> sources) {
-        this(title, bands, bandOrigin, surfaces, environment, energyBalanceW, energyScaleW, solver, sources, List.of());
+    private static <T> T require(T value, String name) {
+        if (value == null) {
+            throw new IllegalStateException("SolveResult." + name + " was not set");
+        }
+        return value;
     }
 
-    public SolveResult {
-        facets = List.copyOf(facets);
-        bands = List.copyOf(bands);
-        surfaces = List.copyOf(surfaces);
-        sources = List.copyOf(sources);
-        windows = List.copyOf(windows);
+    /** An empty builder; title, bands, bandOrigin, surfaces, both energies and solver must be set. */
+    public static Builder builder() {
+        return new Builder();
+    }
+
+    /** A builder holding every part of this result, for a derived copy. */
+    public Builder toBuilder() {
+        return new Builder().title(title).bands(bands).bandOrigin(bandOrigin).surfaces(surfaces)
+                .environment(environment).energyBalanceW(energyBalanceW).energyScaleW(energyScaleW).solver(solver)
+                .sources(sources).windows(windows).facets(facets);
+    }
+
+    public String title() {
+        return title;
+    }
+
+    public List<Band> bands() {
+        return bands;
+    }
+
+    public String bandOrigin() {
+        return bandOrigin;
+    }
+
+    public List<SurfaceResult> surfaces() {
+        return surfaces;
+    }
+
+    public EnvironmentResult environment() {
+        return environment;
+    }
+
+    public double energyBalanceW() {
+        return energyBalanceW;
+    }
+
+    public double energyScaleW() {
+        return energyScaleW;
+    }
+
+    public SolverReport solver() {
+        return solver;
+    }
+
+    public List<SourceResult> sources() {
+        return sources;
+    }
+
+    public List<WindowResult> windows() {
+        return windows;
+    }
+
+    public List<SurfaceResult> facets() {
+        return facets;
     }
 
     /** |energy balance| relative to the scale. */
@@ -58,5 +130,109 @@ public record SolveResult(String title, List<Band> bands, String bandOrigin, Lis
     public SurfaceResult surface(String name) {
         return surfaces.stream().filter(s -> s.name().equals(name)).findFirst()
                 .orElseThrow(() -> new IllegalArgumentException("no surface named " + name));
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof SolveResult r && title.equals(r.title) && bands.equals(r.bands)
+                && bandOrigin.equals(r.bandOrigin) && surfaces.equals(r.surfaces)
+                && Objects.equals(environment, r.environment)
+                && Double.compare(energyBalanceW, r.energyBalanceW) == 0
+                && Double.compare(energyScaleW, r.energyScaleW) == 0 && solver.equals(r.solver)
+                && sources.equals(r.sources) && windows.equals(r.windows) && facets.equals(r.facets);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(title, bands, bandOrigin, surfaces, environment, energyBalanceW, energyScaleW, solver,
+                sources, windows, facets);
+    }
+
+    @Override
+    public String toString() {
+        return "SolveResult[" + title + ", " + bands.size() + " bands, " + surfaces.size() + " surfaces, "
+                + facets.size() + " facets, balance " + energyBalanceW + " W of " + energyScaleW + " W]";
+    }
+
+    /**
+     * Named setters for a {@link SolveResult}. Lists given are copied at {@link #build()} (not
+     * modified); sources, windows and facets default to empty, the environment to none (null).
+     */
+    public static final class Builder {
+        private String title;
+        private List<Band> bands;
+        private String bandOrigin;
+        private List<SurfaceResult> surfaces;
+        private EnvironmentResult environment;
+        private Double energyBalanceW;
+        private Double energyScaleW;
+        private SolverReport solver;
+        private List<SourceResult> sources = List.of();
+        private List<WindowResult> windows = List.of();
+        private List<SurfaceResult> facets = List.of();
+
+        private Builder() {
+        }
+
+        public Builder title(String v) {
+            title = v;
+            return this;
+        }
+
+        public Builder bands(List<Band> v) {
+            bands = v;
+            return this;
+        }
+
+        public Builder bandOrigin(String v) {
+            bandOrigin = v;
+            return this;
+        }
+
+        public Builder surfaces(List<SurfaceResult> v) {
+            surfaces = v;
+            return this;
+        }
+
+        /** @param v the environment's result, or null for a closed enclosure */
+        public Builder environment(EnvironmentResult v) {
+            environment = v;
+            return this;
+        }
+
+        public Builder energyBalanceW(double v) {
+            energyBalanceW = v;
+            return this;
+        }
+
+        public Builder energyScaleW(double v) {
+            energyScaleW = v;
+            return this;
+        }
+
+        public Builder solver(SolverReport v) {
+            solver = v;
+            return this;
+        }
+
+        public Builder sources(List<SourceResult> v) {
+            sources = Objects.requireNonNull(v, "sources");
+            return this;
+        }
+
+        public Builder windows(List<WindowResult> v) {
+            windows = Objects.requireNonNull(v, "windows");
+            return this;
+        }
+
+        public Builder facets(List<SurfaceResult> v) {
+            facets = Objects.requireNonNull(v, "facets");
+            return this;
+        }
+
+        /** @throws IllegalStateException naming the first required part that was not set */
+        public SolveResult build() {
+            return new SolveResult(this);
+        }
     }
 }

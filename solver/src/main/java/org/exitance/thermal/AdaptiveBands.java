@@ -9,11 +9,11 @@ import org.exitance.model.BandSet;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.ExternalSource;
 import org.exitance.model.RadiationCase;
-import org.exitance.properties.BlackbodySource;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.spectral.Planck;
 import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
 
 /**
  * Adaptive band refinement. Starts from the default rule's edges and splits, at their geometric
@@ -81,8 +81,7 @@ public final class AdaptiveBands {
     }
 
     private static SolveResult relabel(SolveResult r, String origin) {
-        return new SolveResult(r.title(), r.bands(), origin, r.surfaces(), r.environment(), r.energyBalanceW(),
-                r.energyScaleW(), r.solver(), r.sources(), r.windows(), r.facets());
+        return r.toBuilder().bandOrigin(origin).build();
     }
 
     /** Largest change between two solves, in W (see class doc). */

@@ -5,6 +5,7 @@ import java.util.List;
 import org.exitance.model.LoadCase;
 import org.exitance.model.BandSet;
 import org.exitance.model.RadiationCase;
+import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 
 /** Chooses the bands for a case and solves it: the one entry point the command line uses. */
@@ -42,10 +43,6 @@ public final class CaseSolver {
     public static SolveResult solve(RadiationCase c, BandSet override, double tolerance) {
         BandSet given = givenBands(c, override);
         return given != null ? new TemperatureSolver(c).solve(given) : AdaptiveBands.refine(c, tolerance).result();
-    }
-
-    /** One solved load case. */
-    public record LoadCaseResult(String name, String description, SolveResult result) {
     }
 
     /**

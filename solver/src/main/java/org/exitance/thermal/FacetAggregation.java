@@ -53,7 +53,6 @@ final class FacetAggregation {
             out.add(new SurfaceResult(surface, area, label + " per facet", at / area, solved, q, q / area, bandQ, bandEps,
                     conv, cond, supplied, bandG));
         }
-        return new SolveResult(r.title(), r.bands(), r.bandOrigin(), out, r.environment(), r.energyBalanceW(),
-                r.energyScaleW(), r.solver(), r.sources(), r.windows(), r.surfaces());
+        return r.toBuilder().surfaces(out).facets(r.surfaces()).build();
     }
 }

@@ -151,7 +151,8 @@ final class ResultAssembler {
         SolverReport report = new SolverReport(linearName, counters.newtonIterations, counters.propertyIterations,
                 residual, p.unknown.length == 0 ? 0 : counters.lastStep, counters.maxLinearIterations,
                 counters.maxLinearResidual);
-        return new SolveResult(radiationCase.title(), bands, bandSet.origin(), out, env, total, scale, report,
-                sourceResults(p, bands, t), windows);
+        return SolveResult.builder().title(radiationCase.title()).bands(bands).bandOrigin(bandSet.origin())
+                .surfaces(out).environment(env).energyBalanceW(total).energyScaleW(scale).solver(report)
+                .sources(sourceResults(p, bands, t)).windows(windows).build();
     }
 }

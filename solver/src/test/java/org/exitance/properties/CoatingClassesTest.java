@@ -6,6 +6,8 @@ import java.nio.file.Path;
 import java.util.List;
 import org.exitance.cases.MaterialFileReader;
 import org.exitance.cases.MaterialFileReader.MaterialFile;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.IrradiationSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;

@@ -7,6 +7,9 @@ import java.util.List;
 import org.exitance.model.Material;
 import org.exitance.spectral.GrayEmissivity;
 import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.IrradiationSource;
+import org.exitance.spectral.source.SourceSpectrum;
 import org.junit.jupiter.api.Test;
 
 /**

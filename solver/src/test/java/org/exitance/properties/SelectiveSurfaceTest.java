@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 import org.exitance.model.Material;
 import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
 import org.junit.jupiter.api.Test;
 
 /**

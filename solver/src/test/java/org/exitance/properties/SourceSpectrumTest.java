@@ -7,6 +7,8 @@ import static org.assertj.core.api.Assertions.within;
 import java.util.function.DoubleUnaryOperator;
 import org.exitance.spectral.SpectralEmissivity;
 import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
+import org.exitance.spectral.source.SourceSpectrum;
 import org.junit.jupiter.api.Test;
 
 /** Absorptivity for a tabulated source spectrum: closed forms and a sampled blackbody. */

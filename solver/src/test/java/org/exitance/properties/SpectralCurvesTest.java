@@ -12,6 +12,7 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 import org.apache.commons.math3.optim.univariate.UnivariatePointValuePair;
 import org.exitance.model.Material;
 import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
 import org.junit.jupiter.api.Test;
 
 /** The curves drawn on a spectrum plot. */

@@ -15,8 +15,8 @@ import org.exitance.model.ExternalSource;
 import org.exitance.model.Material;
 import org.exitance.model.RadiationCase;
 import org.exitance.model.SolverSettings;
-import org.exitance.properties.BlackbodySource;
 import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
 import org.exitance.thermal.TemperatureSolver;
 import org.junit.jupiter.api.Test;
 

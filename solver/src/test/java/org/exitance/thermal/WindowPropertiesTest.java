@@ -21,10 +21,10 @@ import org.exitance.model.ExternalSource;
 import org.exitance.model.Material;
 import org.exitance.model.RadiationCase;
 import org.exitance.model.SolverSettings;
-import org.exitance.properties.BlackbodySource;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.spectral.TabulatedEmissivity;
+import org.exitance.spectral.source.BlackbodySource;
 import org.exitance.support.RandomEnclosures;
 
 /**

@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.stream.Stream;
 import org.exitance.cases.CaseReader;
 import org.exitance.cases.LoadedCase;
+import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 import org.exitance.thermal.CaseSolver;
 import org.junit.jupiter.api.DynamicTest;
@@ -32,7 +33,7 @@ class ShippedCasesTest {
         assertThat(files).anyMatch(p -> p.toString().contains("demo"));
         return files.stream().map(f -> DynamicTest.dynamicTest(f.getFileName().toString(), () -> {
             LoadedCase c = CaseReader.read(f);
-            for (CaseSolver.LoadCaseResult lc : CaseSolver.solveAll(c.model(), null, null)) {
+            for (LoadCaseResult lc : CaseSolver.solveAll(c.model(), null, null)) {
                 SolveResult r = lc.result();
                 // first law over the enclosure, its environment and its sources (common practice)
                 assertThat(r.relativeEnergyBalance()).as(lc.name()).isLessThan(1e-9);

@@ -1,4 +1,4 @@
-package org.exitance.properties;
+package org.exitance.spectral.source;
 
 import java.util.Locale;
 import org.exitance.spectral.BandAverages;
@@ -26,7 +26,7 @@ public record BlackbodySource(double temperatureK) implements IrradiationSource 
     }
 
     /** A temperature for labels: whole kelvins without decimals, others to 6 significant digits. */
-    static String kelvin(double t) {
+    public static String kelvin(double t) {
         if (t == Math.rint(t) && Math.abs(t) < 1e15) {
             return Long.toString((long) t);
         }

@@ -1,4 +1,4 @@
-package org.exitance.properties;
+package org.exitance.spectral.source;
 
 import org.exitance.spectral.SpectralEmissivity;
 

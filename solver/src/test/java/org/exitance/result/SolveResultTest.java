@@ -1,0 +1,66 @@
+package org.exitance.result;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.exitance.model.Band;
+import org.junit.jupiter.api.Test;
+
+/** Building and deriving results: every part set by name, copies leave the original as it was. */
+class SolveResultTest {
+    private static final SurfaceResult A = surface("a", 2.0);
+    private static final SurfaceResult B = surface("b", -2.0);
+
+    private static SurfaceResult surface(String name, double q) {
+        return new SurfaceResult(name, 1.0, "fixed", 300, false, q, q, new double[] {q}, new double[] {0.5}, 0, 0, q,
+                new double[] {1.0});
+    }
+
+    private static SolveResult.Builder complete() {
+        return SolveResult.builder().title("t").bands(List.of(new Band(0, Double.POSITIVE_INFINITY)))
+                .bandOrigin("given").surfaces(List.of(A, B)).energyBalanceW(1e-3).energyScaleW(10)
+                .solver(new SolverReport("LU", 0, 0, 0, 0, 0, 0));
+    }
+
+    @Test
+    void aBuiltResultHoldsWhatWasSetAndDefaultsTheOptionalPartsToEmpty() {
+        SolveResult r = complete().build();
+        assertThat(r.surfaces()).containsExactly(A, B);
+        assertThat(r.environment()).isNull();
+        assertThat(r.sources()).isEmpty();
+        assertThat(r.windows()).isEmpty();
+        assertThat(r.facets()).isEmpty();
+        // |balance| / scale = 1e-3 / 10 (common practice: relative energy balance)
+        assertThat(r.relativeEnergyBalance()).isEqualTo(1e-4);
+    }
+
+    @Test
+    void aMissingRequiredPartIsNamed() {
+        assertThatThrownBy(() -> complete().energyScaleW(1).solver(null).build())
+                .isInstanceOf(IllegalStateException.class).hasMessageContaining("solver");
+        assertThatThrownBy(() -> SolveResult.builder().title("t").build())
+                .isInstanceOf(IllegalStateException.class).hasMessageContaining("bands");
+    }
+
+    @Test
+    void aDerivedCopyChangesOnlyWhatWasSet() {
+        SolveResult r = complete().build();
+        SolveResult copy = r.toBuilder().surfaces(List.of(A)).facets(r.surfaces()).build();
+        assertThat(copy.surfaces()).containsExactly(A);
+        assertThat(copy.facets()).containsExactly(A, B);
+        assertThat(copy.bandOrigin()).isEqualTo("given");
+        assertThat(r.surfaces()).containsExactly(A, B);
+        assertThat(r.facets()).isEmpty();
+        assertThat(r.toBuilder().build()).isEqualTo(r);
+    }
+
+    @Test
+    void listsAreCopiedAtBuild() {
+        List<SurfaceResult> given = new ArrayList<>(List.of(A));
+        SolveResult r = complete().surfaces(given).build();
+        given.add(B);
+        assertThat(r.surfaces()).containsExactly(A);
+    }
+}
