@@ -20,13 +20,15 @@ public final class BandLoop {
     private final List<Band> bands;
     private final double[][] emissivity;
     private final BandNetwork[] networks;
+    private final ExternalIrradiation[] external;
     private int maxIterations;
     private double maxRelativeResidual;
 
-    private BandLoop(List<Band> bands, double[][] emissivity, BandNetwork[] networks) {
+    private BandLoop(List<Band> bands, double[][] emissivity, BandNetwork[] networks, ExternalIrradiation[] external) {
         this.bands = bands;
         this.emissivity = emissivity;
         this.networks = networks;
+        this.external = external;
     }
 
     /**
@@ -43,12 +45,14 @@ public final class BandLoop {
                                    ExternalAbsorption absorption, RadiositySolver solver) {
         double[][] tau = BandProperties.transmissivities(r.enclosure.surfaces(), bands, t);
         BandNetwork[] nets = new BandNetwork[bands.size()];
+        ExternalIrradiation[] external = new ExternalIrradiation[bands.size()];
         for (int k = 0; k < nets.length; k++) {
             ExternalIrradiation h = ExternalIrradiation.of(r, bands.get(k), absorption, emissivity[k], tau[k], t);
+            external[k] = h;
             nets[k] = new BandNetwork(r.viewFactors, r.n, r.area, emissivity[k], new WindowCoupling(tau[k], r.otherFace),
                     h.irradiance(), h.leaving(), solver);
         }
-        return new BandLoop(List.copyOf(bands), emissivity, nets);
+        return new BandLoop(List.copyOf(bands), emissivity, nets, external);
     }
 
     /**
@@ -103,6 +107,11 @@ public final class BandLoop {
     /** The prepared network of band k. */
     public BandNetwork network(int k) {
         return networks[k];
+    }
+
+    /** The external irradiation of band k, as its network uses it. */
+    public ExternalIrradiation external(int k) {
+        return external[k];
     }
 
     /** Most linear-solver iterations of any band solve so far. */

@@ -17,11 +17,19 @@ import org.exitance.spectral.SpectralEmissivity;
  * delivers {@code S_i f_k,source} with its own band absorptivity. Every term then goes through the
  * same absorb, reflect and transmit step.
  *
- * @param irradiance  H_i, all external irradiation arriving at surface i in the band
- * @param leaving     R_i, the part of it that leaves face i unabsorbed: reflected from H_i and,
- *                    for a window face, transmitted from the other face's H
+ * <p>Arrays are owned by the record and must not be modified.
+ *
+ * @param irradiance            H_i, all external irradiation arriving at surface i in the band
+ * @param leaving               R_i, the part of it that leaves face i unabsorbed: reflected from H_i
+ *                              and, for a window face, transmitted from the other face's H
+ * @param environmentPower      f_k(T_env) σT_env⁴, the environment's band emissive power (0 without one)
+ * @param sourceFraction        per source, the share of its power in the band
+ * @param sourceAbsorptivity    [source][surface], each surface's band absorptivity for the source's
+ *                              own spectrum where the source delivers power in the band (else 0),
+ *                              whatever {@link ExternalAbsorption} the network uses
  */
-public record ExternalIrradiation(double[] irradiance, double[] leaving) {
+public record ExternalIrradiation(double[] irradiance, double[] leaving, double environmentPower,
+                                  double[] sourceFraction, double[][] sourceAbsorptivity) {
 
     /**
      * The external irradiation of band {@code b} at surface temperatures {@code t}.
@@ -45,6 +53,7 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving) {
         }
         double[] h = new double[n];
         double[] leaving = new double[n];
+        double[][] sourceAlpha = new double[ns][n];
         for (int i = 0; i < n; i++) {
             SpectralEmissivity e = r.surface(i).material().emissivity();
             SpectralEmissivity tr = r.surface(i).material().transmissivity();
@@ -59,14 +68,15 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving) {
                 ExternalSource src = r.sources.get(s);
                 double hs = src.irradianceOn(r.surface(i).name()) * fraction[s];
                 if (hs > 0) {
-                    double alpha = own ? eps[i] : src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
+                    sourceAlpha[s][i] = src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
+                    double alpha = own ? eps[i] : sourceAlpha[s][i];
                     double tauExt = tr == null ? 0.0 : own ? tau[i]
                             : src.spectrum().bandAbsorptivity(tr, b.lowerUm(), b.upperUm(), t[i]);
                     absorb(r, i, hs, alpha, tauExt, h, leaving);
                 }
             }
         }
-        return new ExternalIrradiation(h, leaving);
+        return new ExternalIrradiation(h, leaving, envE, fraction, sourceAlpha);
     }
 
     /** One term H arriving at face i: α H is absorbed, τ H leaves the other face, the rest is reflected. */

@@ -2,6 +2,8 @@ package org.exitance.thermal;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.exitance.bands.BandLoop;
+import org.exitance.bands.ExternalIrradiation;
 import org.exitance.model.Band;
 import org.exitance.model.BandSet;
 import org.exitance.model.Enclosure;
@@ -34,10 +36,15 @@ final class ResultAssembler {
         this.linearName = linearName;
     }
 
-    /** Incident and first-absorbed power of every source at the solved temperatures. */
-    private List<SourceResult> sourceResults(Problem p, List<Band> bands, double[] t) {
+    /**
+     * Incident and first-absorbed power of every source at the solved temperatures, with each
+     * surface's band absorptivity for the source's own spectrum as the band loop computed it.
+     */
+    private List<SourceResult> sourceResults(Problem p, BandLoop loop) {
         List<SourceResult> out = new ArrayList<>();
-        for (ExternalSource src : radiationCase.sources()) {
+        List<ExternalSource> sources = radiationCase.sources();
+        for (int s = 0; s < sources.size(); s++) {
+            ExternalSource src = sources.get(s);
             double incident = 0;
             double absorbed = 0;
             for (int i = 0; i < p.area.length; i++) {
@@ -46,10 +53,9 @@ final class ResultAssembler {
                     continue;
                 }
                 incident += w;
-                SpectralEmissivity e = p.enc.surface(i).material().emissivity();
-                for (Band b : bands) {
-                    absorbed += w * src.spectrum().bandFraction(b.lowerUm(), b.upperUm())
-                            * src.spectrum().bandAbsorptivity(e, b.lowerUm(), b.upperUm(), t[i]);
+                for (int k = 0; k < loop.bands().size(); k++) {
+                    ExternalIrradiation x = loop.external(k);
+                    absorbed += w * x.sourceFraction()[s] * x.sourceAbsorptivity()[s][i];
                 }
             }
             out.add(new SourceResult(src.name(), src.spectrum().label(), incident, absorbed));
@@ -69,11 +75,11 @@ final class ResultAssembler {
     }
 
     /** Net power leaving the environment into the enclosure in one band (W). */
-    private static double environmentNetHeatW(Problem p, Band b, BandState s) {
+    private static double environmentNetHeatW(Problem p, ExternalIrradiation x, BandState s) {
         if (p.enc.environment() == null) {
             return 0.0;
         }
-        double envE = p.envT > 0 ? Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), p.envT) : 0.0;
+        double envE = x.environmentPower();
         double q = 0;
         for (int i = 0; i < p.area.length; i++) {
             q += p.area[i] * p.envFactor[i] * (envE - s.radiosity()[i]);
@@ -81,8 +87,15 @@ final class ResultAssembler {
         return q;
     }
 
-    SolveResult assemble(Problem p, BandSet bandSet, List<Band> bands, double[][] eps, BandState[] states,
-                                 double[] t, Counters counters) {
+    /**
+     * @param loop    the band loop at the converged temperatures
+     * @param states  its solved band states at t
+     * @param t       converged temperatures (K); none of the arrays is modified
+     */
+    SolveResult assemble(Problem p, BandSet bandSet, BandLoop loop, BandState[] states, double[] t,
+                         Counters counters) {
+        List<Band> bands = loop.bands();
+        double[][] eps = loop.emissivity();
         Enclosure enc = p.enc;
         int n = enc.size();
         int nb = bands.size();
@@ -121,7 +134,7 @@ final class ResultAssembler {
             double[] bandQ = new double[nb];
             double q = 0;
             for (int k = 0; k < nb; k++) {
-                bandQ[k] = environmentNetHeatW(p, bands.get(k), states[k]);
+                bandQ[k] = environmentNetHeatW(p, loop.external(k), states[k]);
                 q += bandQ[k];
             }
             for (int i = 0; i < n; i++) {
@@ -153,6 +166,6 @@ final class ResultAssembler {
                 counters.maxLinearResidual);
         return SolveResult.builder().title(radiationCase.title()).bands(bands).bandOrigin(bandSet.origin())
                 .surfaces(out).environment(env).energyBalanceW(total).energyScaleW(scale).solver(report)
-                .sources(sourceResults(p, bands, t)).windows(windows).build();
+                .sources(sourceResults(p, loop)).windows(windows).build();
     }
 }

@@ -100,7 +100,7 @@ public final class TemperatureSolver {
         BandState[] states = loop.solve(t);
         counters.addLinear(loop);
         SolveResult r = new ResultAssembler(radiationCase, linear.name())
-                .assemble(p, bandSet, bands, loop.emissivity(), states, t, counters);
+                .assemble(p, bandSet, loop, states, t, counters);
         return new ConvergedState(p, loop, states, t, r);
     }
 
