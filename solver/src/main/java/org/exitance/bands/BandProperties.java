@@ -62,20 +62,6 @@ public final class BandProperties {
         return out;
     }
 
-    /**
-     * Band emissive powers f_k(T) σT⁴ (W/m²), [band][surface], into {@code out} (modified).
-     *
-     * @param temperatureK  temperatures (K), not modified
-     */
-    public static void emissivePowers(List<Band> bands, double[] temperatureK, double[][] out) {
-        for (int k = 0; k < bands.size(); k++) {
-            Band b = bands.get(k);
-            for (int i = 0; i < temperatureK.length; i++) {
-                out[k][i] = Planck.bandEmissivePower(b.lowerUm(), b.upperUm(), temperatureK[i]);
-            }
-        }
-    }
-
     /** d/dT of the band emissive power (W/(m²·K)) at a temperature (K). */
     public static double emissivePowerDerivative(Band b, double temperatureK) {
         return Planck.bandEmissivePowerDerivative(b.lowerUm(), b.upperUm(), temperatureK);

@@ -3,7 +3,6 @@ package org.exitance.model;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
-import java.util.Optional;
 import java.util.Set;
 
 /**
@@ -188,10 +187,6 @@ public final class Enclosure {
     /** Row remainder 1 − Σ_j F_ij: the factor from surface i to the environment. */
     public double environmentFactor(int i) {
         return environment == null ? 0.0 : Math.max(0.0, 1.0 - viewFactors.rowSum(i));
-    }
-
-    public Optional<Environment> environmentIfAny() {
-        return Optional.ofNullable(environment);
     }
 
     public EnclosureSurface surface(int i) {

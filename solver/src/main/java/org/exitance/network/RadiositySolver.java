@@ -61,11 +61,6 @@ public interface RadiositySolver {
         double lastRelativeResidual();
     }
 
-    /** The default rule for an enclosure without windows: {@link #forSize(int, boolean)} with false. */
-    static RadiositySolver forSize(int n) {
-        return forSize(n, false);
-    }
-
     /**
      * The default rule: direct LU whenever the enclosure has a window (the window coupling makes
      * the matrix unsymmetric, so conjugate gradients do not apply), and otherwise up to

@@ -2,6 +2,7 @@ package org.exitance.thermal;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.exitance.bands.AdaptiveBands;
 import org.exitance.model.LoadCase;
 import org.exitance.model.BandSet;
 import org.exitance.model.RadiationCase;
@@ -31,7 +32,7 @@ public final class CaseSolver {
     /** As {@link #bandsFor(RadiationCase, BandSet)} with a refinement tolerance (fraction of max |Q|). */
     public static BandSet bandsFor(RadiationCase c, BandSet override, double tolerance) {
         BandSet given = givenBands(c, override);
-        return given != null ? given : AdaptiveBands.refine(c, tolerance).bands();
+        return given != null ? given : AdaptiveBands.refine(c, tolerance, b -> new TemperatureSolver(c).solve(b)).bands();
     }
 
     /** Solves with the given bands, or with adaptively refined bands when none are given. */
@@ -42,7 +43,7 @@ public final class CaseSolver {
     /** As {@link #solve(RadiationCase, BandSet)} with a refinement tolerance (fraction of max |Q|). */
     public static SolveResult solve(RadiationCase c, BandSet override, double tolerance) {
         BandSet given = givenBands(c, override);
-        return given != null ? new TemperatureSolver(c).solve(given) : AdaptiveBands.refine(c, tolerance).result();
+        return given != null ? new TemperatureSolver(c).solve(given) : AdaptiveBands.refine(c, tolerance, b -> new TemperatureSolver(c).solve(b)).result();
     }
 
     /**

@@ -1,9 +1,9 @@
-package org.exitance.thermal;
+package org.exitance.bands;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.TreeSet;
-import org.exitance.bands.DefaultBandRule;
+import java.util.function.Function;
 import org.exitance.model.Band;
 import org.exitance.model.BandSet;
 import org.exitance.model.EnclosureSurface;
@@ -48,9 +48,17 @@ public final class AdaptiveBands {
     private AdaptiveBands() {
     }
 
-    public static Outcome refine(RadiationCase c, double tolerance) {
+    /**
+     * Refines the bands of a case.
+     *
+     * @param c          the case
+     * @param tolerance  stop when no surface changes by more than this fraction of max |net heat|
+     * @param solver     solves the case with a band set (the temperature solve; any exception it
+     *                   throws passes through)
+     */
+    public static Outcome refine(RadiationCase c, double tolerance, Function<BandSet, SolveResult> solver) {
         BandSet current = DefaultBandRule.derive(c);
-        SolveResult prev = new TemperatureSolver(c).solve(current);
+        SolveResult prev = solver.apply(current);
         if (current.size() == 1) {
             return new Outcome(current, prev, 0, 0, true); // every surface gray: one band is exact
         }
@@ -64,7 +72,7 @@ public final class AdaptiveBands {
                 break;
             }
             round++;
-            SolveResult res = new TemperatureSolver(c).solve(next);
+            SolveResult res = solver.apply(next);
             change = difference(prev, res);
             current = next;
             prev = res;

@@ -1,4 +1,4 @@
-package org.exitance.thermal;
+package org.exitance.bands;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -11,6 +11,7 @@ import org.exitance.model.EnclosureSurface;
 import org.exitance.model.RadiationCase;
 import org.exitance.result.SolveResult;
 import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.thermal.TemperatureSolver;
 import org.junit.jupiter.api.DynamicTest;
 import org.junit.jupiter.api.TestFactory;
 
@@ -47,7 +48,8 @@ class AdaptiveBandsTest {
                     var variants = base.loadCases().isEmpty() ? java.util.List.of(base)
                             : base.loadCases().stream().map(lc -> lc.applyTo(base)).toList();
                     for (RadiationCase c : variants) {
-                        AdaptiveBands.Outcome a = AdaptiveBands.refine(c, AdaptiveBands.DEFAULT_TOLERANCE);
+                        AdaptiveBands.Outcome a = AdaptiveBands.refine(c, AdaptiveBands.DEFAULT_TOLERANCE,
+                                b -> new TemperatureSolver(c).solve(b));
                         SolveResult fineResult = new TemperatureSolver(c).solve(fine(c));
                         double scale = fineResult.surfaces().stream().mapToDouble(s -> Math.abs(s.netHeatW())).max()
                                 .orElse(0);
