@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.exitance.audit.AuditResult;
 import org.exitance.audit.GrayAudit;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.model.BandSet;
 import org.exitance.model.LoadCase;
 import org.exitance.model.RadiationCase;
@@ -71,7 +71,7 @@ final class AuditCommand implements Callable<Integer> {
         }
         BandSet override = BandOption.parse(bandEdges, false);
         double bandTolerance = Runs.bandTolerance(bandTolerancePct);
-        LoadedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile);
         RadiationCase base = c.model();
         List<String> names = base.loadCases().stream().map(LoadCase::name).toList();
         if (loadCase != null && !names.contains(loadCase)) {

@@ -96,6 +96,9 @@ final class MaterialCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         checkTargets();
         MaterialFile mf = MaterialFileReader.read(file);
+        if (mf.isCase()) {
+            Runs.load(file); // a case is checked in full, view factors included, as every command checks it
+        }
         List<Material> materials = mf.select(name);
         if (plot != null && materials.size() != 1) {
             throw new UserError("--plot draws one material; choose it with --name (materials in " + file + ": "

@@ -12,7 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.model.Band;
 import org.exitance.model.BandSet;
 import org.exitance.model.LoadCase;
@@ -74,7 +74,7 @@ final class SensitivityCommand implements Callable<Integer> {
         if (top < 1) {
             throw new UserError("--top must be at least 1", ExitCodes.BAD_INPUT);
         }
-        LoadedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile);
         RadiationCase model = pick(c);
         int i = model.enclosure().indexOf(surface);
         if (i < 0) {
@@ -169,7 +169,7 @@ final class SensitivityCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private RadiationCase pick(LoadedCase c) {
+    private RadiationCase pick(PreparedCase c) {
         RadiationCase base = c.model();
         if (base.loadCases().isEmpty()) {
             if (loadCase != null) {

@@ -5,7 +5,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.model.BandSet;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.report.SolveTableWriter;
@@ -73,7 +73,7 @@ final class SolveCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         BandSet override = BandOption.parse(bandEdges, gray);
-        LoadedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile);
         List<CaseSolver.LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
                 Runs.bandTolerance(bandTolerancePct));
         boolean variants = !c.model().loadCases().isEmpty();
@@ -110,7 +110,7 @@ final class SolveCommand implements Callable<Integer> {
     }
 
     /** The gray-body audit of every solved (load) case, with the bands the solve used. */
-    private List<AuditResult> audit(LoadedCase c, List<CaseSolver.LoadCaseResult> results) {
+    private List<AuditResult> audit(PreparedCase c, List<CaseSolver.LoadCaseResult> results) {
         if (!(thresholdPct > 0) || !Double.isFinite(thresholdPct)) {
             throw new UserError("--threshold must be a positive number of percent", ExitCodes.BAD_INPUT);
         }

@@ -10,10 +10,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.exitance.cases.CaseReader;
-import org.exitance.cases.ComputedViewFactors;
-import org.exitance.cases.LoadedCase;
-import org.exitance.cases.ViewFactorStage;
+import org.exitance.pipeline.ComputedViewFactors;
+import org.exitance.pipeline.PreparedCase;
+import org.exitance.pipeline.ViewFactorStage;
 import org.exitance.report.Numbers;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.report.TextTable;
@@ -54,9 +53,9 @@ final class ViewFactorsCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Progress progress = Progress.onStderr(!quiet, spec.commandLine().getErr());
-        LoadedCase c;
+        PreparedCase c;
         try {
-            c = CaseReader.read(caseFile, new ViewFactorStage.Request(!noCache, progress, progress::cancelled));
+            c = Runs.load(caseFile, new ViewFactorStage.Request(!noCache, progress, progress::cancelled));
         } finally {
             progress.done();
         }
