@@ -19,14 +19,6 @@ final class Runs {
     private Runs() {
     }
 
-    /** A band tolerance given in percent on the command line, as a fraction. */
-    static double bandTolerance(double percent) {
-        if (!(percent > 0) || !Double.isFinite(percent)) {
-            throw new UserError("--band-tolerance must be a positive number of percent", ExitCodes.BAD_INPUT);
-        }
-        return percent / 100;
-    }
-
     /** Reads and prepares a case, with the view-factor cache on. */
     static PreparedCase load(Path file) throws CaseException {
         return load(file, ViewFactorStage.Request.DEFAULT);

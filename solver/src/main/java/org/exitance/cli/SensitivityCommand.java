@@ -20,11 +20,13 @@ import org.exitance.model.RadiationCase;
 import org.exitance.report.Caution;
 import org.exitance.report.Numbers;
 import org.exitance.report.SolveJsonWriter;
+import org.exitance.report.TableFooter;
 import org.exitance.report.TextTable;
 import org.exitance.thermal.CaseSolver;
 import org.exitance.thermal.EmissivitySensitivities;
 import org.exitance.thermal.TemperatureSolver;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -60,11 +62,11 @@ final class SensitivityCommand implements Callable<Integer> {
     @Option(names = "--load-case", paramLabel = "NAME", description = "The load case (required when the case has several).")
     private String loadCase;
 
-    @Option(names = "--band-edges", paramLabel = "µm,µm,...", description = "Band edges in µm (default: the case's, or adaptive bands).")
-    private String bandEdges;
+    @Mixin
+    private SharedOptions.BandEdges bandEdges;
 
-    @Option(names = "--json", description = "Write the ranking as JSON.")
-    private boolean json;
+    @Mixin
+    private SharedOptions.Json json;
 
     @Override
     public Integer call() throws Exception {
@@ -85,7 +87,7 @@ final class SensitivityCommand implements Callable<Integer> {
             throw new UserError(caseFile + ": --quantity temperature: the temperature of '" + surface
                     + "' is fixed; study its net-heat", ExitCodes.BAD_INPUT);
         }
-        BandSet override = BandOption.parse(bandEdges, false);
+        BandSet override = bandEdges.bands();
         EmissivitySensitivities s = Runs.guarded(c, () -> new TemperatureSolver(model)
                 .sensitivities(CaseSolver.bandsFor(model, override)));
         List<Band> bands = s.solved().bands();
@@ -114,7 +116,7 @@ final class SensitivityCommand implements Callable<Integer> {
         rows.sort(Comparator.comparingDouble((Row r) -> -r.effect).thenComparing(r -> r.surface));
         List<Row> shown = rows.subList(0, Math.min(top, rows.size()));
         PrintStream out = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true, StandardCharsets.UTF_8);
-        if (json) {
+        if (json.on()) {
             ObjectNode root = SolveJsonWriter.MAPPER.createObjectNode();
             root.put("case", caseFile.toString());
             root.put("surface", surface);
@@ -163,8 +165,7 @@ final class SensitivityCommand implements Callable<Integer> {
                         + " bands (root-sum-square), ±%.4g %s with each material's error the same in every band",
                         Math.sqrt(rss), unit, correlated, unit));
             }
-            out.println();
-            out.println(Caution.SHORT);
+            TableFooter.write(out);
         }
         return ExitCodes.OK;
     }

@@ -7,6 +7,7 @@ import static org.assertj.core.api.Assertions.within;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.exitance.cases.CaseException;
+import org.exitance.cases.CaseReader;
 import org.exitance.cases.RepoCases;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
@@ -18,12 +19,6 @@ import org.junit.jupiter.api.io.TempDir;
 class GeometryCasesTest {
     private static final Path DEMO = RepoCases.root().resolve("cases").resolve("demo");
 
-    private static Path copyDemo(Path dir, String name) throws Exception {
-        Path to = dir.resolve(name);
-        Files.copy(DEMO.resolve(name), to);
-        return to;
-    }
-
     @Test
     void chamberFromRectanglesMatchesTheChamberFromClosedFormViewFactors(@TempDir Path dir) throws Exception {
         // The matrix case takes its view factors from the closed forms for parallel and
@@ -31,7 +26,7 @@ class GeometryCasesTest {
         // the geometry case computes them from the same chamber's facets.
         SolveResult closedForm = CaseSolver.solve(CasePipeline.prepare(DEMO.resolve("heat-treating-chamber.json")).model(),
                 null);
-        PreparedCase g = CasePipeline.prepare(copyDemo(dir, "heat-treating-chamber-geometry.json"));
+        PreparedCase g = CasePipeline.prepare(RepoCases.copyDemo(dir, "heat-treating-chamber-geometry.json"));
         SolveResult fromGeometry = CaseSolver.solve(g.model(), null);
         for (SurfaceResult a : closedForm.surfaces()) {
             SurfaceResult b = fromGeometry.surface(a.name());
@@ -44,7 +39,7 @@ class GeometryCasesTest {
 
     @Test
     void viewFactorsAreCachedBesideTheCaseAndReused(@TempDir Path dir) throws Exception {
-        Path c = copyDemo(dir, "crucible-cavity.json");
+        Path c = RepoCases.copyDemo(dir, "crucible-cavity.json");
         PreparedCase first = CasePipeline.prepare(c);
         assertThat(first.viewFactors().fromCache()).isFalse();
         assertThat(ViewFactorStage.cacheFile(c)).exists();
@@ -60,7 +55,7 @@ class GeometryCasesTest {
 
     @Test
     void aCorruptCacheIsIgnoredAndReplaced(@TempDir Path dir) throws Exception {
-        Path c = copyDemo(dir, "crucible-cavity.json");
+        Path c = RepoCases.copyDemo(dir, "crucible-cavity.json");
         Files.writeString(ViewFactorStage.cacheFile(c), "{\"geometryHash\": \"x\", \"matrix\": [");
         PreparedCase r = CasePipeline.prepare(c);
         assertThat(r.viewFactors().fromCache()).isFalse();
@@ -69,7 +64,7 @@ class GeometryCasesTest {
 
     @Test
     void noCacheNeitherReadsNorWrites(@TempDir Path dir) throws Exception {
-        Path c = copyDemo(dir, "crucible-cavity.json");
+        Path c = RepoCases.copyDemo(dir, "crucible-cavity.json");
         CasePipeline.prepare(c, new ViewFactorStage.Request(false, f -> { }, () -> false));
         assertThat(ViewFactorStage.cacheFile(c)).doesNotExist();
     }
@@ -84,6 +79,8 @@ class GeometryCasesTest {
                     {"origin_m": [0, 0, 0], "edgeU_m": [1, 0, 0], "edgeV_m": [0, 1, 0]}}]},
                  "surfaces": [{"name": "plate", "material": "m", "temperature_K": 400}]}
                 """);
+        // reading computes no view factors, so only the pipeline can tell that the geometry is open
+        assertThat(CaseReader.read(c).surfaces()).singleElement().satisfies(s -> assertThat(s.areaM2()).isEqualTo(1.0));
         assertThatThrownBy(() -> CasePipeline.prepare(c)).isInstanceOf(CaseException.class)
                 .hasMessageContaining("$.geometry").hasMessageContaining("open");
     }
