@@ -30,4 +30,13 @@ public final class CaseException extends Exception {
     public String problem() {
         return problem;
     }
+
+    /** The first line of a library's message, trimmed ("unknown error" for none): messages stay one line. */
+    static String oneLine(String s) {
+        if (s == null) {
+            return "unknown error";
+        }
+        int nl = s.indexOf('\n');
+        return (nl >= 0 ? s.substring(0, nl) : s).trim();
+    }
 }

@@ -35,11 +35,7 @@ final class GeometryReader {
     private GeometryReader() {
     }
 
-    /** A read geometry: the scene, the view-factor options, and notes about mesh repairs. */
-    record Geometry(Scene scene, ViewFactorOptions options, List<String> notes, boolean solveOnFacets) {
-    }
-
-    static Geometry read(JsonCursor g, Path caseDir) throws CaseException {
+    static CaseGeometry read(JsonCursor g, Path caseDir) throws CaseException {
         g.allowOnly("parts", "options");
         Map<String, List<Facet>> bySurface = new LinkedHashMap<>();
         List<String> notes = new ArrayList<>();
@@ -74,7 +70,7 @@ final class GeometryReader {
                 default -> throw r.error("must be \"surfaces\" or \"facets\", got \"" + r.text() + "\"");
             };
         }
-        return new Geometry(scene, options, notes, facets);
+        return new CaseGeometry(scene, options, notes, facets);
     }
 
     private static final String[] SHAPES = {"rectangle", "polygon", "disc", "annulus", "cylinder", "cone", "sphere",
@@ -232,7 +228,7 @@ final class GeometryReader {
             throw new CaseException(file, "", (e.location() == null || e.location().isEmpty() ? "" : e.location() + ": ")
                     + e.problem());
         } catch (IOException e) {
-            throw ref.error("cannot read mesh: " + PropertyCsvReader.oneLine(e.getMessage()));
+            throw ref.error("cannot read mesh: " + CaseException.oneLine(e.getMessage()));
         }
         for (String note : m.notes()) {
             notes.add(file.getFileName() + ": " + note);

@@ -59,10 +59,10 @@ public final class MaterialFileReader {
 
     /** Reads and validates a case file or a standalone material file. */
     public static MaterialFile read(Path file) throws CaseException {
-        JsonNode root = CaseReader.parse(file);
+        JsonNode root = CaseJson.parse(file);
         if (root.isObject() && root.has("surfaces")) {
-            LoadedCase c = CaseReader.read(file);
-            return new MaterialFile(file, true, c.model().title(), c.model().notes(), c.model().materials());
+            CaseDescription c = CaseReader.read(file);
+            return new MaterialFile(file, true, c.title(), c.notes(), c.materials());
         }
         JsonCursor cursor = JsonCursor.root(root, file).allowOnly("title", "notes", "materials");
         String title = cursor.has("title") ? cursor.field("title").text() : "";

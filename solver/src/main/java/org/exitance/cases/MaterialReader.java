@@ -81,7 +81,7 @@ final class MaterialReader {
                     JsonCursor one = el.get(i).allowOnly("temperature_K", "temperature_C", "wavelength_um",
                             "bandEdges_um", "emissivity");
                     one.exactlyOneOf("wavelength_um", "bandEdges_um");
-                    t[i] = CaseReader.temperature(one, "temperature", false)
+                    t[i] = TemperatureField.read(one, "temperature", false)
                             .orElseThrow(() -> one.error("missing required key 'temperature_K' (or 'temperature_C')"));
                     if (i > 0 && !(t[i] > t[i - 1])) {
                         throw one.error("temperatures must increase: " + t[i] + " K after " + t[i - 1] + " K");

@@ -1,9 +1,5 @@
 package org.exitance.cases;
 
-import com.fasterxml.jackson.databind.MappingIterator;
-import com.fasterxml.jackson.dataformat.csv.CsvMapper;
-import com.fasterxml.jackson.dataformat.csv.CsvParser;
-import com.fasterxml.jackson.dataformat.csv.CsvSchema;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -39,29 +35,17 @@ final class PropertyCsvReader {
         if (!Files.isRegularFile(csv)) {
             throw referrer.error("property file not found: " + csv);
         }
-        CsvMapper mapper = new CsvMapper();
-        mapper.enable(CsvParser.Feature.TRIM_SPACES);
-        mapper.enable(CsvParser.Feature.SKIP_EMPTY_LINES);
-        mapper.enable(CsvParser.Feature.ALLOW_COMMENTS);
-        CsvSchema schema = CsvSchema.emptySchema().withHeader().withComments();
-        List<Map<String, String>> rows = new ArrayList<>();
-        List<Integer> lines = new ArrayList<>();
-        List<String> header;
-        try (MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(csv.toFile())) {
-            while (it.hasNextValue()) {
-                // the row's own line: read before nextValue, which moves on past the line end
-                int line = it.getCurrentLocation().getLineNr();
-                rows.add(it.nextValue());
-                lines.add(line);
-            }
-            header = new ArrayList<>();
-            CsvSchema parsed = (CsvSchema) it.getParserSchema();
-            parsed.forEach(c -> header.add(c.getName()));
+        CsvCells.Rows read;
+        try {
+            read = CsvCells.read(csv);
         } catch (NoSuchFileException e) {
             throw referrer.error("property file not found: " + csv);
         } catch (IOException | RuntimeException e) {
-            throw new CaseException(csv, "", "unreadable CSV: " + oneLine(e.getMessage()));
+            throw new CaseException(csv, "", "unreadable CSV: " + CaseException.oneLine(e.getMessage()));
         }
+        List<Map<String, String>> rows = read.rows();
+        List<Integer> lines = read.lines();
+        List<String> header = read.header();
         boolean withT = header.contains("temperature_K");
         List<String> expected = withT ? List.of("temperature_K", "wavelength_um", "emissivity")
                 : List.of("wavelength_um", "emissivity");
@@ -112,12 +96,4 @@ final class PropertyCsvReader {
         return out;
     }
 
-
-    static String oneLine(String s) {
-        if (s == null) {
-            return "unknown error";
-        }
-        int nl = s.indexOf('\n');
-        return (nl >= 0 ? s.substring(0, nl) : s).trim();
-    }
 }

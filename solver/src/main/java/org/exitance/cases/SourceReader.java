@@ -7,12 +7,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.exitance.geometry.Scene;
 import org.exitance.geometry.Vec3;
-import org.exitance.geometry.external.CollimatedIncidence;
-import org.exitance.geometry.external.IncidenceResult;
 import org.exitance.geometry.external.PlanetViewFactor;
-import org.exitance.geometry.external.ShadowedPlanetView;
 import org.exitance.model.ExternalSource;
 import org.exitance.spectral.source.BlackbodySource;
 import org.exitance.spectral.source.IrradiationSource;
@@ -21,37 +17,22 @@ import org.exitance.spectral.source.SourceSpectrum;
 /**
  * Reads the {@code sources} array of a case: external irradiation with a spectrum (a blackbody
  * temperature or a CSV spectrum beside the case), an irradiance, and where it lands: an incidence
- * factor per surface, or, for a geometry case, the direction of a collimated source (lit
- * fractions by ray casting) or a planet's direction and altitude (view factor to a sphere).
+ * factor per surface, or, for a geometry case, the direction of a collimated source or a
+ * planet's direction and altitude. The incidence of the last two (lit fractions by ray casting,
+ * view factor to a sphere) is computed later, by the pipeline, from the geometry.
  */
 final class SourceReader {
     private SourceReader() {
     }
 
-    /** Per-surface (or, with facet names, per-facet) factors of a geometry computation. */
-    private static Map<String, Double> factors(IncidenceResult r, List<String> facetNames) {
-        Map<String, Double> out = new LinkedHashMap<>();
-        if (facetNames != null) {
-            for (int f = 0; f < facetNames.size(); f++) {
-                out.put(facetNames.get(f), Math.min(1.0, Math.max(0.0, r.facetFactors()[f])));
-            }
-            return out;
-        }
-        for (int i = 0; i < r.surfaceNames().size(); i++) {
-            out.put(r.surfaceNames().get(i), Math.min(1.0, Math.max(0.0, r.surfaceFactors()[i])));
-        }
-        return out;
-    }
-
     /** {@code {"direction": [x, y, z], "altitude_m": h, "radius_m": R, "shadowing": false}}. */
-    private static Map<String, Double> planet(JsonCursor p, Scene scene, List<String> facetNames) throws CaseException {
+    private static SourcePlacement.Planet planet(JsonCursor p) throws CaseException {
         p.allowOnly("direction", "altitude_m", "radius_m", "shadowing");
         Vec3 toward = direction(p.field("direction"));
         double altitude = p.field("altitude_m").positive();
         double radius = p.has("radius_m") ? p.field("radius_m").positive() : PlanetViewFactor.EARTH_RADIUS_M;
         boolean shadowing = p.has("shadowing") && p.field("shadowing").bool();
-        return factors(shadowing ? new ShadowedPlanetView(scene).compute(toward, altitude, radius)
-                : PlanetViewFactor.compute(scene, toward, altitude, radius), facetNames);
+        return new SourcePlacement.Planet(toward, altitude, radius, shadowing);
     }
 
     private static Vec3 direction(JsonCursor c) throws CaseException {
@@ -67,21 +48,13 @@ final class SourceReader {
     }
 
     /**
-     * @param scene the case's geometry, or null for a case that gives its view factors as a matrix
-     *              (then only {@code incidence} can place a source)
+     * @param geometry whether the case has a geometry (without one, only {@code incidence} can place
+     *                 a source)
+     * @return the sources with their placements; incidence from the geometry is not computed here
      */
-    static List<ExternalSource> read(JsonCursor arr, Set<String> surfaceNames, Path caseDir, Scene scene)
+    static List<CaseSource> read(JsonCursor arr, Set<String> surfaceNames, Path caseDir, boolean geometry)
             throws CaseException {
-        return read(arr, surfaceNames, caseDir, scene, null);
-    }
-
-    /**
-     * @param facetNames for a case solved on facets, the facets' names in scene order: a source placed
-     *                   by the geometry then gets a factor per facet; null to get one per surface
-     */
-    static List<ExternalSource> read(JsonCursor arr, Set<String> surfaceNames, Path caseDir, Scene scene,
-                                     List<String> facetNames) throws CaseException {
-        List<ExternalSource> out = new ArrayList<>();
+        List<CaseSource> out = new ArrayList<>();
         Set<String> names = new java.util.HashSet<>();
         for (JsonCursor s : arr.elements()) {
             s.allowOnly("name", "spectrum", "irradiance_W_m2", "incidence", "direction", "planet", "description");
@@ -108,7 +81,8 @@ final class SourceReader {
                         : table.totalIrradianceWM2();
                 spectrum = table;
             }
-            Map<String, Double> incidence;
+            Map<String, Double> incidence = Map.of();
+            SourcePlacement where = SourcePlacement.GIVEN;
             String placement = s.exactlyOneOf("incidence", "direction", "planet");
             if (placement.equals("incidence")) {
                 incidence = new LinkedHashMap<>();
@@ -119,15 +93,15 @@ final class SourceReader {
                     }
                     incidence.put(e.getKey(), e.getValue().fraction());
                 }
-            } else if (scene == null) {
+            } else if (!geometry) {
                 throw s.field(placement).error("\"" + placement + "\" needs a case with \"geometry\"; with a"
                         + " view-factor matrix give \"incidence\" per surface");
             } else if (placement.equals("direction")) {
-                incidence = factors(new CollimatedIncidence(scene).compute(direction(s.field("direction"))), facetNames);
+                where = new SourcePlacement.Collimated(direction(s.field("direction")));
             } else {
-                incidence = planet(s.field("planet"), scene, facetNames);
+                where = planet(s.field("planet"));
             }
-            out.add(new ExternalSource(name, spectrum, irradiance, incidence));
+            out.add(new CaseSource(new ExternalSource(name, spectrum, irradiance, incidence), where));
         }
         return out;
     }

@@ -1,14 +1,9 @@
 package org.exitance.cases;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.MappingIterator;
-import com.fasterxml.jackson.dataformat.csv.CsvMapper;
-import com.fasterxml.jackson.dataformat.csv.CsvParser;
-import com.fasterxml.jackson.dataformat.csv.CsvSchema;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.exitance.spectral.source.SourceSpectrum;
@@ -43,28 +38,19 @@ public final class SourceSpectrumCsvReader {
         if (CsvCells.headerLine(csv) < 0) {
             throw new CaseException(csv, "", "empty: the first line that is not a comment must be '" + HEADER + "'");
         }
-        CsvMapper mapper = new CsvMapper();
-        mapper.enable(CsvParser.Feature.TRIM_SPACES);
-        mapper.enable(CsvParser.Feature.SKIP_EMPTY_LINES);
-        mapper.enable(CsvParser.Feature.ALLOW_COMMENTS);
-        CsvSchema schema = CsvSchema.emptySchema().withHeader().withComments();
-        List<Map<String, String>> rows = new ArrayList<>();
-        List<Integer> lines = new ArrayList<>();
-        List<String> header = new ArrayList<>();
-        try (MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(csv.toFile())) {
-            while (it.hasNextValue()) {
-                int line = it.getCurrentLocation().getLineNr();
-                rows.add(it.nextValue());
-                lines.add(line);
-            }
-            ((CsvSchema) it.getParserSchema()).forEach(c -> header.add(c.getName()));
+        CsvCells.Rows read;
+        try {
+            read = CsvCells.read(csv);
         } catch (JsonProcessingException e) {
             int line = e.getLocation() == null ? -1 : e.getLocation().getLineNr();
             String where = line > 0 ? "line " + line + ": " : "";
-            throw new CaseException(csv, "", where + "unreadable CSV: " + PropertyCsvReader.oneLine(e.getOriginalMessage()));
+            throw new CaseException(csv, "", where + "unreadable CSV: " + CaseException.oneLine(e.getOriginalMessage()));
         } catch (IOException | RuntimeException e) {
-            throw new CaseException(csv, "", "unreadable CSV: " + PropertyCsvReader.oneLine(e.getMessage()));
+            throw new CaseException(csv, "", "unreadable CSV: " + CaseException.oneLine(e.getMessage()));
         }
+        List<Map<String, String>> rows = read.rows();
+        List<Integer> lines = read.lines();
+        List<String> header = read.header();
         if (!String.join(",", header).equals(HEADER)) {
             throw new CaseException(csv, "", "line " + CsvCells.headerLine(csv) + ": header must be '" + HEADER + "', got '"
                     + String.join(",", header) + "'");

@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.exitance.audit.AuditResult;
 import org.exitance.audit.GrayAudit;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.model.BandSet;
 import org.exitance.model.LoadCase;
 import org.exitance.model.RadiationCase;
@@ -17,6 +17,7 @@ import org.exitance.report.AuditTableWriter;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.thermal.CaseSolver;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -40,26 +41,24 @@ final class AuditCommand implements Callable<Integer> {
             description = "Flag surfaces whose gray error exceeds this many percent (default ${DEFAULT-VALUE}).")
     private double thresholdPct;
 
-    @Option(names = "--json", description = "Write the audit as JSON.")
-    private boolean json;
+    @Mixin
+    private SharedOptions.Json json;
 
-    @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE (never overwrites without --force).")
-    private Path output;
+    @Mixin
+    private SharedOptions.Output output;
 
     @Option(names = "--plot", paramLabel = "FILE.png",
             description = "Also draw the models side by side per surface (PNG; one file per load case: NAME-LOADCASE.png).")
     private Path plot;
 
-    @Option(names = "--force", description = "Allow --output and --plot to replace existing files.")
-    private boolean force;
+    @Mixin
+    private SharedOptions.Force force;
 
-    @Option(names = "--band-edges", paramLabel = "µm,µm,...", description = "Reference band edges in µm (default: the case's, or the default rule).")
-    private String bandEdges;
+    @Mixin
+    private SharedOptions.BandEdges bandEdges;
 
-    @Option(names = "--band-tolerance", paramLabel = "PERCENT", defaultValue = "0.1",
-            description = "Adaptive bands (used when neither the case nor --band-edges gives bands) stop when no surface "
-                    + "changes by more than this percent of the largest |net heat| (default ${DEFAULT-VALUE}).")
-    private double bandTolerancePct;
+    @Mixin
+    private SharedOptions.BandTolerance bandTolerance;
 
     @Option(names = "--load-case", paramLabel = "NAME", description = "Audit only this load case.")
     private String loadCase;
@@ -69,9 +68,9 @@ final class AuditCommand implements Callable<Integer> {
         if (!(thresholdPct > 0) || !Double.isFinite(thresholdPct)) {
             throw new UserError("--threshold must be a positive number of percent", ExitCodes.BAD_INPUT);
         }
-        BandSet override = BandOption.parse(bandEdges, false);
-        double bandTolerance = Runs.bandTolerance(bandTolerancePct);
-        LoadedCase c = Runs.load(caseFile);
+        BandSet override = bandEdges.bands();
+        double tolerance = bandTolerance.fraction();
+        PreparedCase c = Runs.load(caseFile);
         RadiationCase base = c.model();
         List<String> names = base.loadCases().stream().map(LoadCase::name).toList();
         if (loadCase != null && !names.contains(loadCase)) {
@@ -80,12 +79,12 @@ final class AuditCommand implements Callable<Integer> {
         List<AuditResult> audits = Runs.guarded(c, () -> {
             List<AuditResult> out = new ArrayList<>();
             if (base.loadCases().isEmpty()) {
-                out.add(GrayAudit.run(base, CaseSolver.solve(base, override, bandTolerance), thresholdPct, "as given"));
+                out.add(GrayAudit.run(base, CaseSolver.solve(base, override, tolerance), thresholdPct, "as given"));
             }
             for (LoadCase lc : base.loadCases()) {
                 if (loadCase == null || loadCase.equals(lc.name())) {
                     RadiationCase v = lc.applyTo(base);
-                    out.add(GrayAudit.run(v, CaseSolver.solve(v, override, bandTolerance), thresholdPct, lc.name()));
+                    out.add(GrayAudit.run(v, CaseSolver.solve(v, override, tolerance), thresholdPct, lc.name()));
                 }
             }
             return out;
@@ -97,7 +96,7 @@ final class AuditCommand implements Callable<Integer> {
             for (AuditResult a : audits) {
                 Path file = audits.size() == 1 ? plot : plot.resolveSibling(plot.getFileName().toString()
                         .replaceAll("(?i)\\.png$", "") + "-" + a.name().replaceAll("[^A-Za-z0-9_.-]", "_") + ".png");
-                OutputTarget.write(file, force, null, ps -> {
+                OutputTarget.write(file, force.on(), null, ps -> {
                     try {
                         org.exitance.report.AuditPlot.writePng(base.title(), a, ps);
                     } catch (java.io.IOException e) {
@@ -108,11 +107,11 @@ final class AuditCommand implements Callable<Integer> {
         }
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);
-        if (json) {
+        if (json.on()) {
             String text = SolveJsonWriter.MAPPER.writeValueAsString(AuditJsonWriter.toJson(caseFile.toString(), audits));
-            OutputTarget.write(output, force, stdout, ps -> ps.println(text));
+            OutputTarget.write(output.file(), force.on(), stdout, ps -> ps.println(text));
         } else {
-            OutputTarget.write(output, force, stdout, ps -> AuditTableWriter.write(base.title(), audits, ps));
+            OutputTarget.write(output.file(), force.on(), stdout, ps -> AuditTableWriter.write(base.title(), audits, ps));
         }
         return ExitCodes.OK;
     }

@@ -4,13 +4,15 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.model.Band;
 import org.exitance.model.BandSet;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.report.Numbers;
 import org.exitance.thermal.CaseSolver;
+import org.exitance.validation.ExpectedReader;
+import org.exitance.validation.ExpectedValues;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -30,7 +32,7 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        LoadedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile);
         Runs.preflight(c);
         PrintWriter out = spec.commandLine().getOut();
         Enclosure e = c.model().enclosure();
@@ -77,9 +79,10 @@ final class CheckCommand implements Callable<Integer> {
                     ? "window face; its condition is on '" + s.otherFace() + "'"
                     : s.boundary().label() + " (window face; other face '" + s.otherFace() + "')"));
         }
-        if (c.expected() != null) {
-            out.println("  validation case: " + c.expected().values().size() + " expected values from "
-                    + c.expected().source());
+        ExpectedValues expected = ExpectedReader.read(c.description());
+        if (expected != null) {
+            out.println("  validation case: " + expected.values().size() + " expected values from "
+                    + expected.source());
         }
         for (String w : c.warnings()) {
             out.println("  warning: " + w);

@@ -14,6 +14,7 @@ import picocli.CommandLine.Command;
 @Command(name = "exitance",
         mixinStandardHelpOptions = true,
         versionProvider = ExitanceCommand.VersionProvider.class,
+        resourceBundle = "org.exitance.cli.OptionHelp",
         description = {"Thermal radiation exchange in enclosures whose surfaces are not gray:",
                 "band-wise radiosity network, net heat flows and unknown temperatures."},
         subcommands = {SolveCommand.class, CheckCommand.class, ViewFactorsCommand.class, AuditCommand.class, SensitivityCommand.class, VerifyCommand.class, MaterialCommand.class,

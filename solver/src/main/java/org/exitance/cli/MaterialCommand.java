@@ -23,6 +23,7 @@ import org.exitance.report.SpectrumPlot;
 import org.exitance.spectral.source.BlackbodySource;
 import org.exitance.spectral.source.IrradiationSource;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -79,23 +80,25 @@ final class MaterialCommand implements Callable<Integer> {
             description = "A source spectrum: CSV with header wavelength_um,irradiance_W_m2_um (W/(m²·µm)).")
     private Path sourceSpectrum;
 
-    @Option(names = "--json", description = "Write JSON instead of tables.")
-    private boolean json;
+    @Mixin
+    private SharedOptions.Json json;
 
-    @Option(names = {"-o", "--output"}, paramLabel = "FILE",
-            description = "Write the table or JSON to FILE instead of standard output.")
-    private Path output;
+    @Mixin
+    private SharedOptions.Output output;
 
     @Option(names = "--plot", paramLabel = "FILE.png", description = "Also draw ε(λ) and Planck curves into a PNG file.")
     private Path plot;
 
-    @Option(names = "--force", description = "Allow --output and --plot to replace existing files.")
-    private boolean force;
+    @Mixin
+    private SharedOptions.Force force;
 
     @Override
     public Integer call() throws Exception {
         checkTargets();
         MaterialFile mf = MaterialFileReader.read(file);
+        if (mf.isCase()) {
+            Runs.load(file); // a case is checked in full, view factors included, as every command checks it
+        }
         List<Material> materials = mf.select(name);
         if (plot != null && materials.size() != 1) {
             throw new UserError("--plot draws one material; choose it with --name (materials in " + file + ": "
@@ -113,13 +116,13 @@ final class MaterialCommand implements Callable<Integer> {
         if (plot != null) {
             writePlot(materials.get(0), temperatures, sources, stdout);
         }
-        if (json) {
+        if (json.on()) {
             String text = SolveJsonWriter.MAPPER.writeValueAsString(
                     MaterialJsonWriter.toJson(file.toString(), mf.isCase(), mf.title(), surveys));
-            OutputTarget.write(output, force, stdout, ps -> ps.println(text));
+            OutputTarget.write(output.file(), force.on(), stdout, ps -> ps.println(text));
         } else {
             String label = file + (mf.isCase() ? " (case)" : " (material file)");
-            OutputTarget.write(output, force, stdout, ps -> MaterialTableWriter.write(label, mf.title(), surveys, ps));
+            OutputTarget.write(output.file(), force.on(), stdout, ps -> MaterialTableWriter.write(label, mf.title(), surveys, ps));
         }
         return ExitCodes.OK;
     }
@@ -135,12 +138,13 @@ final class MaterialCommand implements Callable<Integer> {
             if (!n.endsWith(".png")) {
                 throw new UserError(plot + ": the plot file must end in .png", ExitCodes.BAD_INPUT);
             }
-            if (output != null && plot.toAbsolutePath().normalize().equals(output.toAbsolutePath().normalize())) {
+            if (output.file() != null
+                    && plot.toAbsolutePath().normalize().equals(output.file().toAbsolutePath().normalize())) {
                 throw new UserError(plot + ": --plot and --output name the same file", ExitCodes.BAD_INPUT);
             }
         }
-        for (Path p : new Path[] {plot, output}) {
-            if (p != null && Files.exists(p) && !force) {
+        for (Path p : new Path[] {plot, output.file()}) {
+            if (p != null && Files.exists(p) && !force.on()) {
                 throw new UserError(p + ": exists; not overwritten (add --force to replace it)", ExitCodes.BAD_INPUT);
             }
         }
@@ -180,7 +184,7 @@ final class MaterialCommand implements Callable<Integer> {
         }
         String title = "Material " + m.name() + ": spectral emissivity and Planck curves";
         String subtitle = sub;
-        OutputTarget.write(plot, force, stdout, ps -> {
+        OutputTarget.write(plot, force.on(), stdout, ps -> {
             try {
                 SpectrumPlot.writePng(title, subtitle, curves, ps);
             } catch (IOException e) {

@@ -2,8 +2,9 @@ package org.exitance.cli;
 
 import java.nio.file.Path;
 import org.exitance.cases.CaseException;
-import org.exitance.cases.CaseReader;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.CasePipeline;
+import org.exitance.pipeline.PreparedCase;
+import org.exitance.pipeline.ViewFactorStage;
 import org.exitance.model.BandSet;
 import org.exitance.network.NetworkConvergenceException;
 import org.exitance.result.LoadCaseResult;
@@ -12,26 +13,30 @@ import org.exitance.thermal.CaseSolver;
 import org.exitance.thermal.IllPosedCaseException;
 import org.exitance.thermal.SolveFailedException;
 import org.exitance.thermal.TemperatureSolver;
+import org.exitance.validation.ExpectedReader;
 
 /** Reading and solving with failures turned into one-line user errors naming the file. */
 final class Runs {
     private Runs() {
     }
 
-    /** A band tolerance given in percent on the command line, as a fraction. */
-    static double bandTolerance(double percent) {
-        if (!(percent > 0) || !Double.isFinite(percent)) {
-            throw new UserError("--band-tolerance must be a positive number of percent", ExitCodes.BAD_INPUT);
-        }
-        return percent / 100;
+    /** Reads and prepares a case, with the view-factor cache on. */
+    static PreparedCase load(Path file) throws CaseException {
+        return load(file, ViewFactorStage.Request.DEFAULT);
     }
 
-    static LoadedCase load(Path file) throws CaseException {
-        return CaseReader.read(file);
+    /**
+     * Reads and prepares a case ({@link CasePipeline}); a validation case's expected values are
+     * checked too, so every command rejects a bad {@code expected} block alike.
+     */
+    static PreparedCase load(Path file, ViewFactorStage.Request request) throws CaseException {
+        PreparedCase c = CasePipeline.prepare(file, request);
+        ExpectedReader.read(c.description());
+        return c;
     }
 
     /** Checks what can be known without solving: that the problem is posed at all. */
-    static void preflight(LoadedCase c) {
+    static void preflight(PreparedCase c) {
         try {
             TemperatureSolver.checkPosed(c.model().enclosure());
         } catch (IllPosedCaseException e) {
@@ -39,12 +44,12 @@ final class Runs {
         }
     }
 
-    static SolveResult solve(LoadedCase c, BandSet override) {
+    static SolveResult solve(PreparedCase c, BandSet override) {
         return guarded(c, () -> CaseSolver.solve(c.model(), override));
     }
 
     /** Every load case (or the one named), or the case as given when it has none. */
-    static java.util.List<LoadCaseResult> solveAll(LoadedCase c, BandSet override, String only,
+    static java.util.List<LoadCaseResult> solveAll(PreparedCase c, BandSet override, String only,
                                                    double bandTolerance) {
         java.util.List<String> names = c.model().loadCases().stream().map(org.exitance.model.LoadCase::name).toList();
         if (only != null && !names.contains(only)) {
@@ -55,7 +60,7 @@ final class Runs {
         return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only, bandTolerance));
     }
 
-    static <T> T guarded(LoadedCase c, java.util.function.Supplier<T> work) {
+    static <T> T guarded(PreparedCase c, java.util.function.Supplier<T> work) {
         try {
             return work.get();
         } catch (IllPosedCaseException e) {

@@ -5,7 +5,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.model.BandSet;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.report.SolveTableWriter;
@@ -16,6 +16,7 @@ import org.exitance.report.AuditJsonWriter;
 import org.exitance.report.AuditTableWriter;
 import org.exitance.result.LoadCaseResult;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -34,27 +35,23 @@ final class SolveCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
     private Path caseFile;
 
-    @Option(names = "--json", description = "Write the machine-readable result (JSON) instead of tables.")
-    private boolean json;
+    @Mixin
+    private SharedOptions.Json json;
 
-    @Option(names = {"-o", "--output"}, paramLabel = "FILE",
-            description = "Write to FILE instead of standard output (never overwrites without --force).")
-    private Path output;
+    @Mixin
+    private SharedOptions.Output output;
 
-    @Option(names = "--force", description = "Allow --output to replace an existing file.")
-    private boolean force;
+    @Mixin
+    private SharedOptions.Force force;
 
-    @Option(names = "--band-edges", paramLabel = "µm,µm,...",
-            description = "Interior band edges in µm, overriding the case and the default rule (e.g. 1.5,3,6).")
-    private String bandEdges;
+    @Mixin
+    private SharedOptions.BandEdges bandEdges;
 
-    @Option(names = "--gray", description = "Solve with one band (the gray solution).")
-    private boolean gray;
+    @Mixin
+    private SharedOptions.Gray gray;
 
-    @Option(names = "--band-tolerance", paramLabel = "PERCENT", defaultValue = "0.1",
-            description = "Adaptive bands (used when neither the case nor --band-edges gives bands) stop when no surface "
-                    + "changes by more than this percent of the largest |net heat| (default ${DEFAULT-VALUE}).")
-    private double bandTolerancePct;
+    @Mixin
+    private SharedOptions.BandTolerance bandTolerance;
 
     @Option(names = "--load-case", paramLabel = "NAME",
             description = "Solve only this load case (default: every load case of the case, side by side).")
@@ -72,15 +69,15 @@ final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        BandSet override = BandOption.parse(bandEdges, gray);
-        LoadedCase c = Runs.load(caseFile);
+        BandSet override = bandEdges.bands(gray);
+        PreparedCase c = Runs.load(caseFile);
         List<LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
-                Runs.bandTolerance(bandTolerancePct));
+                bandTolerance.fraction());
         boolean variants = !c.model().loadCases().isEmpty();
-        List<AuditResult> audits = noAudit || gray ? List.of() : audit(c, results);
+        List<AuditResult> audits = noAudit || gray.on() ? List.of() : audit(c, results);
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);
-        if (json) {
+        if (json.on()) {
             com.fasterxml.jackson.databind.node.ObjectNode node = variants
                     ? SolveJsonWriter.loadCasesToJson(results, caseFile.toString(), c.warnings())
                     : SolveJsonWriter.toJson(results.get(0).result(), caseFile.toString(), c.warnings());
@@ -95,22 +92,22 @@ final class SolveCommand implements Callable<Integer> {
                 }
             }
             String text = SolveJsonWriter.MAPPER.writeValueAsString(node);
-            OutputTarget.write(output, force, stdout, ps -> ps.println(text));
+            OutputTarget.write(output.file(), force.on(), stdout, ps -> ps.println(text));
             if (!quiet) {
                 c.warnings().forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
             }
         } else if (variants) {
-            OutputTarget.write(output, force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
+            OutputTarget.write(output.file(), force.on(), stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
                     AuditTableWriter.summaryLines(audits), ps));
         } else {
-            OutputTarget.write(output, force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
+            OutputTarget.write(output.file(), force.on(), stdout, ps -> SolveTableWriter.write(results.get(0).result(),
                     c.warnings(), AuditTableWriter.summaryLines(audits), ps));
         }
         return ExitCodes.OK;
     }
 
     /** The gray-body audit of every solved (load) case, with the bands the solve used. */
-    private List<AuditResult> audit(LoadedCase c, List<LoadCaseResult> results) {
+    private List<AuditResult> audit(PreparedCase c, List<LoadCaseResult> results) {
         if (!(thresholdPct > 0) || !Double.isFinite(thresholdPct)) {
             throw new UserError("--threshold must be a positive number of percent", ExitCodes.BAD_INPUT);
         }

@@ -15,7 +15,7 @@ import org.exitance.validation.CaseVerdict;
 import org.exitance.validation.CheckOutcome;
 import org.exitance.validation.ValidationRunner;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
@@ -34,8 +34,8 @@ final class VerifyCommand implements Callable<Integer> {
             description = "A directory of validation cases or one case (default: cases/validation).")
     private Path where = Path.of("cases", "validation");
 
-    @Option(names = "--json", description = "Write the verdicts as JSON.")
-    private boolean json;
+    @Mixin
+    private SharedOptions.Json json;
 
     @Override
     public Integer call() throws IOException {
@@ -56,7 +56,7 @@ final class VerifyCommand implements Callable<Integer> {
             verdicts.add(ValidationRunner.run(f));
         }
         PrintWriter out = spec.commandLine().getOut();
-        if (json) {
+        if (json.on()) {
             out.println(SolveJsonWriter.MAPPER.writeValueAsString(VerdictJson.toJson(verdicts)));
         } else {
             writeTable(verdicts, out);

@@ -10,14 +10,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.exitance.cases.CaseReader;
-import org.exitance.cases.ComputedViewFactors;
-import org.exitance.cases.LoadedCase;
-import org.exitance.cases.ViewFactorStage;
+import org.exitance.pipeline.ComputedViewFactors;
+import org.exitance.pipeline.PreparedCase;
+import org.exitance.pipeline.ViewFactorStage;
 import org.exitance.report.Numbers;
 import org.exitance.report.SolveJsonWriter;
 import org.exitance.report.TextTable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -36,14 +36,14 @@ final class ViewFactorsCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "CASE.json", description = "A case with a \"geometry\" object.")
     private Path caseFile;
 
-    @Option(names = "--json", description = "Write the matrix and diagnostics as JSON.")
-    private boolean json;
+    @Mixin
+    private SharedOptions.Json json;
 
     @Option(names = "--csv", paramLabel = "FILE", description = "Also write the surface matrix as CSV to FILE.")
     private Path csv;
 
-    @Option(names = "--force", description = "Allow --csv to replace an existing file.")
-    private boolean force;
+    @Mixin
+    private SharedOptions.Force force;
 
     @Option(names = "--no-cache", description = "Compute afresh; neither read nor write the cache beside the case.")
     private boolean noCache;
@@ -54,9 +54,9 @@ final class ViewFactorsCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Progress progress = Progress.onStderr(!quiet, spec.commandLine().getErr());
-        LoadedCase c;
+        PreparedCase c;
         try {
-            c = CaseReader.read(caseFile, new ViewFactorStage.Request(!noCache, progress, progress::cancelled));
+            c = Runs.load(caseFile, new ViewFactorStage.Request(!noCache, progress, progress::cancelled));
         } finally {
             progress.done();
         }
@@ -68,9 +68,9 @@ final class ViewFactorsCommand implements Callable<Integer> {
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);
         if (csv != null) {
-            OutputTarget.write(csv, force, stdout, ps -> writeCsv(v, ps));
+            OutputTarget.write(csv, force.on(), stdout, ps -> writeCsv(v, ps));
         }
-        if (json) {
+        if (json.on()) {
             stdout.println(SolveJsonWriter.MAPPER.writeValueAsString(toJson(v, caseFile)));
         } else {
             writeTable(v, spec.commandLine().getOut());

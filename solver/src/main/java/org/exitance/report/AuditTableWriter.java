@@ -97,7 +97,6 @@ public final class AuditTableWriter {
                     : a.flaggedCount() + " of " + a.rows().size() + " surfaces are off by more than the threshold under"
                     + " the gray shortcut."));
         }
-        out.println();
-        out.println(Caution.SHORT);
+        TableFooter.write(out);
     }
 }

@@ -42,8 +42,7 @@ public final class MaterialTableWriter {
         out.println();
         out.println("ε: total hemispherical emissivity at the surface temperature T. α: total absorptivity of the"
                 + " diffuse surface at T for the source (Kirchhoff: α_λ = ε_λ).");
-        out.println();
-        out.println(Caution.SHORT);
+        TableFooter.write(out);
     }
 
     /** One line describing a source. */

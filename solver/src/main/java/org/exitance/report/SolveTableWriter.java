@@ -25,7 +25,7 @@ public final class SolveTableWriter {
         writeLoadCases(results, warnings, List.of(), out);
     }
 
-    /** As above, with extra lines (e.g. the audit summary) before the caution. */
+    /** As above, with extra lines (e.g. the audit summary) before the warnings and the caution ({@link TableFooter}). */
     public static void writeLoadCases(List<LoadCaseResult> results, List<String> warnings,
                                       List<String> extra, PrintStream out) {
         for (LoadCaseResult r : results) {
@@ -56,33 +56,17 @@ public final class SolveTableWriter {
         }
         out.println("Load cases side by side (T: temperature; Q: heat supplied = radiation + convection + conduction):");
         t.render(0).forEach(out::println);
-        if (!extra.isEmpty()) {
-            out.println();
-            extra.forEach(out::println);
-        }
-        for (String w : warnings) {
-            out.println("Warning: " + w);
-        }
-        out.println();
-        out.println(Caution.SHORT);
+        TableFooter.write(extra, warnings, out);
     }
 
     public static void write(SolveResult r, List<String> warnings, PrintStream out) {
         write(r, warnings, List.of(), out);
     }
 
-    /** As above, with extra lines (e.g. the audit summary) before the caution. */
+    /** As above, with extra lines (e.g. the audit summary) before the warnings and the caution ({@link TableFooter}). */
     public static void write(SolveResult r, List<String> warnings, List<String> extra, PrintStream out) {
         body(r, out);
-        if (!extra.isEmpty()) {
-            out.println();
-            extra.forEach(out::println);
-        }
-        for (String w : warnings) {
-            out.println("Warning: " + w);
-        }
-        out.println();
-        out.println(Caution.SHORT);
+        TableFooter.write(extra, warnings, out);
     }
 
     private static void body(SolveResult r, PrintStream out) {

@@ -7,10 +7,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 import org.exitance.cases.CaseException;
-import org.exitance.cases.CaseReader;
-import org.exitance.cases.Expectation;
-import org.exitance.cases.ExpectedValues;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.CasePipeline;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.thermal.CaseSolver;
@@ -18,7 +16,9 @@ import org.exitance.thermal.CaseSolver;
 /**
  * Runs validation cases: each carries reference values from a named published source and a
  * tolerance; the runner solves the case and compares. The command {@code exitance verify} and
- * the test suite both use it, so what engineers see is what the build checks.
+ * the test suite both use it, so what engineers see is what the build checks. A case goes through
+ * the same pipeline as on the command line ({@link CasePipeline}); its expected values are read
+ * after it, so a case with several problems reports the same one here as there.
  */
 public final class ValidationRunner {
     private ValidationRunner() {
@@ -33,13 +33,14 @@ public final class ValidationRunner {
 
     /** Reads, solves and checks one case; never throws for a problem with the case itself. */
     public static CaseVerdict run(Path file) {
-        LoadedCase c;
+        PreparedCase c;
+        ExpectedValues ev;
         try {
-            c = CaseReader.read(file);
+            c = CasePipeline.prepare(file);
+            ev = ExpectedReader.read(c.description());
         } catch (CaseException e) {
             return new CaseVerdict(file, "", "", List.of(), e.getMessage(), Double.NaN);
         }
-        ExpectedValues ev = c.expected();
         if (ev == null) {
             return new CaseVerdict(file, c.model().title(), "", List.of(),
                     "not a validation case: it has no \"expected\" block", Double.NaN);

@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.io.IOException;
 import java.util.TreeSet;
 import java.util.stream.Stream;
-import org.exitance.cases.CaseReader;
+import org.exitance.pipeline.CasePipeline;
 import org.exitance.model.BandSet;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.RadiationCase;
@@ -44,7 +44,7 @@ class AdaptiveBandsTest {
     Stream<DynamicTest> adaptiveBandsAgreeWithAFineFixedSetOnEveryShippedCase() throws IOException {
         return org.exitance.validation.ShippedCasesTestAccess.shippedCases().stream()
                 .map(f -> DynamicTest.dynamicTest(f.getFileName().toString(), () -> {
-                    RadiationCase base = CaseReader.read(f).model();
+                    RadiationCase base = CasePipeline.prepare(f).model();
                     var variants = base.loadCases().isEmpty() ? java.util.List.of(base)
                             : base.loadCases().stream().map(lc -> lc.applyTo(base)).toList();
                     for (RadiationCase c : variants) {

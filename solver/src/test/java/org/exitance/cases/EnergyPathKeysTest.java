@@ -30,12 +30,12 @@ class EnergyPathKeysTest {
 
     @Test
     void dissipationConvectionAndLinksAreRead(@TempDir Path dir) throws Exception {
-        LoadedCase c = CaseReader.read(write(dir, "b", "0.3"));
-        EnclosureSurface a = c.model().enclosure().surface(0);
+        CaseDescription c = CaseReader.read(write(dir, "b", "0.3"));
+        EnclosureSurface a = c.surfaces().get(0);
         assertThat(a.boundary()).isEqualTo(new BoundaryCondition.HeatInput(10));
         assertThat(a.convection().coefficientWPerM2K()).isEqualTo(4);
         assertThat(a.convection().fluidTemperatureK()).isEqualTo(293.15);
-        assertThat(c.model().enclosure().links()).hasSize(1);
+        assertThat(c.links()).hasSize(1);
     }
 
     @Test

@@ -71,4 +71,15 @@ public final class RepoCases {
             throw new UncheckedIOException(e);
         }
     }
+
+    /** Copies a file of cases/demo into dir (so that a cache written beside it stays out of the tree). */
+    public static Path copyDemo(Path dir, String fileName) {
+        try {
+            Path to = dir.resolve(fileName);
+            Files.copy(root().resolve("cases").resolve("demo").resolve(fileName), to);
+            return to;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
 }

@@ -23,7 +23,7 @@ class WarningsTest {
 
     @Test
     void smallReciprocityErrorIsAWarningNotAFailure() throws Exception {
-        LoadedCase c = CaseReader.read(slightlyUnreciprocal());
+        CaseDescription c = CaseReader.read(slightlyUnreciprocal());
         assertThat(c.warnings()).singleElement().asString().contains("reciprocity", "'hot'", "'cold'");
     }
 

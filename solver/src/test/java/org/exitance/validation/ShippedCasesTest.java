@@ -7,8 +7,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Stream;
-import org.exitance.cases.CaseReader;
-import org.exitance.cases.LoadedCase;
+import org.exitance.pipeline.CasePipeline;
+import org.exitance.pipeline.PreparedCase;
 import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 import org.exitance.thermal.CaseSolver;
@@ -32,7 +32,7 @@ class ShippedCasesTest {
         List<Path> files = shippedCases();
         assertThat(files).anyMatch(p -> p.toString().contains("demo"));
         return files.stream().map(f -> DynamicTest.dynamicTest(f.getFileName().toString(), () -> {
-            LoadedCase c = CaseReader.read(f);
+            PreparedCase c = CasePipeline.prepare(f);
             for (LoadCaseResult lc : CaseSolver.solveAll(c.model(), null, null)) {
                 SolveResult r = lc.result();
                 // first law over the enclosure, its environment and its sources (common practice)
@@ -44,7 +44,7 @@ class ShippedCasesTest {
     @TestFactory
     Stream<DynamicTest> theAuditRunsOnEveryShippedCase() throws IOException {
         return shippedCases().stream().map(f -> DynamicTest.dynamicTest(f.getFileName().toString(), () -> {
-            var model = CaseReader.read(f).model();
+            var model = CasePipeline.prepare(f).model();
             java.util.List<org.exitance.model.RadiationCase> variants = model.loadCases().isEmpty() ? java.util.List.of(model)
                     : model.loadCases().stream().map(lc -> lc.applyTo(model)).toList();
             for (var v : variants) {

@@ -1,4 +1,4 @@
-package org.exitance.cases;
+package org.exitance.pipeline;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -11,6 +11,8 @@ import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.BooleanSupplier;
+import org.exitance.cases.CaseException;
+import org.exitance.cases.CaseGeometry;
 import org.exitance.geometry.viewfactor.ClosureDiagnostics;
 import org.exitance.geometry.viewfactor.MethodCounts;
 import org.exitance.geometry.viewfactor.ProgressListener;
@@ -54,7 +56,7 @@ public final class ViewFactorStage {
      * @param facets also keep the facet-level factors (for a case solved on facets); the cache holds
      *               surface factors only, so it is then neither read nor written
      */
-    static ComputedViewFactors obtain(Path caseFile, GeometryReader.Geometry g, Request req, boolean facets)
+    static ComputedViewFactors obtain(Path caseFile, CaseGeometry g, Request req, boolean facets)
             throws CaseException {
         String hash = org.exitance.geometry.viewfactor.GeometryHash.of(g.scene(), g.options());
         Path cache = cacheFile(caseFile);

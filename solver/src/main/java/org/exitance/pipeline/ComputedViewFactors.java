@@ -1,4 +1,4 @@
-package org.exitance.cases;
+package org.exitance.pipeline;
 
 import java.util.List;
 
@@ -45,12 +45,5 @@ public record ComputedViewFactors(List<String> surfaceNames, double[] areasM2, d
     }
     public ComputedViewFactors {
         surfaceNames = List.copyOf(surfaceNames);
-    }
-
-    /** The same numbers, marked as loaded from the cache. */
-    ComputedViewFactors cached() {
-        return new ComputedViewFactors(surfaceNames, areasM2, matrix, environmentFactors, facetCount, maxRowSumDeviation,
-                maxRowSumExcess, maxReciprocityError, worstRow, maxRowErrorEstimate, methodSummary, smoothing, geometryHash, 0, true,
-                facets);
     }
 }

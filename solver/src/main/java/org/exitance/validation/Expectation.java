@@ -1,4 +1,4 @@
-package org.exitance.cases;
+package org.exitance.validation;
 
 /**
  * One expected value of a validation case.

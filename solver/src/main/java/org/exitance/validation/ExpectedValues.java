@@ -1,4 +1,4 @@
-package org.exitance.cases;
+package org.exitance.validation;
 
 import java.util.List;
 

@@ -1,4 +1,4 @@
-package org.exitance.cases;
+package org.exitance.pipeline;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -27,8 +27,8 @@ final class FacetExpansion {
     private FacetExpansion() {
     }
 
-    static Result expand(ComputedViewFactors v, List<EnclosureSurface> caseSurfaces, JsonCursor where)
-            throws CaseException {
+    /** @param caseSurfaces the case's surfaces (none a window face: the reader has checked) */
+    static Result expand(ComputedViewFactors v, List<EnclosureSurface> caseSurfaces) {
         ComputedViewFactors.FacetFactors ff = v.facets();
         int n = ff.count();
         String[] sceneNames = new String[n];
@@ -41,10 +41,6 @@ final class FacetExpansion {
         List<Integer> order = new ArrayList<>();
         Map<String, List<String>> groups = new LinkedHashMap<>();
         for (EnclosureSurface s : caseSurfaces) {
-            if (s.isWindowFace()) {
-                throw where.error("windows are solved on surfaces: leave \"resolution\" at \"surfaces\" (surface '"
-                        + s.name() + "' is a window face)");
-            }
             int si = v.surfaceNames().indexOf(s.name());
             List<String> names = new ArrayList<>();
             for (int f = 0; f < n; f++) {

@@ -1,4 +1,4 @@
-package org.exitance.cases;
+package org.exitance.pipeline;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
@@ -6,6 +6,9 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.exitance.cases.CaseException;
+import org.exitance.cases.CaseReader;
+import org.exitance.cases.RepoCases;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.thermal.CaseSolver;
@@ -16,20 +19,14 @@ import org.junit.jupiter.api.io.TempDir;
 class GeometryCasesTest {
     private static final Path DEMO = RepoCases.root().resolve("cases").resolve("demo");
 
-    private static Path copyDemo(Path dir, String name) throws Exception {
-        Path to = dir.resolve(name);
-        Files.copy(DEMO.resolve(name), to);
-        return to;
-    }
-
     @Test
     void chamberFromRectanglesMatchesTheChamberFromClosedFormViewFactors(@TempDir Path dir) throws Exception {
         // The matrix case takes its view factors from the closed forms for parallel and
         // perpendicular rectangles (Incropera et al., 6th ed., Table 13.2) with view-factor algebra;
         // the geometry case computes them from the same chamber's facets.
-        SolveResult closedForm = CaseSolver.solve(CaseReader.read(DEMO.resolve("heat-treating-chamber.json")).model(),
+        SolveResult closedForm = CaseSolver.solve(CasePipeline.prepare(DEMO.resolve("heat-treating-chamber.json")).model(),
                 null);
-        LoadedCase g = CaseReader.read(copyDemo(dir, "heat-treating-chamber-geometry.json"));
+        PreparedCase g = CasePipeline.prepare(RepoCases.copyDemo(dir, "heat-treating-chamber-geometry.json"));
         SolveResult fromGeometry = CaseSolver.solve(g.model(), null);
         for (SurfaceResult a : closedForm.surfaces()) {
             SurfaceResult b = fromGeometry.surface(a.name());
@@ -42,33 +39,33 @@ class GeometryCasesTest {
 
     @Test
     void viewFactorsAreCachedBesideTheCaseAndReused(@TempDir Path dir) throws Exception {
-        Path c = copyDemo(dir, "crucible-cavity.json");
-        LoadedCase first = CaseReader.read(c);
+        Path c = RepoCases.copyDemo(dir, "crucible-cavity.json");
+        PreparedCase first = CasePipeline.prepare(c);
         assertThat(first.viewFactors().fromCache()).isFalse();
         assertThat(ViewFactorStage.cacheFile(c)).exists();
-        LoadedCase second = CaseReader.read(c);
+        PreparedCase second = CasePipeline.prepare(c);
         assertThat(second.viewFactors().fromCache()).isTrue();
         assertThat(second.viewFactors().matrix()).isDeepEqualTo(first.viewFactors().matrix());
         // a changed geometry has another hash: recomputed
         Files.writeString(c, Files.readString(c).replace("\"height_m\": 0.4", "\"height_m\": 0.5"));
-        LoadedCase third = CaseReader.read(c);
+        PreparedCase third = CasePipeline.prepare(c);
         assertThat(third.viewFactors().fromCache()).isFalse();
         assertThat(third.viewFactors().geometryHash()).isNotEqualTo(first.viewFactors().geometryHash());
     }
 
     @Test
     void aCorruptCacheIsIgnoredAndReplaced(@TempDir Path dir) throws Exception {
-        Path c = copyDemo(dir, "crucible-cavity.json");
+        Path c = RepoCases.copyDemo(dir, "crucible-cavity.json");
         Files.writeString(ViewFactorStage.cacheFile(c), "{\"geometryHash\": \"x\", \"matrix\": [");
-        LoadedCase r = CaseReader.read(c);
+        PreparedCase r = CasePipeline.prepare(c);
         assertThat(r.viewFactors().fromCache()).isFalse();
-        assertThat(CaseReader.read(c).viewFactors().fromCache()).isTrue();
+        assertThat(CasePipeline.prepare(c).viewFactors().fromCache()).isTrue();
     }
 
     @Test
     void noCacheNeitherReadsNorWrites(@TempDir Path dir) throws Exception {
-        Path c = copyDemo(dir, "crucible-cavity.json");
-        CaseReader.read(c, new ViewFactorStage.Request(false, f -> { }, () -> false));
+        Path c = RepoCases.copyDemo(dir, "crucible-cavity.json");
+        CasePipeline.prepare(c, new ViewFactorStage.Request(false, f -> { }, () -> false));
         assertThat(ViewFactorStage.cacheFile(c)).doesNotExist();
     }
 
@@ -82,7 +79,9 @@ class GeometryCasesTest {
                     {"origin_m": [0, 0, 0], "edgeU_m": [1, 0, 0], "edgeV_m": [0, 1, 0]}}]},
                  "surfaces": [{"name": "plate", "material": "m", "temperature_K": 400}]}
                 """);
-        assertThatThrownBy(() -> CaseReader.read(c)).isInstanceOf(CaseException.class)
+        // reading computes no view factors, so only the pipeline can tell that the geometry is open
+        assertThat(CaseReader.read(c).surfaces()).singleElement().satisfies(s -> assertThat(s.areaM2()).isEqualTo(1.0));
+        assertThatThrownBy(() -> CasePipeline.prepare(c)).isInstanceOf(CaseException.class)
                 .hasMessageContaining("$.geometry").hasMessageContaining("open");
     }
 
@@ -105,7 +104,7 @@ class GeometryCasesTest {
         for (String[] b : bad) {
             Path c = dir.resolve("bad.json");
             Files.writeString(c, String.format(base, b[0]));
-            assertThatThrownBy(() -> CaseReader.read(c)).as(b[0]).isInstanceOf(CaseException.class)
+            assertThatThrownBy(() -> CasePipeline.prepare(c)).as(b[0]).isInstanceOf(CaseException.class)
                     .hasMessageContaining(b[1]);
         }
     }
@@ -130,7 +129,7 @@ class GeometryCasesTest {
                     "planet": {"direction": [0, 0, -1], "altitude_m": 400000}}]}
                 """.formatted(String.join(", ", java.util.stream.Stream.of("bottom", "top", "front", "back", "left",
                 "right").map(n -> "{\"name\": \"" + n + "\", \"material\": \"m\", \"adiabatic\": true}").toList())));
-        var model = CaseReader.read(c).model();
+        var model = CasePipeline.prepare(c).model();
         var sun = model.sources().get(0);
         double third = 1 / Math.sqrt(3);
         assertThat(sun.incidence().get("top")).isCloseTo(third, within(1e-12));
@@ -151,7 +150,7 @@ class GeometryCasesTest {
         String plates = Files.readString(RepoCases.root().resolve("cases/validation/gray-parallel-plates.json"));
         Files.writeString(c, plates.replaceFirst("\\{", "{\"sources\": [{\"name\": \"sun\", \"spectrum\": "
                 + "{\"blackbody_K\": 5772}, \"irradiance_W_m2\": 1000, \"direction\": [0, 0, 1]}],"));
-        assertThatThrownBy(() -> CaseReader.read(c)).isInstanceOf(CaseException.class)
+        assertThatThrownBy(() -> CasePipeline.prepare(c)).isInstanceOf(CaseException.class)
                 .hasMessageContaining("$.sources[0].direction").hasMessageContaining("geometry");
     }
 
@@ -170,7 +169,7 @@ class GeometryCasesTest {
     private static SolveResult cavity(Path dir, String resolution, String material, String lid) throws Exception {
         Path c = dir.resolve(resolution + material + ".json");
         Files.writeString(c, CAVITY.formatted(resolution, material, material, material, lid));
-        return CaseSolver.solve(CaseReader.read(c).model(), null);
+        return CaseSolver.solve(CasePipeline.prepare(c).model(), null);
     }
 
     @Test
@@ -210,7 +209,7 @@ class GeometryCasesTest {
                 .replaceFirst("\"surfaces\": \\[", "\"conductiveLinks\": [{\"between\": [\"lid\", \"base\"],"
                         + " \"conductance_W_K\": 1}], \"surfaces\": [");
         Files.writeString(c, text);
-        assertThatThrownBy(() -> CaseReader.read(c)).isInstanceOf(CaseException.class)
+        assertThatThrownBy(() -> CasePipeline.prepare(c)).isInstanceOf(CaseException.class)
                 .hasMessageContaining("$.geometry.options.resolution");
     }
 }

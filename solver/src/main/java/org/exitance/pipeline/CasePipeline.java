@@ -1,0 +1,85 @@
+package org.exitance.pipeline;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.exitance.cases.CaseDescription;
+import org.exitance.cases.CaseException;
+import org.exitance.cases.CaseGeometry;
+import org.exitance.cases.CaseReader;
+import org.exitance.model.Enclosure;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.ExternalSource;
+import org.exitance.model.RadiationCase;
+
+/**
+ * From a case file to the model a solve takes, in one step that the command line and the
+ * validation runner share:
+ * <pre>
+ *   read (CaseReader: parse and validate, compute nothing)
+ *     → view factors (geometry cases: the cache beside the case, or computed: ViewFactorStage)
+ *     → facet expansion (cases solved on facets: FacetExpansion)
+ *     → source incidence from the geometry (SourceIncidence)
+ *     → RadiationCase
+ * </pre>
+ * The solve ({@code thermal.CaseSolver}), the gray-body audit and the writers follow it.
+ * A library user who only wants what the file says calls {@link CaseReader#read} instead, which
+ * computes no view factors and writes no cache. Checks that need the view factors (a geometry
+ * without an environment must be closed) run here, after every check of the reader.
+ */
+public final class CasePipeline {
+    private CasePipeline() {
+    }
+
+    /** Reads a case and prepares it, with the view-factor cache on. */
+    public static PreparedCase prepare(Path file) throws CaseException {
+        return prepare(file, ViewFactorStage.Request.DEFAULT);
+    }
+
+    /** As {@link #prepare(Path)}, with control over the cache, progress and cancellation of view factors. */
+    public static PreparedCase prepare(Path file, ViewFactorStage.Request request) throws CaseException {
+        return prepare(CaseReader.read(file), request);
+    }
+
+    /** Prepares a case already read: view factors, facet expansion, source incidence, the model. */
+    public static PreparedCase prepare(CaseDescription d, ViewFactorStage.Request request) throws CaseException {
+        CaseGeometry g = d.geometry();
+        if (g == null) {
+            Enclosure enclosure = enclosure(d, d.surfaces(), d.viewFactors());
+            RadiationCase model = model(d, enclosure, SourceIncidence.place(d.sources(), null, null), null);
+            return new PreparedCase(d, model, d.warnings(), null);
+        }
+        List<String> warnings = new ArrayList<>(d.warnings());
+        ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets());
+        double[][] f = GeometryViewFactors.inCaseOrder(computed, d.surfaces(), d.environment() != null, d.file(),
+                warnings);
+        if (!g.solveOnFacets()) {
+            Enclosure enclosure = enclosure(d, d.surfaces(), f);
+            RadiationCase model = model(d, enclosure, SourceIncidence.place(d.sources(), g.scene(), null), null);
+            return new PreparedCase(d, model, warnings, computed);
+        }
+        FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces());
+        Enclosure enclosure = enclosure(d, facets.surfaces(), facets.matrix());
+        List<ExternalSource> sources = FacetExpansion.spreadOverFacets(
+                SourceIncidence.place(d.sources(), g.scene(), facets.sceneOrder()), facets.groups());
+        return new PreparedCase(d, model(d, enclosure, sources, facets), warnings, computed);
+    }
+
+    /**
+     * @param f view factors in the order of {@code surfaces}; not modified (the enclosure copies it)
+     */
+    private static Enclosure enclosure(CaseDescription d, List<EnclosureSurface> surfaces, double[][] f)
+            throws CaseException {
+        try {
+            return new Enclosure(surfaces, f, d.environment(), d.links());
+        } catch (IllegalArgumentException e) {
+            throw new CaseException(d.file(), "$", e.getMessage());
+        }
+    }
+
+    private static RadiationCase model(CaseDescription d, Enclosure enclosure, List<ExternalSource> sources,
+                                       FacetExpansion.Result facets) {
+        return new RadiationCase(d.title(), d.notes(), d.materials(), enclosure, d.bands(), d.settings(), sources,
+                d.loadCases(), facets == null ? null : facets.groups());
+    }
+}
