@@ -11,6 +11,7 @@ import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.ExternalSource;
 import org.exitance.model.RadiationCase;
+import org.exitance.model.ViewFactorMatrix;
 
 /**
  * From a case file to the model a solve takes, in one step that the command line and the
@@ -59,7 +60,7 @@ public final class CasePipeline {
             return new PreparedCase(d, model, warnings, computed);
         }
         FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces());
-        Enclosure enclosure = enclosure(d, facets.surfaces(), facets.matrix());
+        Enclosure enclosure = enclosure(d, facets.surfaces(), facets.matrix());  // shares the facet matrix
         List<ExternalSource> sources = FacetExpansion.spreadOverFacets(
                 SourceIncidence.place(d.sources(), g.scene(), facets.sceneOrder()), facets.groups());
         return new PreparedCase(d, model(d, enclosure, sources, facets), warnings, computed);
@@ -69,6 +70,12 @@ public final class CasePipeline {
      * @param f view factors in the order of {@code surfaces}; not modified (the enclosure copies it)
      */
     private static Enclosure enclosure(CaseDescription d, List<EnclosureSurface> surfaces, double[][] f)
+            throws CaseException {
+        return enclosure(d, surfaces, ViewFactorMatrix.copyOf(f));
+    }
+
+    /** @param f view factors in the order of {@code surfaces}, shared by the enclosure (held once) */
+    private static Enclosure enclosure(CaseDescription d, List<EnclosureSurface> surfaces, ViewFactorMatrix f)
             throws CaseException {
         try {
             return new Enclosure(surfaces, f, d.environment(), d.links());

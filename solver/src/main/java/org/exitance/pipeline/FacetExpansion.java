@@ -7,6 +7,7 @@ import java.util.Map;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.ExternalSource;
 import org.exitance.model.FacetGroups;
+import org.exitance.model.ViewFactorMatrix;
 
 /**
  * Turns a geometry case solved on facets into an enclosure of facets: each facet of surface S
@@ -21,7 +22,7 @@ final class FacetExpansion {
      * @param groups      the grouping back to the case's surfaces
      * @param sceneOrder  facet names in scene order (as the geometry numbers facets)
      */
-    record Result(List<EnclosureSurface> surfaces, double[][] matrix, FacetGroups groups, List<String> sceneOrder) {
+    record Result(List<EnclosureSurface> surfaces, ViewFactorMatrix matrix, FacetGroups groups, List<String> sceneOrder) {
     }
 
     private FacetExpansion() {
@@ -54,14 +55,36 @@ final class FacetExpansion {
             }
             groups.put(s.name(), names);
         }
-        double[][] m = new double[n][n];
+        return new Result(out, facetMatrix(ff.matrix(), order, n), new FacetGroups(groups), List.of(sceneNames));
+    }
+
+    /**
+     * The facet matrix in expansion order, negative entries (round-off of hidden pairs) and −0 held at +0.
+     * Held once: when the order is the scene's own and no entry is negative, the matrix shares the
+     * computed array (read only from then on); otherwise it is one reordered copy.
+     *
+     * @param scene  facet view factors in scene order, row-major; not modified
+     */
+    private static ViewFactorMatrix facetMatrix(double[] scene, List<Integer> order, int n) {
+        boolean identity = true;
+        for (int a = 0; a < n && identity; a++) {
+            identity = order.get(a) == a;
+        }
+        boolean nonNegative = true;
+        for (int i = 0; i < scene.length && nonNegative; i++) {
+            nonNegative = Double.doubleToRawLongBits(scene[i]) >= 0; // sign bit clear: +0 and positive, not −0
+        }
+        if (identity && nonNegative) {
+            return ViewFactorMatrix.adopt(scene, n);
+        }
+        double[] m = new double[scene.length];
         for (int a = 0; a < n; a++) {
             int fa = order.get(a);
             for (int b = 0; b < n; b++) {
-                m[a][b] = Math.max(0.0, ff.matrix()[fa * n + order.get(b)]);
+                m[a * n + b] = Math.max(0.0, scene[fa * n + order.get(b)]);
             }
         }
-        return new Result(out, m, new FacetGroups(groups), List.of(sceneNames));
+        return ViewFactorMatrix.adopt(m, n);
     }
 
     /** Spreads incidence factors given per case surface onto that surface's facets. */
