@@ -5,8 +5,11 @@ package org.exitance.model;
  *
  * @param temperatureToleranceK   the property loop stops when no temperature moves more than this
  *                                between property updates (K)
- * @param relativeHeatTolerance   Newton stops when every surface's heat residual is below this
- *                                fraction of the largest power in play, max(A σ T⁴, |Q|) (–)
+ * @param relativeHeatTolerance   Newton's heat test: every node's residual below this fraction of
+ *                                the heat flowing through the node by every path, plus its rounding
+ *                                floor (–); see thermal/NodeBalance
+ * @param temperatureToleranceK   also Newton's step test: the last step moves no temperature by
+ *                                more than this (K)
  * @param maxNewtonIterations     Newton iterations allowed per property update
  * @param maxPropertyIterations   outer updates of temperature-dependent band properties allowed
  */
