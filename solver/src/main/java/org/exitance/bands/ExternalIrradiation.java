@@ -22,13 +22,17 @@ import org.exitance.spectral.SpectralEmissivity;
  * @param irradiance            H_i, all external irradiation arriving at surface i in the band
  * @param leaving               R_i, the part of it that leaves face i unabsorbed: reflected from H_i
  *                              and, for a window face, transmitted from the other face's H
+ * @param retained              H_i − R_i, summed from its parts without cancellation: what face i keeps
+ *                              (absorbs, or passes to its other face) less what its other face passes to it
+ * @param retainedMagnitude     the sum of the magnitudes of those parts (W/m²)
  * @param environmentPower      f_k(T_env) σT_env⁴, the environment's band emissive power (0 without one)
  * @param sourceFraction        per source, the share of its power in the band
  * @param sourceAbsorptivity    [source][surface], each surface's band absorptivity for the source's
  *                              own spectrum where the source delivers power in the band (else 0),
  *                              whatever {@link ExternalAbsorption} the network uses
  */
-public record ExternalIrradiation(double[] irradiance, double[] leaving, double environmentPower,
+public record ExternalIrradiation(double[] irradiance, double[] leaving, double[] retained,
+                                  double[] retainedMagnitude, double environmentPower,
                                   double[] sourceFraction, double[][] sourceAbsorptivity) {
 
     /**
@@ -53,6 +57,8 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving, double 
         }
         double[] h = new double[n];
         double[] leaving = new double[n];
+        double[] retained = new double[n];
+        double[] magnitude = new double[n];
         double[][] sourceAlpha = new double[ns][n];
         for (int i = 0; i < n; i++) {
             SpectralEmissivity e = r.surface(i).material().emissivity();
@@ -62,7 +68,7 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving, double 
                 double alpha = own ? eps[i] : BandAverages.planckMean(e, b.lowerUm(), b.upperUm(), r.environmentK, t[i]);
                 double tauExt = tr == null ? 0.0 : own ? tau[i]
                         : BandAverages.planckMean(tr, b.lowerUm(), b.upperUm(), r.environmentK, t[i]);
-                absorb(r, i, hEnv, alpha, tauExt, h, leaving);
+                absorb(r, i, hEnv, alpha, tauExt, h, leaving, retained, magnitude);
             }
             for (int s = 0; s < ns; s++) {
                 ExternalSource src = r.sources.get(s);
@@ -72,21 +78,26 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving, double 
                     double alpha = own ? eps[i] : sourceAlpha[s][i];
                     double tauExt = tr == null ? 0.0 : own ? tau[i]
                             : src.spectrum().bandAbsorptivity(tr, b.lowerUm(), b.upperUm(), t[i]);
-                    absorb(r, i, hs, alpha, tauExt, h, leaving);
+                    absorb(r, i, hs, alpha, tauExt, h, leaving, retained, magnitude);
                 }
             }
         }
-        return new ExternalIrradiation(h, leaving, envE, fraction, sourceAlpha);
+        return new ExternalIrradiation(h, leaving, retained, magnitude, envE, fraction, sourceAlpha);
     }
 
     /** One term H arriving at face i: α H is absorbed, τ H leaves the other face, the rest is reflected. */
     private static void absorb(RadiativeArrays r, int i, double arriving, double alpha, double tauExt, double[] h,
-                               double[] leaving) {
+                               double[] leaving, double[] retained, double[] magnitude) {
         h[i] += arriving;
         leaving[i] += Math.max(0.0, 1 - alpha - tauExt) * arriving;
+        double kept = Math.min(1.0, alpha + tauExt) * arriving;
+        retained[i] += kept;
+        magnitude[i] += kept;
         int o = r.otherFace[i];
         if (o >= 0) {
             leaving[o] += tauExt * arriving;
+            retained[o] -= tauExt * arriving;
+            magnitude[o] += tauExt * arriving;
         }
     }
 }

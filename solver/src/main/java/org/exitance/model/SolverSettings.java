@@ -4,9 +4,11 @@ package org.exitance.model;
  * Convergence settings of the temperature solve.
  *
  * @param temperatureToleranceK   the property loop stops when no temperature moves more than this
- *                                between property updates (K)
- * @param relativeHeatTolerance   Newton stops when every surface's heat residual is below this
- *                                fraction of the largest power in play, max(A σ T⁴, |Q|) (–)
+ *                                between property updates, and Newton's step test asks that the
+ *                                last step move none by more than this (K)
+ * @param relativeHeatTolerance   Newton's heat test: every node's residual below this fraction of
+ *                                the heat flowing through the node by every path, plus its rounding
+ *                                floor (–); see thermal/NodeBalance
  * @param maxNewtonIterations     Newton iterations allowed per property update
  * @param maxPropertyIterations   outer updates of temperature-dependent band properties allowed
  */

@@ -8,7 +8,7 @@ package org.exitance.network;
  * <pre>
  *   J_i = ε_i E_i + ρ_i Σ_j F_ij J_j + τ_i Σ_j F_o(i),j J_j + R_i,   ρ_i = 1 − ε_i − τ_i
  *   G_i = Σ_j F_ij J_j + H_i
- *   q_i = J_i − G_i
+ *   q_i = J_i − G_i = ε_i E_i − (ε_i + τ_i) Σ_j F_ij J_j + τ_i Σ_j F_o(i),j J_j − (H_i − R_i)
  * </pre>
  *
  * For an opaque surface τ_i = 0. For a face i of a window, o(i) is its other face: what arrives
@@ -31,8 +31,12 @@ public final class BandNetwork {
     private final double[] f;
     private final double[] eps;
     private final double[] rho;
+    private final double[] tau;
+    private final int[] other;
     private final double[] irradiation;
     private final double[] reflected;
+    private final double[] retained;
+    private final double[] retainedMagnitude;
     private final RadiositySolver.Prepared prepared;
 
     /**
@@ -59,14 +63,37 @@ public final class BandNetwork {
      */
     public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] emissivity, WindowCoupling windows,
                        double[] externalIrradiation, double[] externalReflected, RadiositySolver solver) {
+        this(viewFactors, n, areasM2, emissivity, windows, externalIrradiation, externalReflected,
+                difference(externalIrradiation, externalReflected), sum(externalIrradiation, externalReflected), solver);
+    }
+
+    /**
+     * A band whose external irradiation also states what it leaves behind, computed without
+     * cancellation by whoever split it into absorbed, reflected and transmitted parts.
+     *
+     * @param externalRetained   H_i − R_i (W/m²): what face i keeps of the external irradiation
+     *                           (absorbed, or transmitted to the other face) less what is transmitted
+     *                           to it from the other face
+     * @param externalMagnitude  the sum of the magnitudes of the terms of H_i − R_i (W/m²), for the
+     *                           node's throughput
+     */
+    public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] emissivity, WindowCoupling windows,
+                       double[] externalIrradiation, double[] externalReflected, double[] externalRetained,
+                       double[] externalMagnitude, RadiositySolver solver) {
         this.n = n;
         this.f = viewFactors;
         this.eps = emissivity.clone();
         this.rho = new double[n];
+        this.tau = new double[n];
+        this.other = new int[n];
         this.irradiation = externalIrradiation.clone();
         this.reflected = externalReflected.clone();
+        this.retained = externalRetained.clone();
+        this.retainedMagnitude = externalMagnitude.clone();
         for (int i = 0; i < n; i++) {
-            rho[i] = Math.max(0.0, 1.0 - eps[i] - windows.tau(i));
+            tau[i] = windows.tau(i);
+            other[i] = windows.other(i);
+            rho[i] = Math.max(0.0, 1.0 - eps[i] - tau[i]);
         }
         this.prepared = solver.prepare(f, n, rho, areasM2.clone(), windows);
     }
@@ -74,8 +101,13 @@ public final class BandNetwork {
     /**
      * Solves the band for given emissive powers.
      *
+     * <p>The net flux is evaluated as {@code q_i = ε_i E_i − (ε_i + τ_i)(FJ)_i + τ_i (FJ)_o(i) −
+     * (H_i − R_i)}, which equals {@code J_i − G_i} for a solved J but does not subtract two nearly
+     * equal radiosities: for a surface that hardly emits (ε → 0) J_i ≈ G_i, and J_i − G_i would
+     * lose every digit of the net flux, while this form keeps the relative accuracy of ε.
+     *
      * @param emissive  E_i (W/m²), not modified
-     * @return radiosity, irradiation and net flux of every surface
+     * @return radiosity, irradiation, net flux and throughput of every surface
      */
     public BandState solve(double[] emissive) {
         double[] b = new double[n];
@@ -84,12 +116,19 @@ public final class BandNetwork {
         }
         double[] j = new double[n];
         prepared.solve(b, j);
-        double[] g = irradiationFrom(j, irradiation);
+        double[] fj = irradiationFrom(j, new double[n]);
+        double[] g = new double[n];
         double[] q = new double[n];
+        double[] through = new double[n];
         for (int i = 0; i < n; i++) {
-            q[i] = j[i] - g[i];
+            g[i] = fj[i] + irradiation[i];
+            double fromOther = other[i] >= 0 ? tau[i] * fj[other[i]] : 0.0;
+            double emitted = eps[i] * emissive[i];
+            double taken = (eps[i] + tau[i]) * fj[i];
+            q[i] = emitted - taken + fromOther - retained[i];
+            through[i] = Math.abs(emitted) + Math.abs(taken) + Math.abs(fromOther) + retainedMagnitude[i];
         }
-        return new BandState(j, g, q, prepared.lastIterations(), prepared.lastRelativeResidual());
+        return new BandState(j, g, q, through, prepared.lastIterations(), prepared.lastRelativeResidual());
     }
 
     /**
@@ -105,10 +144,11 @@ public final class BandNetwork {
         b[k] = eps[k];
         double[] x = new double[n];
         prepared.solve(b, x);
-        double[] dg = irradiationFrom(x, new double[n]);
+        double[] fx = irradiationFrom(x, new double[n]);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
-            out[i] = x[i] - dg[i];
+            // the derivative of the net-flux form of solve(): exact, and free of cancellation as ε → 0
+            out[i] = (i == k ? eps[i] : 0.0) - (eps[i] + tau[i]) * fx[i] + (other[i] >= 0 ? tau[i] * fx[other[i]] : 0.0);
         }
         return out;
     }
@@ -133,6 +173,22 @@ public final class BandNetwork {
             out[i] = x[i] - fx[i];
         }
         return out;
+    }
+
+    private static double[] difference(double[] a, double[] b) {
+        double[] d = new double[a.length];
+        for (int i = 0; i < d.length; i++) {
+            d[i] = a[i] - b[i];
+        }
+        return d;
+    }
+
+    private static double[] sum(double[] a, double[] b) {
+        double[] d = new double[a.length];
+        for (int i = 0; i < d.length; i++) {
+            d[i] = Math.abs(a[i]) + Math.abs(b[i]);
+        }
+        return d;
     }
 
     /** G = F J + H; arrays not modified, result new. */

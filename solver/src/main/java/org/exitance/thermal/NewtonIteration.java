@@ -6,19 +6,17 @@ import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.exitance.bands.BandLoop;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.SolverSettings;
-import org.exitance.network.BandState;
-import org.exitance.spectral.PhysicalConstants;
 
 /**
  * Damped Newton on the unknown temperatures with band properties held fixed (Kelley, Solving
  * Nonlinear Equations with Newton's Method, SIAM 2003, ch. 1–2). The residual of node a is its
  * heat balance summed over bands, {@code R_a = Σ_{i ∈ a} A_i Σ_k q_ik(T) − Q_a} (plus convection
- * and links where the condition balances every path); the Jacobian is exact ({@link Jacobian}).
+ * and links where the condition balances every path; {@link NodeBalance}); the Jacobian is exact
+ * ({@link Jacobian}).
  * No temperature changes by more than half its value in a step, and a backtracking line search
  * (Armijo) keeps the residual decreasing.
  */
 final class NewtonIteration {
-    private static final double SIGMA = PhysicalConstants.STEFAN_BOLTZMANN_W_M2_K4;
     private final Problem p;
     private final SolverSettings settings;
     private final Counters counters;
@@ -30,7 +28,10 @@ final class NewtonIteration {
     }
 
     /**
-     * Solves for the unknown temperatures with the band networks of {@code loop}.
+     * Solves for the unknown temperatures with the band networks of {@code loop}. Converged means
+     * both: every node's heat residual is within its own tolerance ({@link NodeBalance}), and the
+     * last Newton step moved no temperature by more than the temperature tolerance. At least one
+     * step is always taken, so a starting guess is never reported as a solution unchecked.
      *
      * @param start  starting temperatures (K), not modified
      * @return the converged temperatures (a new array)
@@ -41,17 +42,12 @@ final class NewtonIteration {
         int m = u.length;
         double[][][] sens = Jacobian.nodeSensitivities(p, loop);
         double[] t = start.clone();
-        double[] r = residual(loop, t);
+        NodeBalance bal = NodeBalance.of(p, loop.solve(t), t, settings.relativeHeatTolerance());
         for (int it = 0; it < settings.maxNewtonIterations(); it++) {
-            double rNorm = maxAbs(r);
-            double tol = heatTolerance(t);
-            counters.residualW = rNorm;
-            if (rNorm <= tol) {
-                return t;
-            }
+            double norm = bal.scaledNorm();
             DMatrixRMaj jac = Jacobian.of(p, sens, loop.emissivePowerDerivatives(t));
             Posedness.requireLiveColumns(p, jac);
-            double[] dx = step(jac, r);
+            double[] dx = step(jac, bal.residualW());
             double lambda = 1.0;
             for (int a = 0; a < m; a++) {
                 double d = Math.abs(dx[a]);
@@ -60,7 +56,7 @@ final class NewtonIteration {
                 }
             }
             double[] trial = t.clone();
-            double[] rTrial = null;
+            NodeBalance next = null;
             for (int ls = 0; ls < 40; ls++) {
                 for (int a = 0; a < m; a++) {
                     double ta = t[u[a]] + lambda * dx[a];
@@ -68,8 +64,10 @@ final class NewtonIteration {
                         trial[i] = ta;
                     }
                 }
-                rTrial = residual(loop, trial);
-                if (maxAbs(rTrial) <= (1 - 1e-4 * lambda) * rNorm || maxAbs(rTrial) <= tol) {
+                next = NodeBalance.of(p, loop.solve(trial), trial, settings.relativeHeatTolerance());
+                // the merit function weighs every node by the current iterate's tolerances, which stay
+                // fixed during the line search (the trial's own tolerances move with its temperatures)
+                if (next.scaledNorm(bal.toleranceW()) <= (1 - 1e-4 * lambda) * norm || next.scaledNorm() <= 1) {
                     break;
                 }
                 lambda *= 0.5;
@@ -81,12 +79,18 @@ final class NewtonIteration {
             counters.lastStep = stepK;
             counters.newtonIterations++;
             t = trial;
-            r = rTrial;
-            checkFloor(t, r, counters.newtonIterations);
+            bal = next;
+            counters.residualW = bal.largestW();
+            checkFloor(t, bal.residualW(), counters.newtonIterations);
+            if (bal.scaledNorm() <= 1 && stepK <= settings.temperatureToleranceK()) {
+                return t;
+            }
         }
+        double[] r = bal.residualW();
         throw new SolveFailedException("Newton's method did not converge in " + settings.maxNewtonIterations()
                 + " iterations: largest heat residual " + fmt(maxAbs(r)) + " W at "
-                + p.enc.surface(u[argMaxAbs(r)]).name(), counters.newtonIterations, maxAbs(r));
+                + p.enc.surface(u[argMaxAbs(r)]).name() + " (its tolerance " + fmt(bal.toleranceW()[argMaxAbs(r)])
+                + " W)", counters.newtonIterations, maxAbs(r));
     }
 
     /** The Newton step −J⁻¹ r by LU (a new array). */
@@ -121,42 +125,6 @@ final class NewtonIteration {
                         + fmt(r[a] + p.target[a]) + " W", iterations, r[a]);
             }
         }
-    }
-
-    /** R_a = Σ_faces A_i Σ_k q_ik − Q_a (W) for each unknown node (one face, or a window's two). */
-    private double[] residual(BandLoop loop, double[] t) {
-        BandState[] states = loop.solve(t);
-        double[] r = new double[p.unknown.length];
-        for (int a = 0; a < r.length; a++) {
-            r[a] = -p.target[a];
-            for (int i : p.faces[a]) {
-                double q = 0;
-                for (BandState s : states) {
-                    q += s.netFlux()[i];
-                }
-                r[a] += p.area[i] * q;
-                if (p.allPaths[a]) {
-                    r[a] += p.convectionW(i, t[i]) + p.conductionW(i, t);
-                }
-            }
-        }
-        return r;
-    }
-
-    private double heatTolerance(double[] t) {
-        double scale = 0;
-        for (int i = 0; i < t.length; i++) {
-            scale = Math.max(scale, p.area[i] * SIGMA * Math.pow(t[i], 4));
-        }
-        for (double q : p.target) {
-            scale = Math.max(scale, Math.abs(q));
-        }
-        if (p.envT > 0) {
-            for (int i = 0; i < t.length; i++) {
-                scale = Math.max(scale, p.area[i] * SIGMA * Math.pow(p.envT, 4));
-            }
-        }
-        return Math.max(settings.relativeHeatTolerance() * scale, 1e-300);
     }
 
     private static double maxAbs(double[] v) {

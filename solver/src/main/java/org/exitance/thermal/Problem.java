@@ -108,6 +108,30 @@ final class Problem {
         return q;
     }
 
+    /** Σ over the links of surface i of |G (T_i − T_j)| (W); t not modified. */
+    double conductionMagnitudeW(int i, double[] t) {
+        double q = 0;
+        for (int l = 0; l < linkG.length; l++) {
+            if (linkA[l] == i) {
+                q += Math.abs(linkG[l] * (t[i] - t[linkB[l]]));
+            } else if (linkB[l] == i) {
+                q += Math.abs(linkG[l] * (t[i] - t[linkA[l]]));
+            }
+        }
+        return q;
+    }
+
+    /** Σ over the links of surface i of G (|T_i| + |T_j|) (W): the size of the numbers the link heat comes from. */
+    double conductionTermsW(int i, double[] t) {
+        double q = 0;
+        for (int l = 0; l < linkG.length; l++) {
+            if (linkA[l] == i || linkB[l] == i) {
+                q += linkG[l] * (Math.abs(t[linkA[l]]) + Math.abs(t[linkB[l]]));
+            }
+        }
+        return q;
+    }
+
     /**
      * d/dT_b of the convection and link heat leaving unknown node a (W/K): h A of its faces on
      * the diagonal, and for each link G (T_x − T_y) with x a face of a, G([x ∈ b] − [y ∈ b]).
