@@ -74,7 +74,7 @@ public final class GrayAudit {
             rows.add(new AuditRow(b.name(), b.temperatureSolved(), b.netHeatW(), g.netHeatW(),
                     t == null ? Double.NaN : t.netHeatW(), b.temperatureK(), g.temperatureK(),
                     t == null ? Double.NaN : t.temperatureK(), errW, errK, pct, Math.abs(pct) > thresholdPct,
-                    cause(surfaceNamed(c, b.name()), b, band.bands())));
+                    cause(surfaceNamed(c, b.name()), b, band.bands(), nonGray(c))));
         }
         return new AuditResult(name, thresholdPct, rows, band, gray, two);
     }
@@ -88,8 +88,23 @@ public final class GrayAudit {
         return c.enclosure().surface(i);
     }
 
-    /** The cause in numbers, from the band solution of one surface. */
-    static GrayCause cause(EnclosureSurface s, SurfaceResult b, List<Band> bands) {
+    /** The case's surfaces (facets reported by their surface) whose emissivity or transmissivity is not gray. */
+    private static List<String> nonGray(RadiationCase c) {
+        java.util.LinkedHashSet<String> out = new java.util.LinkedHashSet<>();
+        for (EnclosureSurface s : c.enclosure().surfaces()) {
+            if (!s.material().isGray()) {
+                out.add(c.facetGroups() == null ? s.name() : c.facetGroups().surfaceOf(s.name()));
+            }
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The cause in numbers, from the band solution of one surface.
+     *
+     * @param nonGray  the case's non-gray surfaces, named when this one is gray
+     */
+    static GrayCause cause(EnclosureSurface s, SurfaceResult b, List<Band> bands, List<String> nonGray) {
         double eps = BandAverages.totalEmissivity(s.material().emissivity(), b.temperatureK());
         int nb = bands.size();
         double absorbed = 0;
@@ -104,8 +119,12 @@ public final class GrayAudit {
             total += diff[k];
         }
         double alpha = incident > 0 ? absorbed / incident : eps;
+        if (s.material().isGray()) {
+            List<String> others = nonGray.stream().filter(x -> !x.equals(s.name())).toList();
+            return new GrayCause(alpha, eps, 0, Double.POSITIVE_INFINITY, 0, GrayCause.Kind.OTHER_SURFACES, others);
+        }
         if (!(total > 0)) {
-            return new GrayCause(alpha, eps, 0, Double.POSITIVE_INFINITY, 0);
+            return new GrayCause(alpha, eps, 0, Double.POSITIVE_INFINITY, 0, GrayCause.Kind.OWN_SPECTRUM, List.of());
         }
         Integer[] order = new Integer[nb];
         for (int k = 0; k < nb; k++) {
@@ -123,6 +142,6 @@ public final class GrayAudit {
                 break;
             }
         }
-        return new GrayCause(alpha, eps, lo, hi, carried / total);
+        return new GrayCause(alpha, eps, lo, hi, carried / total, GrayCause.Kind.OWN_SPECTRUM, List.of());
     }
 }

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import org.exitance.audit.AuditResult;
 import org.exitance.audit.AuditRow;
+import org.exitance.audit.GrayCause;
 
 /** The gray-body audit as JSON: {@code audits[] {name, thresholdPct, surfaces[] {...}}}. */
 public final class AuditJsonWriter {
@@ -44,6 +45,9 @@ public final class AuditJsonWriter {
                 c.put("lower_um", r.cause().lowerUm());
                 putOrNull(c, "upper_um", r.cause().upperUm());
                 c.put("shareOfDifference", r.cause().shareOfDifference());
+                c.put("kind", r.cause().kind() == GrayCause.Kind.OWN_SPECTRUM ? "ownSpectrum" : "otherSurfaces");
+                ArrayNode others = c.putArray("nonGraySurfaces");
+                r.cause().nonGraySurfaces().forEach(others::add);
             }
         }
         root.put("caution", Caution.SHORT);

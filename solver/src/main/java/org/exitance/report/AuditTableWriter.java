@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.exitance.audit.AuditResult;
 import org.exitance.audit.AuditRow;
+import org.exitance.audit.GrayCause;
 import org.exitance.audit.GrayAudit;
 
 /** The gray-body audit as text: one table per (load) case, the causes, and a verdict. */
@@ -26,7 +27,11 @@ public final class AuditTableWriter {
             out.add("Gray-body audit" + where + ": " + a.flaggedCount() + " of " + a.rows().size()
                     + " surfaces off by more than " + thr + " % under the gray shortcut (details: exitance audit):");
             for (AuditRow r : a.rows()) {
-                if (r.flagged()) {
+                if (r.flagged() && r.cause().kind() == GrayCause.Kind.OTHER_SURFACES) {
+                    out.add(String.format(Locale.ROOT, "  %s: gray error %s W, %.2f K (%+.1f %%); the surface is gray,"
+                                    + " off only because others are not (%s)", r.surface(), Numbers.power(r.grayErrorW()),
+                            r.grayErrorK(), r.grayErrorPct(), String.join(", ", r.cause().nonGraySurfaces())));
+                } else if (r.flagged()) {
                     out.add(String.format(Locale.ROOT, "  %s: gray error %s W, %.2f K (%+.1f %%); absorbs with α = %s,"
                                     + " gray uses ε = %s; mostly %s–%s µm", r.surface(), Numbers.power(r.grayErrorW()),
                             r.grayErrorK(), r.grayErrorPct(), Numbers.ratio(r.cause().effectiveAbsorptivity()),
@@ -84,12 +89,7 @@ public final class AuditTableWriter {
                     .replaceAll("\\.$", "") + " %)");
             for (AuditRow r : a.rows()) {
                 if (r.flagged()) {
-                    var c = r.cause();
-                    out.println("  " + r.surface() + ": absorbs what reaches it with α = " + Numbers.ratio(c.effectiveAbsorptivity())
-                            + ", but the gray shortcut uses its emissivity at " + Numbers.temperature(r.bandTemperatureK())
-                            + " K, ε = " + Numbers.ratio(c.emissivityAtOwnTemperature()) + "; "
-                            + String.format(Locale.ROOT, "%.0f", 100 * c.shareOfDifference()) + " % of that difference lies in "
-                            + Numbers.wavelength(c.lowerUm()) + "–" + Numbers.wavelength(c.upperUm()) + " µm.");
+                    out.println("  " + causeLine(r));
                 }
             }
             out.println("Verdict: " + (a.flaggedCount() == 0 ? "the gray shortcut is within "
@@ -98,5 +98,22 @@ public final class AuditTableWriter {
                     + " the gray shortcut."));
         }
         TableFooter.write(out);
+    }
+
+    /** One flagged surface's cause in words and numbers. */
+    static String causeLine(AuditRow r) {
+        GrayCause c = r.cause();
+        if (c.kind() == GrayCause.Kind.OTHER_SURFACES) {
+            return r.surface() + ": is gray (ε = " + Numbers.ratio(c.emissivityAtOwnTemperature()) + " at every wavelength),"
+                    + " so it absorbs any spectrum with α = ε and has no error of its own; it is off only because "
+                    + (c.nonGraySurfaces().isEmpty() ? "other surfaces are not gray"
+                    : "the surfaces that are not gray (" + String.join(", ", c.nonGraySurfaces()) + ") change what reaches it")
+                    + ".";
+        }
+        return r.surface() + ": absorbs what reaches it with α = " + Numbers.ratio(c.effectiveAbsorptivity())
+                + ", but the gray shortcut uses its emissivity at " + Numbers.temperature(r.bandTemperatureK())
+                + " K, ε = " + Numbers.ratio(c.emissivityAtOwnTemperature()) + "; "
+                + String.format(Locale.ROOT, "%.0f", 100 * c.shareOfDifference()) + " % of that difference lies in "
+                + Numbers.wavelength(c.lowerUm()) + "–" + Numbers.wavelength(c.upperUm()) + " µm.";
     }
 }
