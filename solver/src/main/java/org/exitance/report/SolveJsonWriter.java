@@ -107,6 +107,7 @@ public final class SolveJsonWriter {
         }
         root.put("energyBalance_W", r.energyBalanceW());
         root.put("energyBalanceRelative", r.relativeEnergyBalance());
+        root.put("crossingHeat_W", r.crossingHeatW());
         root.put("energyScale_W", r.energyScaleW());
         root.put("energyBalanceCloses", r.relativeEnergyBalance() <= SolveTableWriter.BALANCE_WARNING);
         SolverReport s = r.solver();

@@ -219,8 +219,8 @@ public final class SolveTableWriter {
         double rel = r.relativeEnergyBalance();
         out.println("Energy balance: Σ net heat" + (r.environment() != null ? " (surfaces + environment)" : "")
                 + (r.sources().isEmpty() ? "" : " + source power")
-                + " = " + Numbers.small(r.energyBalanceW()) + " W, " + Numbers.small(rel) + " of "
-                + Numbers.power(r.energyScaleW()) + " W in play — "
+                + " = " + Numbers.small(r.energyBalanceW()) + " W, " + Numbers.small(rel) + " of the "
+                + Numbers.power(r.crossingHeatW()) + " W crossing the enclosure — "
                 + (rel <= BALANCE_WARNING ? "closes" : "DOES NOT CLOSE (check view-factor closure and reciprocity)"));
         var s = r.solver();
         out.println("Solver: " + s.linearSolver() + "; Newton iterations " + s.newtonIterations()

@@ -121,9 +121,34 @@ public final class SolveResult {
         return facets;
     }
 
-    /** |energy balance| relative to the scale. */
+    /**
+     * The heat that crosses the enclosure (W): half of Σ_i |Q_i| + |Q_env| + P_ext, i.e. what the
+     * sources of heat deliver and the sinks take. The energy balance is measured against it: 323 W
+     * of imbalance in a furnace through which 6.4 kW passes is 5 %, however much is emitted and
+     * reflected inside. With no net heat anywhere (an isothermal enclosure) it is 0.
+     */
+    public double crossingHeatW() {
+        double s = 0;
+        for (SurfaceResult x : surfaces) {
+            s += Math.abs(x.netHeatW());
+        }
+        if (environment != null) {
+            s += Math.abs(environment.netHeatW());
+        }
+        for (SourceResult x : sources) {
+            s += x.incidentW();
+        }
+        return 0.5 * s;
+    }
+
+    /**
+     * |energy balance| relative to {@link #crossingHeatW()}; where nothing crosses the enclosure
+     * (less than 1e-12 of the power in play), relative to the power in play instead.
+     */
     public double relativeEnergyBalance() {
-        return energyScaleW > 0 ? Math.abs(energyBalanceW) / energyScaleW : Math.abs(energyBalanceW);
+        double crossing = crossingHeatW();
+        double scale = crossing > 1e-12 * energyScaleW ? crossing : energyScaleW;
+        return scale > 0 ? Math.abs(energyBalanceW) / scale : Math.abs(energyBalanceW);
     }
 
     /** The surface result with this name. */
