@@ -93,7 +93,7 @@ class ConvergenceTest {
      * fractions from the series written in the test (Reference#fractionBelow; Siegel &amp; Howell).
      */
     @ParameterizedTest(name = "c = {0}")
-    @CsvSource({"1e-12", "1e-9", "1e-6"})
+    @CsvSource({"1e-300", "1e-100", "1e-12", "1e-9", "1e-6"})
     void nearlyNonEmittingWallReachesItsLimitTemperature(double c) {
         double edge = 4.0;
         double g1 = 1.0;
