@@ -150,6 +150,11 @@ public final class JsonCursor {
         return s;
     }
 
+    /** Whether the value is a JSON number (not a string, object or array). */
+    public boolean isNumber() {
+        return node.isNumber();
+    }
+
     public boolean bool() throws CaseException {
         if (!node.isBoolean()) {
             throw error("expected true or false, got " + describe(node));

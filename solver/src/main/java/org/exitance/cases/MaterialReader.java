@@ -44,13 +44,22 @@ final class MaterialReader {
     }
 
     private static Material readProperties(String name, JsonCursor m, Path caseDir) throws CaseException {
-        m.allowOnly("emissivity", "spectralEmissivity", "transmissivity", "spectralTransmissivity", "reflectivity",
-                "spectralReflectivity", "emissivityUncertainty", "description");
+        m.allowOnly(allowedKeys());
         String description = m.has("description") ? m.field("description").text() : "";
         boolean window = m.has("transmissivity") || m.has("spectralTransmissivity") || m.has("reflectivity")
                 || m.has("spectralReflectivity");
+        if (window && MeasuredEmissivityReader.applies(m)) {
+            throw m.error("a window gives its transmissivity with emissivity or reflectivity; opaque measured data"
+                    + " (opaqueReflectivity, normalEmissivity, directionalEmissivity) are for opaque materials");
+        }
         if (window) {
             return SemiTransparentProperties.read(name, m, caseDir, description);
+        }
+        if (MeasuredEmissivityReader.applies(m)) {
+            return new Material(name, MeasuredEmissivityReader.read(m), description);
+        }
+        if (m.has("normalToHemispherical")) {
+            throw m.field("normalToHemispherical").error("goes with \"normalEmissivity\" only");
         }
         String which = m.exactlyOneOf("emissivity", "spectralEmissivity");
         SpectralEmissivity model;
@@ -60,6 +69,13 @@ final class MaterialReader {
             model = spectral(m.field("spectralEmissivity"), caseDir);
         }
         return new Material(name, model, description);
+    }
+
+    private static String[] allowedKeys() {
+        List<String> keys = new java.util.ArrayList<>(List.of("emissivity", "spectralEmissivity", "transmissivity",
+                "spectralTransmissivity", "reflectivity", "spectralReflectivity", "emissivityUncertainty", "description"));
+        keys.addAll(MeasuredEmissivityReader.KEYS);
+        return keys.toArray(String[]::new);
     }
 
     static SpectralEmissivity spectral(JsonCursor s, Path caseDir) throws CaseException {
