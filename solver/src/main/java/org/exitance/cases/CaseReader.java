@@ -81,9 +81,10 @@ public final class CaseReader {
             throw resolution.error("conductive links join surfaces: leave \"resolution\" at \"surfaces\"");
         }
         for (EnclosureSurface s : surfaces) {
-            if (s.isWindowFace()) {
-                throw resolution.error("windows are solved on surfaces: leave \"resolution\" at \"surfaces\" (surface '"
-                        + s.name() + "' is a window face)");
+            if (s.hasOtherFace()) {
+                throw resolution.error("nodes with two faces are solved on surfaces: leave \"resolution\" at"
+                        + " \"surfaces\" (surface '" + s.name() + "' is a " + (s.isWindowFace() ? "window" : "two-sided")
+                        + " face)");
             }
         }
     }

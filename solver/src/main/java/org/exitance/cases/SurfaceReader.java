@@ -54,7 +54,7 @@ final class SurfaceReader {
             double initial = TemperatureField.read(s, "initialTemperature", false).orElse(Double.NaN);
             if (!Double.isNaN(initial) && !bc.temperatureUnknown()) {
                 throw s.error("initialTemperature is only for surfaces whose temperature is unknown"
-                        + (otherFace != null ? " (on a window, give it on the face with the condition)" : ""));
+                        + (otherFace != null ? " (on a node with two faces, give it on the face with the condition)" : ""));
             }
             Convection convection = s.has("convection") ? convection(s.field("convection")) : null;
             out.add(new EnclosureSurface(name, m, area, bc, initial, convection, otherFace));

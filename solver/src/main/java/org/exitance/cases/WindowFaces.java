@@ -5,10 +5,11 @@ import org.exitance.model.BoundaryCondition;
 import org.exitance.model.EnclosureSurface;
 
 /**
- * Checks the windows of a case's {@code surfaces}: a window is two surfaces, its faces, that name
- * each other with {@code otherFace}, use the same semi-transparent material and the same area; one
- * face carries the boundary condition and the other gives none. Opaque surfaces have no
- * {@code otherFace}. Errors name the file and the JSON path of the offending surface.
+ * Checks the nodes with two faces of a case's {@code surfaces}: two surfaces that name each other
+ * with {@code otherFace}, have the same area, and of which one carries the boundary condition and
+ * the other gives none. A window (a semi-transparent material) must have two faces, both with its
+ * material; a two-sided opaque plate (a shield, a fin) may give each face its own coating.
+ * Errors name the file and the JSON path of the offending surface.
  */
 final class WindowFaces {
     /** The keys of a boundary condition (as in {@code CaseReader}). */
@@ -44,12 +45,8 @@ final class WindowFaces {
                 continue;
             }
             JsonCursor oc = c.field("otherFace");
-            if (!s.material().semiTransparent()) {
-                throw oc.error("surface '" + s.name() + "' has an opaque material ('" + s.material().name()
-                        + "'); only a window (a material with transmissivity) has an other face");
-            }
             if (s.otherFace().equals(s.name())) {
-                throw oc.error("a window face cannot be its own other face");
+                throw oc.error("a face cannot be its own other face");
             }
             int j = indexOf(surfaces, s.otherFace());
             if (j < 0) {
@@ -58,25 +55,30 @@ final class WindowFaces {
             EnclosureSurface o = surfaces.get(j);
             if (!s.name().equals(o.otherFace())) {
                 throw oc.error("surface '" + o.name() + "' does not name '" + s.name() + "' as its otherFace"
-                        + " (the two faces of a window name each other)");
+                        + " (the two faces of a node name each other)");
             }
-            if (!o.material().equals(s.material())) {
+            if (s.material().semiTransparent() != o.material().semiTransparent()) {
+                throw c.field("material").error("faces '" + s.name() + "' and '" + o.name() + "': one is a window"
+                        + " face (semi-transparent '" + (s.material().semiTransparent() ? s : o).material().name()
+                        + "') and the other opaque; a window's faces share its material");
+            }
+            if (s.material().semiTransparent() && !o.material().equals(s.material())) {
                 throw c.field("material").error("window faces '" + s.name() + "' and '" + o.name()
                         + "' must use the same material, got '" + s.material().name() + "' and '"
                         + o.material().name() + "'");
             }
             if (o.areaM2() != s.areaM2()) {
-                throw c.error("window faces '" + s.name() + "' and '" + o.name() + "' must have the same area, got "
+                throw c.error("faces '" + s.name() + "' and '" + o.name() + "' of one node must have the same area, got "
                         + CaseReader.fmt(s.areaM2()) + " m² and " + CaseReader.fmt(o.areaM2()) + " m²");
             }
             boolean here = !(s.boundary() instanceof BoundaryCondition.OnOtherFace);
             boolean there = !(o.boundary() instanceof BoundaryCondition.OnOtherFace);
             if (here && there && i < j) {
-                throw c.error("window faces '" + s.name() + "' and '" + o.name() + "' both give a boundary condition;"
+                throw c.error("faces '" + s.name() + "' and '" + o.name() + "' both give a boundary condition;"
                         + " give it on one face only (both faces share one temperature)");
             }
             if (!here && !there) {
-                throw c.error("window faces '" + s.name() + "' and '" + o.name() + "' give no boundary condition;"
+                throw c.error("faces '" + s.name() + "' and '" + o.name() + "' give no boundary condition;"
                         + " give one on one of the faces");
             }
         }

@@ -107,35 +107,39 @@ public final class Enclosure {
     }
 
     /**
-     * Windows: a semi-transparent material needs an other face and an opaque one must not have
-     * one; faces name each other, share material and area, and exactly one carries the condition.
+     * Nodes with two faces: a semi-transparent material needs an other face (a window); faces name
+     * each other and have the same area; a window's faces share their material (a two-sided opaque
+     * plate's may differ); exactly one face carries the condition.
      */
     private static void checkWindows(List<EnclosureSurface> surfaces) {
         java.util.Map<String, EnclosureSurface> byName = new java.util.HashMap<>();
         surfaces.forEach(s -> byName.put(s.name(), s));
         for (EnclosureSurface s : surfaces) {
-            if (s.material().semiTransparent() != s.isWindowFace()) {
-                throw new IllegalArgumentException("surface '" + s.name() + "': " + (s.isWindowFace()
-                        ? "names an other face but its material '" + s.material().name() + "' is opaque"
-                        : "its material '" + s.material().name() + "' is semi-transparent, so it is a window and"
-                        + " needs an other face"));
+            if (s.material().semiTransparent() && !s.hasOtherFace()) {
+                throw new IllegalArgumentException("surface '" + s.name() + "': its material '" + s.material().name()
+                        + "' is semi-transparent, so it is a window and needs an other face");
             }
-            if (!s.isWindowFace()) {
+            if (!s.hasOtherFace()) {
                 continue;
             }
             EnclosureSurface o = byName.get(s.otherFace());
             if (o == null || !s.name().equals(o.otherFace())) {
-                throw new IllegalArgumentException("window face '" + s.name() + "' names '" + s.otherFace()
+                throw new IllegalArgumentException("face '" + s.name() + "' names '" + s.otherFace()
                         + "' as its other face, which does not name it back");
             }
-            if (!o.material().equals(s.material()) || o.areaM2() != s.areaM2()) {
+            if (s.material().semiTransparent() != o.material().semiTransparent()
+                    || s.material().semiTransparent() && !o.material().equals(s.material())) {
                 throw new IllegalArgumentException("window faces '" + s.name() + "' and '" + o.name()
-                        + "' must have the same material and area");
+                        + "' must have the same material");
+            }
+            if (o.areaM2() != s.areaM2()) {
+                throw new IllegalArgumentException("faces '" + s.name() + "' and '" + o.name()
+                        + "' of one node must have the same area");
             }
             boolean here = !(s.boundary() instanceof BoundaryCondition.OnOtherFace);
             boolean there = !(o.boundary() instanceof BoundaryCondition.OnOtherFace);
             if (here == there) {
-                throw new IllegalArgumentException("window faces '" + s.name() + "' and '" + o.name()
+                throw new IllegalArgumentException("faces '" + s.name() + "' and '" + o.name()
                         + "': exactly one of them must carry the boundary condition");
             }
         }
@@ -147,7 +151,7 @@ public final class Enclosure {
     }
 
     /**
-     * For each surface the index of the other face of its window, or −1 for an opaque surface.
+     * For each surface the index of its other face (window or two-sided plate), or −1.
      *
      * @return a new array of length N
      */

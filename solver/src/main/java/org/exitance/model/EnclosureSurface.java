@@ -4,11 +4,14 @@ import java.util.Objects;
 
 /**
  * One surface of the enclosure as the radiosity network sees it: isothermal, diffuse,
- * uniformly irradiated. An opaque surface is one node of the network. A window (a
- * semi-transparent material) is two surfaces, its two faces, that name each other in
- * {@code otherFace}: each face is a row and column of the view-factor matrix and sees its own
- * side, but both share one temperature. The boundary condition of a window is carried by one face;
- * the other face has {@link BoundaryCondition.OnOtherFace}.
+ * uniformly irradiated. An opaque surface is one node of the network. A node with two faces is
+ * two surfaces that name each other in {@code otherFace}: each face is a row and column of the
+ * view-factor matrix and sees its own side, but both share one temperature and one energy
+ * balance. It is a window when its material is semi-transparent (what one face receives and
+ * transmits leaves the other; both faces use the same material), and otherwise a two-sided opaque
+ * plate (a shield, a baffle, a radiator fin, an oven shelf), whose faces may carry different
+ * coatings. The boundary condition is carried by one face; the other face has
+ * {@link BoundaryCondition.OnOtherFace}.
  *
  * @param name                 unique name
  * @param material             its material
@@ -16,7 +19,8 @@ import java.util.Objects;
  * @param boundary             what is known about its energy balance
  * @param initialTemperatureK  starting guess for an unknown temperature (K), or NaN for none
  * @param convection           convection to a fluid, or null for none
- * @param otherFace            name of the other face of a window, or null for an opaque surface
+ * @param otherFace            name of the other face of a window or two-sided plate, or null for a
+ *                             surface with one face
  */
 public record EnclosureSurface(String name, Material material, double areaM2,
                                BoundaryCondition boundary, double initialTemperatureK, Convection convection,
@@ -46,8 +50,13 @@ public record EnclosureSurface(String name, Material material, double areaM2,
         }
     }
 
-    /** True for a face of a window. */
+    /** True for a face of a window (a semi-transparent node with two faces). */
     public boolean isWindowFace() {
+        return otherFace != null && material.semiTransparent();
+    }
+
+    /** True for a face of a node with two faces: a window or a two-sided opaque plate. */
+    public boolean hasOtherFace() {
         return otherFace != null;
     }
 

@@ -28,10 +28,13 @@ public record WindowCoupling(double[] transmissivity, int[] otherFace) {
         return NONE;
     }
 
-    /** True when no surface transmits (no coupling at all). */
+    /**
+     * True when no surface transmits in this band (no coupling at all): two-sided opaque plates
+     * (τ = 0) couple nothing, and a window with τ = 0 in a band couples nothing in it.
+     */
     public boolean isEmpty() {
         for (int i = 0; i < otherFace.length; i++) {
-            if (otherFace[i] >= 0) {
+            if (otherFace[i] >= 0 && transmissivity[i] != 0) {
                 return false;
             }
         }

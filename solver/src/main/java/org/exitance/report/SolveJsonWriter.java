@@ -8,6 +8,7 @@ import java.util.List;
 import org.exitance.model.Band;
 import org.exitance.result.EnvironmentResult;
 import org.exitance.result.LoadCaseResult;
+import org.exitance.result.FacePairResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SolverReport;
 import org.exitance.result.SurfaceResult;
@@ -60,17 +61,8 @@ public final class SolveJsonWriter {
                 bo.put("emissivity", s.bandEmissivity()[k]);
             }
         }
-        if (!r.windows().isEmpty()) {
-            ArrayNode wins = root.putArray("windows");
-            for (var w : r.windows()) {
-                ObjectNode o = wins.addObject();
-                o.put("face", w.face());
-                o.put("otherFace", w.otherFace());
-                o.put("temperature_K", w.temperatureK());
-                o.put("netHeat_W", w.netHeatW());
-                o.put("heatSupplied_W", w.heatSuppliedW());
-            }
-        }
+        writePairs(root, "windows", r.windows());
+        writePairs(root, "twoSidedSurfaces", r.twoSided());
         if (!r.facets().isEmpty()) {
             ArrayNode fa = root.putArray("facets");
             for (SurfaceResult f : r.facets()) {
@@ -151,6 +143,22 @@ public final class SolveJsonWriter {
             o.putNull("upper_um");
         } else {
             o.put("upper_um", b.upperUm());
+        }
+    }
+
+    /** Nodes with two faces under {@code key}, when there are any. */
+    private static void writePairs(ObjectNode root, String key, List<FacePairResult> pairs) {
+        if (pairs.isEmpty()) {
+            return;
+        }
+        ArrayNode arr = root.putArray(key);
+        for (FacePairResult w : pairs) {
+            ObjectNode o = arr.addObject();
+            o.put("face", w.face());
+            o.put("otherFace", w.otherFace());
+            o.put("temperature_K", w.temperatureK());
+            o.put("netHeat_W", w.netHeatW());
+            o.put("heatSupplied_W", w.heatSuppliedW());
         }
     }
 }

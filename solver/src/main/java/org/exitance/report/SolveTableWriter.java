@@ -83,8 +83,9 @@ public final class SolveTableWriter {
         }
         t.render(0).forEach(out::println);
         out.println("  (net heat: radiation leaving the surface minus radiation it absorbs; positive = loses heat)");
-        for (var w : r.windows()) {
-            out.println("  window " + w.face() + " + " + w.otherFace() + " (two faces, one temperature "
+        for (var w : r.facePairs()) {
+            out.println("  " + (w.window() ? "window " : "two-sided ") + w.face() + " + " + w.otherFace()
+                    + " (two faces, one temperature "
                     + Numbers.temperature(w.temperatureK()) + " K): net heat of the pair " + Numbers.power(w.netHeatW())
                     + " W = emitted − absorbed; heat supplied " + Numbers.power(w.heatSuppliedW()) + " W");
         }

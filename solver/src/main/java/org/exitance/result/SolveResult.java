@@ -41,7 +41,7 @@ public final class SolveResult {
     private final double energyScaleW;
     private final SolverReport solver;
     private final List<SourceResult> sources;
-    private final List<WindowResult> windows;
+    private final List<FacePairResult> windows;
     private final List<SurfaceResult> facets;
 
     private SolveResult(Builder b) {
@@ -74,7 +74,7 @@ public final class SolveResult {
     public Builder toBuilder() {
         return new Builder().title(title).bands(bands).bandOrigin(bandOrigin).surfaces(surfaces)
                 .environment(environment).energyBalanceW(energyBalanceW).energyScaleW(energyScaleW).solver(solver)
-                .sources(sources).windows(windows).facets(facets);
+                .sources(sources).facePairs(windows).facets(facets);
     }
 
     public String title() {
@@ -113,8 +113,19 @@ public final class SolveResult {
         return sources;
     }
 
-    public List<WindowResult> windows() {
+    /** Every node with two faces: windows and two-sided opaque plates, in case order. */
+    public List<FacePairResult> facePairs() {
         return windows;
+    }
+
+    /** The windows among {@link #facePairs()}. */
+    public List<FacePairResult> windows() {
+        return windows.stream().filter(FacePairResult::window).toList();
+    }
+
+    /** The two-sided opaque plates among {@link #facePairs()}. */
+    public List<FacePairResult> twoSided() {
+        return windows.stream().filter(w -> !w.window()).toList();
     }
 
     public List<SurfaceResult> facets() {
@@ -193,7 +204,7 @@ public final class SolveResult {
         private Double energyScaleW;
         private SolverReport solver;
         private List<SourceResult> sources = List.of();
-        private List<WindowResult> windows = List.of();
+        private List<FacePairResult> windows = List.of();
         private List<SurfaceResult> facets = List.of();
 
         private Builder() {
@@ -245,8 +256,8 @@ public final class SolveResult {
             return this;
         }
 
-        public Builder windows(List<WindowResult> v) {
-            windows = Objects.requireNonNull(v, "windows");
+        public Builder facePairs(List<FacePairResult> v) {
+            windows = Objects.requireNonNull(v, "facePairs");
             return this;
         }
 

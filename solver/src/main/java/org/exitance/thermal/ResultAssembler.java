@@ -16,7 +16,7 @@ import org.exitance.result.SolveResult;
 import org.exitance.result.SolverReport;
 import org.exitance.result.SourceResult;
 import org.exitance.result.SurfaceResult;
-import org.exitance.result.WindowResult;
+import org.exitance.result.FacePairResult;
 import org.exitance.spectral.PhysicalConstants;
 import org.exitance.spectral.Planck;
 import org.exitance.spectral.SpectralEmissivity;
@@ -117,7 +117,8 @@ final class ResultAssembler {
             total += q;
             double conv = p.convectionW(i, t[i]);
             double cond = p.conductionW(i, t);
-            String label = s.isWindowFace() && carrier == s ? s.boundary().label() + " (window)" : s.boundary().label();
+            String label = !s.hasOtherFace() || carrier != s ? s.boundary().label()
+                    : s.boundary().label() + (s.isWindowFace() ? " (window)" : " (two-sided)");
             double[] bandG = new double[nb];
             for (int k = 0; k < nb; k++) {
                 bandG[k] = p.area[i] * states[k].irradiation()[i];
@@ -152,12 +153,13 @@ final class ResultAssembler {
             }
             residual = Math.max(residual, Math.abs(achieved - p.target[a]));
         }
-        List<WindowResult> windows = new ArrayList<>();
+        List<FacePairResult> windows = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             if (p.other[i] >= 0 && p.primary[i] == i) {
                 SurfaceResult a = out.get(i);
                 SurfaceResult b = out.get(p.other[i]);
-                windows.add(new WindowResult(a.name(), b.name(), t[i], a.netHeatW() + b.netHeatW(),
+                windows.add(new FacePairResult(a.name(), b.name(), enc.surface(i).isWindowFace(), t[i],
+                        a.netHeatW() + b.netHeatW(),
                         a.heatSuppliedW() + b.heatSuppliedW()));
             }
         }
@@ -166,6 +168,6 @@ final class ResultAssembler {
                 counters.maxLinearResidual);
         return SolveResult.builder().title(radiationCase.title()).bands(bands).bandOrigin(bandSet.origin())
                 .surfaces(out).environment(env).energyBalanceW(total).energyScaleW(scale).solver(report)
-                .sources(sourceResults(p, loop)).windows(windows).build();
+                .sources(sourceResults(p, loop)).facePairs(windows).build();
     }
 }

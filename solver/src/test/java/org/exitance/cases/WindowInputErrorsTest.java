@@ -115,12 +115,13 @@ class WindowInputErrorsTest {
         BadInput.rejected(file, "$.surfaces[1].material", "same material", "'quartz_step' and 'quartz_copy'");
     }
 
+    /** An opaque surface may have an other face (a two-sided plate), but the two must name each other. */
     @Test
-    void anOpaqueSurfaceWithAnOtherFaceIsRejected() {
+    void anOpaqueFaceWhosePartnerDoesNotNameItBackIsRejected() {
         ObjectNode c = RepoCases.load(BASE);
         surface(c, 3).put("otherFace", "hot");
         Path file = RepoCases.write(dir, "opaque.json", c);
-        BadInput.rejected(file, "$.surfaces[3].otherFace", "opaque material ('black')");
+        BadInput.rejected(file, "$.surfaces[3].otherFace", "does not name");
     }
 
     @Test
