@@ -1,9 +1,9 @@
 package org.exitance.thermal;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
@@ -28,6 +28,7 @@ import org.exitance.spectral.TabulatedEmissivity;
 import org.exitance.spectral.source.BlackbodySource;
 import org.exitance.support.RandomEnclosures;
 import org.exitance.support.SolveCheck;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -75,22 +76,40 @@ class ExternalSourcesTest {
 
     @Property(tries = 40)
     void aLitEnclosureSolvesItsBandEquations(@ForAll long seed, @ForAll @IntRange(min = 2, max = 6) int n,
-                                                   @ForAll boolean open) {
-        Random r = new Random(seed);
+                                             @ForAll boolean open) {
+        RadiationCase c = litCase(new Random(seed), n, open, 0);
+        SolveResult res = new TemperatureSolver(c).solve(new BandSet(new double[] {1, 2.5, 6}, "t"));
+        // the source's band shares and absorptivities, the reflected part and every unknown's
+        // condition, against the independent solve of the textbook system
+        SolveCheck.assertSolved(c, res);
+    }
+
+    @Test
+    void aResultCheckedAgainstTheCaseWithTheLampAHundredKelvinCoolerFails() {
+        // the check above can fail on the source terms: the same lamp power in another spectrum
+        // changes every band's share and absorptivity
+        for (long seed = 1; seed <= 3; seed++) {
+            RadiationCase c = litCase(new Random(seed), 4, true, 0);
+            SolveResult res = new TemperatureSolver(c).solve(new BandSet(new double[] {1, 2.5, 6}, "t"));
+            SolveCheck.assertSolved(c, res);
+            RadiationCase cooler = litCase(new Random(seed), 4, true, -100);
+            assertThatThrownBy(() -> SolveCheck.assertSolved(cooler, res)).as("seed %d", seed)
+                    .isInstanceOf(AssertionError.class);
+        }
+    }
+
+    /** A random enclosure lit by a lamp of 2000–6000 K (plus {@code shiftK}) on a random half of its surfaces. */
+    private static RadiationCase litCase(Random r, int n, boolean open, double shiftK) {
         Enclosure e = RandomEnclosures.random(r, n, open, 0.5);
-        List<ExternalSource> sources = new ArrayList<>();
         java.util.Map<String, Double> inc = new java.util.HashMap<>();
         for (EnclosureSurface s : e.surfaces()) {
             if (r.nextBoolean()) {
                 inc.put(s.name(), r.nextDouble());
             }
         }
-        sources.add(new ExternalSource("lamp", new BlackbodySource(2000 + 4000 * r.nextDouble()),
-                5000 * r.nextDouble(), inc));
-        RadiationCase c = new RadiationCase("t", "", List.of(), e, null, SolverSettings.DEFAULT, sources);
-        SolveResult res = new TemperatureSolver(c).solve(new BandSet(new double[] {1, 2.5, 6}, "t"));
-        // the source's band shares and absorptivities, the reflected part and every unknown's
-        // condition, against the independent solve of the textbook system
-        SolveCheck.assertSolved(c, res);
+        inc.put(e.surface(0).name(), 0.5 + 0.5 * r.nextDouble());
+        ExternalSource lamp = new ExternalSource("lamp", new BlackbodySource(2000 + 4000 * r.nextDouble() + shiftK),
+                500 + 4500 * r.nextDouble(), inc);
+        return new RadiationCase("t", "", List.of(), e, null, SolverSettings.DEFAULT, List.of(lamp));
     }
 }
