@@ -18,9 +18,13 @@ package org.exitance.result;
  * @param heatSuppliedW      heat that must be supplied from outside the model to hold this state:
  *                           radiation + convection + conduction (W)
  * @param bandIncidentW      radiation arriving on the surface per band, A·G_k (W); do not modify
+ * @param bandRadiosityWPerM2 radiosity per band, J_k (W/m²), as the band solve returned it; for a
+ *                           surface reported from facets the area-weighted mean of the facets'; do
+ *                           not modify
  */
 public record SurfaceResult(String name, double areaM2, String boundary, double temperatureK,
                             boolean temperatureSolved, double netHeatW, double netFluxWPerM2,
                             double[] bandNetHeatW, double[] bandEmissivity, double convectionW,
-                            double conductionW, double heatSuppliedW, double[] bandIncidentW) {
+                            double conductionW, double heatSuppliedW, double[] bandIncidentW,
+                            double[] bandRadiosityWPerM2) {
 }

@@ -9,7 +9,7 @@ import org.exitance.result.SurfaceResult;
 /**
  * Reports a solve on facets by surface: heats, band heats and incident powers add; the
  * temperature is the area-weighted mean of the facets' (min and max stay available in the facet
- * detail); band emissivities are area-weighted. The facets' own results are kept in
+ * detail); band emissivities and band radiosities are area-weighted means. The facets' own results are kept in
  * {@link SolveResult#facets()}.
  */
 final class FacetAggregation {
@@ -29,6 +29,7 @@ final class FacetAggregation {
             double[] bandQ = new double[nb];
             double[] bandEps = new double[nb];
             double[] bandG = new double[nb];
+            double[] bandJ = new double[nb];
             boolean solved = false;
             String label = "";
             for (String facet : groups.facetsBySurface().get(surface)) {
@@ -45,13 +46,15 @@ final class FacetAggregation {
                     bandQ[k] += f.bandNetHeatW()[k];
                     bandEps[k] += f.areaM2() * f.bandEmissivity()[k];
                     bandG[k] += f.bandIncidentW()[k];
+                    bandJ[k] += f.areaM2() * f.bandRadiosityWPerM2()[k];
                 }
             }
             for (int k = 0; k < nb; k++) {
                 bandEps[k] /= area;
+                bandJ[k] /= area;
             }
             out.add(new SurfaceResult(surface, area, label + " per facet", at / area, solved, q, q / area, bandQ, bandEps,
-                    conv, cond, supplied, bandG));
+                    conv, cond, supplied, bandG, bandJ));
         }
         return r.toBuilder().surfaces(out).facets(r.surfaces()).build();
     }

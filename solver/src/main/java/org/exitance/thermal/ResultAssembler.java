@@ -120,12 +120,14 @@ final class ResultAssembler {
             String label = !s.hasOtherFace() || carrier != s ? s.boundary().label()
                     : s.boundary().label() + (s.isWindowFace() ? " (window)" : " (two-sided)");
             double[] bandG = new double[nb];
+            double[] bandJ = new double[nb];
             for (int k = 0; k < nb; k++) {
                 bandG[k] = p.area[i] * states[k].irradiation()[i];
+                bandJ[k] = states[k].radiosity()[i];
             }
             out.add(new SurfaceResult(s.name(), s.areaM2(), label, t[i],
                     carrier.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond,
-                    bandG));
+                    bandG, bandJ));
         }
         double external = externalPowerW(p);
         total += external;

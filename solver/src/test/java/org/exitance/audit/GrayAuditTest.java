@@ -27,15 +27,7 @@ class GrayAuditTest {
 
     @Property(tries = 25)
     void anAllGrayEnclosureHasNoGrayError(@ForAll long seed, @ForAll @IntRange(min = 2, max = 6) int n) {
-        Random r = new Random(seed);
-        Enclosure random = RandomEnclosures.random(r, n, r.nextBoolean(), 0.4);
-        List<EnclosureSurface> gray = new ArrayList<>();
-        for (EnclosureSurface s : random.surfaces()) {
-            gray.add(new EnclosureSurface(s.name(), new Material("g" + s.name(),
-                    new GrayEmissivity(0.05 + 0.9 * r.nextDouble()), ""), s.areaM2(), s.boundary(), Double.NaN));
-        }
-        Enclosure e = new Enclosure(gray, random.viewFactors(), random.environment());
-        AuditResult a = GrayAudit.run(Cases.of(e, null), new BandSet(new double[] {1, 3, 8}, "t"), 5, "t");
+        AuditResult a = audit(new Random(seed), n, false);
         double scale = a.band().energyScaleW();
         for (AuditRow row : a.rows()) {
             // a gray surface has α = ε for every spectrum (Kirchhoff; common practice)
@@ -43,6 +35,36 @@ class GrayAuditTest {
             assertThat(row.grayErrorK()).isCloseTo(0, within(1e-9 * row.bandTemperatureK()));
             assertThat(row.flagged()).isFalse();
         }
+    }
+
+    @Test
+    void oneSelectiveSurfaceGivesAGrayError() {
+        // the test above can fail: with surface 0's ε stepping from 0.9 to 0.1 at 3 µm, α ≠ ε for
+        // radiation from the others at other temperatures
+        for (long seed = 1; seed <= 3; seed++) {
+            AuditResult a = audit(new Random(seed), 4, true);
+            double worst = 0;
+            for (AuditRow row : a.rows()) {
+                worst = Math.max(worst, Math.abs(row.grayErrorW()));
+            }
+            assertThat(worst).as("seed %d", seed).isGreaterThan(1e-6 * a.band().energyScaleW());
+        }
+    }
+
+    /** Audit of a random enclosure of gray surfaces (surface 0 selective when asked). */
+    private static AuditResult audit(Random r, int n, boolean selectiveFirst) {
+        Enclosure random = RandomEnclosures.random(r, n, r.nextBoolean(), 0.4);
+        List<EnclosureSurface> gray = new ArrayList<>();
+        for (EnclosureSurface s : random.surfaces()) {
+            double eps = 0.05 + 0.9 * r.nextDouble();
+            Material m = selectiveFirst && gray.isEmpty()
+                    ? new Material("sel", new TabulatedEmissivity(new double[] {3, Math.nextUp(3.0)},
+                            new double[] {0.9, 0.1}), "")
+                    : new Material("g" + s.name(), new GrayEmissivity(eps), "");
+            gray.add(new EnclosureSurface(s.name(), m, s.areaM2(), s.boundary(), Double.NaN));
+        }
+        Enclosure e = new Enclosure(gray, random.viewFactors(), random.environment());
+        return GrayAudit.run(Cases.of(e, null), new BandSet(new double[] {1, 3, 8}, "t"), 5, "t");
     }
 
     @Test

@@ -3,32 +3,18 @@ package org.exitance.cli;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.stream.Stream;
 import org.exitance.cases.RepoCases;
+import org.exitance.support.ShippedCases;
 import org.junit.jupiter.api.Test;
 
 /** {@code exitance check} accepts every shipped case. */
 class CheckCommandTest {
 
-    /** Every *.json under cases/, skipping directories named materials (property data, not cases). */
-    private static List<Path> shippedCases() throws IOException {
-        Path cases = RepoCases.root().resolve("cases");
-        try (Stream<Path> s = Files.walk(cases)) {
-            return s.filter(p -> p.getFileName().toString().endsWith(".json"))
-                    .filter(p -> Files.isRegularFile(p))
-                    .filter(p -> {
-                        for (Path part : cases.relativize(p)) {
-                            if (part.toString().equals("materials")) {
-                                return false;
-                            }
-                        }
-                        return true;
-                    })
-                    .sorted().toList();
-        }
+    /** The shipped cases, demo and validation, as pinned in {@link ShippedCases}. */
+    private static List<Path> shippedCases() {
+        return ShippedCases.all();
     }
 
     @Test

@@ -91,16 +91,6 @@ class SolveCommandTest {
     }
 
     @Test
-    void perBandNetHeatAddsUpToTheSurfaceTotal() throws Exception {
-        JsonNode hot = surface(solveJson("--band-edges", "1,2"), "hot");
-        double sum = 0;
-        for (JsonNode b : hot.get("bands")) {
-            sum += b.get("netHeat_W").asDouble();
-        }
-        assertThat(sum).isCloseTo(hot.get("netHeat_W").asDouble(), within(1e-9 * Math.abs(sum)));
-    }
-
-    @Test
     void bandEdgesOptionSetsTheBands() throws Exception {
         JsonNode r = solveJson("--band-edges", "1,2");
         assertThat(r.get("bands")).hasSize(3);

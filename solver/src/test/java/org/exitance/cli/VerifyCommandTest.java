@@ -8,8 +8,8 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.stream.Stream;
 import org.exitance.cases.RepoCases;
+import org.exitance.support.ShippedCases;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -18,18 +18,16 @@ class VerifyCommandTest {
     @TempDir
     Path dir;
 
-    /** The number of expected values listed in the validation cases' "expected" blocks. */
-    private static int expectedValueCount(Path validationDir) throws IOException {
+    /** The number of expected values listed in the "expected" blocks of the pinned validation cases. */
+    private static int expectedValueCount() throws IOException {
         ObjectMapper json = new ObjectMapper();
         int n = 0;
-        try (Stream<Path> s = Files.list(validationDir)) {
-            for (Path f : s.filter(p -> p.toString().endsWith(".json")).toList()) {
-                JsonNode expected = json.readTree(f.toFile()).get("expected");
-                for (JsonNode target : expected.path("surfaces")) {
-                    n += target.size();
-                }
-                n += expected.path("environment").size();
+        for (Path f : ShippedCases.validation()) {
+            JsonNode expected = json.readTree(f.toFile()).get("expected");
+            for (JsonNode target : expected.path("surfaces")) {
+                n += target.size();
             }
+            n += expected.path("environment").size();
         }
         return n;
     }
@@ -37,7 +35,7 @@ class VerifyCommandTest {
     @Test
     void shippedValidationCasesAllPass() throws IOException {
         Path validation = RepoCases.validation();
-        int checks = expectedValueCount(validation);
+        int checks = expectedValueCount();
         assertThat(checks).isPositive();
         CliRun run = CliRun.of("verify", validation.toString());
         assertThat(run.exitCode()).as(run.toString()).isZero();

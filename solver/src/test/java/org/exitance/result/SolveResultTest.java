@@ -15,7 +15,7 @@ class SolveResultTest {
 
     private static SurfaceResult surface(String name, double q) {
         return new SurfaceResult(name, 1.0, "fixed", 300, false, q, q, new double[] {q}, new double[] {0.5}, 0, 0, q,
-                new double[] {1.0});
+                new double[] {1.0}, new double[] {1.5});
     }
 
     private static SolveResult.Builder complete() {

@@ -180,6 +180,18 @@ class BandAveragesTest {
         assertThatThrownBy(() -> BandAverages.totalAbsorptivity(METAL, 300, 0)).isInstanceOf(IllegalArgumentException.class);
     }
 
+    @Test
+    void meansWeightedAtTheWrongTemperatureAreNotAdditive() {
+        // the additivity test can fail: band means weighted at 1000 K summed with the fractions at 600 K
+        double[] edges = {0, 2, 6, INF};
+        double[] means = BandAverages.planckMeans(T_TAB, edges, 1000, 700);
+        double sum = 0;
+        for (int k = 0; k < 3; k++) {
+            sum += means[k] * Planck.bandFraction(edges[k], edges[k + 1], 600);
+        }
+        assertThat(Math.abs(sum - BandAverages.totalAbsorptivity(T_TAB, 700, 600))).isGreaterThan(1e-3);
+    }
+
     @Property(tries = 300)
     void bandMeansAreAdditiveAndBounded(
             @ForAll @DoubleRange(min = 0.05, max = 50) double a,

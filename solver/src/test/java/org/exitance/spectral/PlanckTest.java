@@ -243,6 +243,16 @@ class PlanckTest {
     }
 
     @Test
+    void aPartitionWithOneBandLeftOutDoesNotSumToOne() {
+        // the partition test can fail: 1–20 µm at 1000 K without its 3–5 µm band misses ~20 %
+        // of the emission (F(0→5000 µm·K) − F(0→3000 µm·K) ≈ 0.634 − 0.273, Incropera 6th ed. Table 12.2, from memory)
+        double t = 1000;
+        double sum = Planck.bandFraction(0, 1, t) + Planck.bandFraction(1, 3, t) + Planck.bandFraction(5, 20, t)
+                + Planck.bandFraction(20, INF, t);
+        assertThat(1 - sum).isCloseTo(0.634 - 0.273, within(0.002));
+    }
+
+    @Test
     void bandFractionAgreesWithDifferenceOfFractionsAndQuadrature() {
         double[][] bands = {{0, 1}, {1, 3}, {3, 10}, {10, INF}, {2.5, 2.5001}, {0.2, 0.21}, {500, 600}};
         for (double t : new double[] {300, 1000, 5800}) {

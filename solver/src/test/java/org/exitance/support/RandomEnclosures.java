@@ -39,6 +39,26 @@ public final class RandomEnclosures {
     }
 
     /**
+     * The same enclosure with a perturbed matrix, still reciprocal and with no row above 1: the
+     * exchange area A_i F_ij = A_j F_ji of surfaces 0 and 1 grows by half the smaller of their
+     * shares to the environment (an open enclosure, where both have some).
+     *
+     * @return the perturbed enclosure, or null when surface 0 or 1 sends less than 1 % to the environment
+     */
+    public static Enclosure nudged(Enclosure e) {
+        double[][] f = e.viewFactors();
+        double a0 = e.surface(0).areaM2();
+        double a1 = e.surface(1).areaM2();
+        double s = 0.5 * Math.min(a0 * e.environmentFactor(0), a1 * e.environmentFactor(1));
+        if (e.environment() == null || s < 0.01 * Math.min(a0, a1)) {
+            return null;
+        }
+        f[0][1] += s / a0;
+        f[1][0] += s / a1;
+        return new Enclosure(e.surfaces(), f, e.environment());
+    }
+
+    /**
      * @param n            surfaces
      * @param open         whether part of each row goes to an environment at 250–350 K
      * @param unknownShare probability that a surface (other than the first) has an unknown temperature

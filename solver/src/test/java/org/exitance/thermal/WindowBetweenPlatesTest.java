@@ -11,6 +11,7 @@ import org.exitance.model.Convection;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.Material;
+import org.exitance.model.RadiationCase;
 import org.exitance.result.SolveResult;
 import org.exitance.spectral.GrayEmissivity;
 import org.exitance.spectral.PhysicalConstants;
@@ -18,6 +19,7 @@ import org.exitance.spectral.Planck;
 import org.exitance.spectral.SpectralEmissivity;
 import org.exitance.spectral.TabulatedEmissivity;
 import org.exitance.support.Cases;
+import org.exitance.support.SolveCheck;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -56,7 +58,10 @@ class WindowBetweenPlatesTest {
                         new Convection(H, T_FLUID), "front"),
                 new EnclosureSurface("cold", black, AREA, new BoundaryCondition.FixedTemperature(T_COLD), Double.NaN));
         double[][] f = {{0, 1, 0, 0}, {1, 0, 0, 0}, {0, 0, 0, 1}, {0, 0, 1, 0}};
-        return new TemperatureSolver(Cases.of(new Enclosure(s, f, null), null)).solve(bands);
+        RadiationCase c = Cases.of(new Enclosure(s, f, null), null);
+        SolveResult r = new TemperatureSolver(c).solve(bands);
+        SolveCheck.assertSolved(c, r);
+        return r;
     }
 
     @Test
@@ -83,7 +88,6 @@ class WindowBetweenPlatesTest {
             assertThat(w.face()).isEqualTo("front");
             assertThat(w.heatSuppliedW()).isCloseTo(0, within(1e-8 * AREA * e1));
         });
-        assertThat(res.relativeEnergyBalance()).isLessThan(1e-12);
     }
 
     @Test
@@ -117,7 +121,6 @@ class WindowBetweenPlatesTest {
         double scale = AREA * SIGMA * Math.pow(T_HOT, 4);
         assertThat(res.surface("hot").netHeatW()).isCloseTo(qHot, within(1e-8 * scale));
         assertThat(res.surface("cold").netHeatW()).isCloseTo(qCold, within(1e-8 * scale));
-        assertThat(res.relativeEnergyBalance()).isLessThan(1e-12);
     }
 
     /** Band emissive powers below and above the edge, f(λT) σT⁴ (Planck.fractionBelow). */

@@ -76,6 +76,23 @@ class CollimatedIncidenceTest {
         assertThat(intercepted).isCloseTo(projected, within(1e-12));
     }
 
+    @Test
+    void aSecondBoxInTheBeamBreaksTheConvexSum() {
+        // the projected-area test can fail: two boxes stacked along the beam shade each other, so
+        // together they intercept less than the sum of their projected areas
+        Scene s = Scene.builder()
+                .addAll(Enclosures.box("a.", Vec3.ZERO, new Vec3(1, 1, 1), 2, 2, 2, Facing.OUTWARD))
+                .addAll(Enclosures.box("b.", new Vec3(0, 0, 2), new Vec3(1, 1, 3), 2, 2, 2, Facing.OUTWARD)).build();
+        IncidenceResult r = new CollimatedIncidence(s).compute(Vec3.Z, 2, 1);
+        double intercepted = 0;
+        for (int k = 0; k < s.surfaceCount(); k++) {
+            intercepted += s.surfaces().get(k).area() * r.surfaceFactors()[k];
+        }
+        // each unit cube alone projects 1 m² along z; shaded, the pair takes 1 m²
+        assertThat(intercepted).isCloseTo(1.0, within(1e-9));
+        assertThat(Math.abs(intercepted - 2.0)).isGreaterThan(0.5);
+    }
+
     /** Smallest distance from the centre to a facet plane (radius of the inscribed ball). */
     static double inradius(List<Facet> facets, Vec3 centre) {
         double r = Double.MAX_VALUE;

@@ -155,6 +155,15 @@ class PlanetViewFactorTest {
     }
 
     @Test
+    void turningTowardThePlanetFailsTheMonotoneTest() {
+        // the test above can fail: turned 0.04 rad toward the sphere, an element at h/R = 2, 1 rad off
+        // the nadir, sees more of it
+        double f = PlanetViewFactor.differentialElement(2, Math.cos(1.0));
+        double toward = PlanetViewFactor.differentialElement(2, Math.cos(1.0 - 0.04));
+        assertThat(toward).isGreaterThan(f + 1e-6);
+    }
+
+    @Test
     void boxInLowOrbitGetsPerFaceAndAreaWeightedFactors() {
         // Invented demo geometry: a 1 m cube 400 km above the Earth, planet straight below (−z).
         double alt = 400e3, rr = PlanetViewFactor.EARTH_RADIUS_M, hh = (rr + alt) / rr;
