@@ -2,6 +2,8 @@ package org.exitance.cases;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
+import org.exitance.model.Cover;
 import org.exitance.model.BandSet;
 import org.exitance.model.ConductiveLink;
 import org.exitance.model.EnclosureSurface;
@@ -38,8 +40,9 @@ public record CaseDescription(Path file, String title, String notes, List<Materi
                               List<EnclosureSurface> surfaces, Environment environment, List<ConductiveLink> links,
                               double[][] viewFactors, CaseGeometry geometry, BandSet bands, SolverSettings settings,
                               List<CaseSource> sources, List<LoadCase> loadCases, JsonCursor expected,
-                              List<String> warnings) {
+                              List<String> warnings, Map<String, Cover> covers) {
     public CaseDescription {
+        covers = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(covers));
         materials = List.copyOf(materials);
         surfaces = List.copyOf(surfaces);
         links = List.copyOf(links);

@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Set;
 import org.exitance.model.BandSet;
 import org.exitance.model.ConductiveLink;
+import org.exitance.model.Cover;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.Environment;
 import org.exitance.model.LoadCase;
@@ -70,8 +71,10 @@ public final class CaseReader {
         List<LoadCase> loadCases = root.has("loadCases")
                 ? LoadCaseReader.read(root.field("loadCases"), surfaceNames, sourceNames) : List.of();
         JsonCursor expected = root.has("expected") ? root.field("expected") : null;
+        Map<String, Cover> covers = CoverReader.read(root.field("surfaces"), surfaces, materials,
+                geometry != null && geometry.solveOnFacets());
         return new CaseDescription(file, title, notes, new ArrayList<>(materials.values()), surfaces, env, links,
-                matrix, geometry, bands, settings, sources, loadCases, expected, warnings);
+                matrix, geometry, bands, settings, sources, loadCases, expected, warnings, covers);
     }
 
     /** A case solved facet by facet: no conductive links and no windows (both join whole surfaces). */

@@ -76,9 +76,15 @@ final class CheckCommand implements Callable<Integer> {
             out.println("  - " + s.name() + ": " + s.material().name() + ", " + Numbers.area(s.areaM2()) + " m², "
                     + (s.otherFace() == null ? s.boundary().label()
                     : s.boundary() instanceof org.exitance.model.BoundaryCondition.OnOtherFace
-                    ? "window face; its condition is on '" + s.otherFace() + "'"
-                    : s.boundary().label() + " (window face; other face '" + s.otherFace() + "')"));
+                    ? (s.isWindowFace() ? "window" : "two-sided") + " face; its condition is on '" + s.otherFace() + "'"
+                    : s.boundary().label() + " (" + (s.isWindowFace() ? "window" : "two-sided") + " face; other face '"
+                    + s.otherFace() + "')"));
         }
+        c.description().covers().forEach((surface, cover) -> out.println("  covered: " + surface + " under "
+                + (cover.effective() ? "a pack of effective emittance " + Numbers.ratio(cover.effectiveEmittance())
+                : cover.layers() + " layer" + (cover.layers() == 1 ? "" : "s") + " of " + cover.layerMaterial().name())
+                + ", outer face '" + org.exitance.model.Cover.outerFace(surface) + "' (" + cover.outerMaterial().name()
+                + ")"));
         ExpectedValues expected = ExpectedReader.read(c.description());
         if (expected != null) {
             out.println("  validation case: " + expected.values().size() + " expected values from "

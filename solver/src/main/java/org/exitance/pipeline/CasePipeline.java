@@ -46,17 +46,15 @@ public final class CasePipeline {
     public static PreparedCase prepare(CaseDescription d, ViewFactorStage.Request request) throws CaseException {
         CaseGeometry g = d.geometry();
         if (g == null) {
-            Enclosure enclosure = enclosure(d, d.surfaces(), d.viewFactors());
-            RadiationCase model = model(d, enclosure, SourceIncidence.place(d.sources(), null, null), null);
-            return new PreparedCase(d, model, d.warnings(), null);
+            return new PreparedCase(d, surfaceModel(d, d.viewFactors(), SourceIncidence.place(d.sources(), null, null)),
+                    d.warnings(), null);
         }
         List<String> warnings = new ArrayList<>(d.warnings());
         ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets());
         double[][] f = GeometryViewFactors.inCaseOrder(computed, d.surfaces(), d.environment() != null, d.file(),
                 warnings);
         if (!g.solveOnFacets()) {
-            Enclosure enclosure = enclosure(d, d.surfaces(), f);
-            RadiationCase model = model(d, enclosure, SourceIncidence.place(d.sources(), g.scene(), null), null);
+            RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), g.scene(), null));
             return new PreparedCase(d, model, warnings, computed);
         }
         FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces());
@@ -64,6 +62,23 @@ public final class CasePipeline {
         List<ExternalSource> sources = FacetExpansion.spreadOverFacets(
                 SourceIncidence.place(d.sources(), g.scene(), facets.sceneOrder()), facets.groups());
         return new PreparedCase(d, model(d, enclosure, sources, facets), warnings, computed);
+    }
+
+    /**
+     * The model of a case solved on its surfaces: covered surfaces expanded into their packs
+     * ({@link CoverExpansion}), the external irradiation aimed at a covered surface moved to its
+     * outer face.
+     *
+     * @param f view factors in case order; not modified
+     */
+    private static RadiationCase surfaceModel(CaseDescription d, double[][] f, List<ExternalSource> sources)
+            throws CaseException {
+        if (d.covers().isEmpty()) {
+            return model(d, enclosure(d, d.surfaces(), f), sources, null);
+        }
+        CoverExpansion.Result x = CoverExpansion.expand(d.surfaces(), f, d.covers());
+        return model(d, enclosure(d, x.surfaces(), x.matrix()), CoverExpansion.aimAtOuterFaces(sources, x.outer()),
+                null);
     }
 
     /**

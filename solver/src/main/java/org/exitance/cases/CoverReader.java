@@ -1,0 +1,85 @@
+package org.exitance.cases;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.exitance.model.Cover;
+import org.exitance.model.EnclosureSurface;
+import org.exitance.model.Material;
+
+/**
+ * Reads the {@code coveredBy} object of surfaces (docs/case-format.md, "Insulation and shield
+ * packs"): {@code {"layers": N, "layerMaterial": "film", "outerMaterial": "outer_film"}} or
+ * {@code {"effectiveEmittance": 0.02, "outerMaterial": "outer_film"}}.
+ */
+final class CoverReader {
+    /** Most layers in one pack. */
+    static final int MAX_LAYERS = 500;
+
+    private CoverReader() {
+    }
+
+    /** The covers by surface name, in case order; empty when no surface has one. */
+    static Map<String, Cover> read(JsonCursor arr, List<EnclosureSurface> surfaces, Map<String, Material> materials,
+                                   boolean onFacets) throws CaseException {
+        Map<String, Cover> out = new LinkedHashMap<>();
+        List<JsonCursor> el = arr.elements();
+        for (int i = 0; i < el.size(); i++) {
+            JsonCursor s = el.get(i);
+            if (!s.has("coveredBy")) {
+                continue;
+            }
+            JsonCursor c = s.field("coveredBy").allowOnly("layers", "layerMaterial", "outerMaterial",
+                    "effectiveEmittance", "description");
+            EnclosureSurface surface = surfaces.get(i);
+            if (surface.hasOtherFace()) {
+                throw c.error("a node with two faces cannot be covered here: cover a surface with one face");
+            }
+            if (onFacets) {
+                throw c.error("covered surfaces are solved on surfaces: leave the geometry's \"resolution\" at"
+                        + " \"surfaces\"");
+            }
+            Material outer = material(c.field("outerMaterial"), materials);
+            String form = c.exactlyOneOf("layers", "effectiveEmittance");
+            Cover cover;
+            if (form.equals("layers")) {
+                JsonCursor n = c.field("layers");
+                int layers = n.positiveInt();
+                if (layers > MAX_LAYERS) {
+                    throw n.error("at most " + MAX_LAYERS + " layers, got " + layers);
+                }
+                cover = new Cover(layers, material(c.field("layerMaterial"), materials), outer, Double.NaN);
+            } else {
+                if (c.has("layerMaterial")) {
+                    throw c.field("layerMaterial").error("goes with \"layers\"; an effective emittance stands for the"
+                            + " whole pack");
+                }
+                JsonCursor e = c.field("effectiveEmittance");
+                double v = e.fraction();
+                if (!(v > 0)) {
+                    throw e.error("must be above 0, got " + v);
+                }
+                cover = new Cover(0, null, outer, v);
+            }
+            String outerName = Cover.outerFace(surface.name());
+            if (surfaces.stream().anyMatch(x -> x.name().startsWith(surface.name() + "."))) {
+                throw c.error("the names '" + surface.name() + ".…' are taken by the cover's layers ('" + outerName
+                        + "' and the layers between); rename the other surface");
+            }
+            out.put(surface.name(), cover);
+        }
+        return out;
+    }
+
+    private static Material material(JsonCursor c, Map<String, Material> materials) throws CaseException {
+        String name = c.text();
+        Material m = materials.get(name);
+        if (m == null) {
+            throw c.error("unknown material '" + name + "' (declared: " + String.join(", ", materials.keySet()) + ")");
+        }
+        if (m.semiTransparent()) {
+            throw c.error("a layer of a cover is opaque; material '" + name + "' is semi-transparent");
+        }
+        return m;
+    }
+}
