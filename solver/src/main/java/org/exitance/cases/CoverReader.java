@@ -32,8 +32,8 @@ final class CoverReader {
             JsonCursor c = s.field("coveredBy").allowOnly("layers", "layerMaterial", "outerMaterial",
                     "effectiveEmittance", "description");
             EnclosureSurface surface = surfaces.get(i);
-            if (surface.hasOtherFace()) {
-                throw c.error("a node with two faces cannot be covered here: cover a surface with one face");
+            if (surface.isWindowFace()) {
+                throw c.error("a window cannot be covered: its faces pass radiation through");
             }
             if (onFacets) {
                 throw c.error("covered surfaces are solved on surfaces: leave the geometry's \"resolution\" at"

@@ -93,7 +93,7 @@ public sealed interface BoundaryCondition {
             return "dissipation";
         }
         if (this instanceof OnOtherFace) {
-            return "window face";
+            return "other face";
         }
         return "adiabatic";
     }

@@ -14,7 +14,8 @@ import org.exitance.spectral.GrayEmissivity;
 /**
  * Expands covered surfaces into their packs (model/Cover). A surface S keeps its name, material
  * and condition, and now faces only the first layer. Layer k is a two-sided opaque node with faces
- * {@code S.layer<k>.in} and {@code S.layer<k>.out}; the last layer's outer face is
+ * {@code S.layer<k>.in} and {@code S.layer<k>.out} (S may be one face of a two-sided plate: the
+ * hot-zone wall of a vacuum furnace, covered on its outer face); the last layer's outer face is
  * {@code S.outer}, which takes S's place in the enclosure (its row and column of F) and the
  * external irradiation aimed at S. Every gap between consecutive sheets is a pair of infinite
  * parallel sheets, F = 1 both ways (Siegel &amp; Howell, 5th ed., §6.3, radiation shields).
@@ -61,7 +62,9 @@ final class CoverExpansion {
             int wall = out.size();
             Material under = c.effective() ? new Material(s.material().name() + " (under an effective emittance: black)",
                     new GrayEmissivity(1), "") : s.material();
-            out.add(new EnclosureSurface(s.name(), under, a, s.boundary(), s.initialTemperatureK(), s.convection(), null));
+            // a two-sided plate may be covered on one face: that face keeps its partner
+            out.add(new EnclosureSurface(s.name(), under, a, s.boundary(), s.initialTemperatureK(), s.convection(),
+                    s.otherFace()));
             origin.add(-1);
             int previous = wall;
             int sheets = c.effective() ? 1 : c.layers();

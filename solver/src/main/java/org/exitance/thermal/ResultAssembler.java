@@ -117,8 +117,9 @@ final class ResultAssembler {
             total += q;
             double conv = p.convectionW(i, t[i]);
             double cond = p.conductionW(i, t);
-            String label = !s.hasOtherFace() || carrier != s ? s.boundary().label()
-                    : s.boundary().label() + (s.isWindowFace() ? " (window)" : " (two-sided)");
+            String kind = s.isWindowFace() ? "window" : "two-sided";
+            String label = !s.hasOtherFace() ? s.boundary().label()
+                    : carrier != s ? kind + " face" : s.boundary().label() + " (" + kind + ")";
             double[] bandG = new double[nb];
             double[] bandJ = new double[nb];
             for (int k = 0; k < nb; k++) {

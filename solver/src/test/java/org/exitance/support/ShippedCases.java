@@ -26,8 +26,10 @@ public final class ShippedCases {
             "muffle-with-part-stl.json",
             "oven-cavity-obj.json",
             "selective-absorber-audit.json",
+            "spacecraft-box-blankets.json",
             "spacecraft-box-geometry.json",
-            "spacecraft-box-orbit.json");
+            "spacecraft-box-orbit.json",
+            "vacuum-furnace-shield-pack.json");
 
     /** The case files of cases/validation, by name. */
     public static final List<String> VALIDATION = List.of(
