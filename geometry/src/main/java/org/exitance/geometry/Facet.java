@@ -240,6 +240,6 @@ public final class Facet {
 
     @Override
     public String toString() {
-        return "Facet" + vertices();
+        return "facet " + vertices();
     }
 }

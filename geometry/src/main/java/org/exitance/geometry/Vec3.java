@@ -74,6 +74,16 @@ public record Vec3(double x, double y, double z) {
         return times(1.0 / l);
     }
 
+    /** Written as a case writes a point, {@code [x, y, z]} (m), so that messages show the user's own form. */
+    @Override
+    public String toString() {
+        return "[" + coordinate(x) + ", " + coordinate(y) + ", " + coordinate(z) + "]";
+    }
+
+    private static String coordinate(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
+    }
+
     /** @return coordinate {@code axis} (0 = x, 1 = y, 2 = z) */
     public double get(int axis) {
         return switch (axis) {

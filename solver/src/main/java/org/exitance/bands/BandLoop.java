@@ -2,6 +2,7 @@ package org.exitance.bands;
 
 import java.util.List;
 import org.exitance.model.Band;
+import org.exitance.model.MemoryBudget;
 import org.exitance.network.BandNetwork;
 import org.exitance.network.BandState;
 import org.exitance.network.RadiositySolver;
@@ -43,6 +44,8 @@ public final class BandLoop {
      */
     public static BandLoop prepare(RadiativeArrays r, List<Band> bands, double[][] emissivity, double[] t,
                                    ExternalAbsorption absorption, RadiositySolver solver) {
+        MemoryBudget.require("the radiosity operators of " + bands.size() + " band" + (bands.size() == 1 ? "" : "s")
+                + " over " + r.n + " surfaces", MemoryBudget.saturatedProduct(bands.size(), solver.preparedBytes(r.n)));
         double[][] tau = BandProperties.transmissivities(r.enclosure.surfaces(), bands, t);
         BandNetwork[] nets = new BandNetwork[bands.size()];
         ExternalIrradiation[] external = new ExternalIrradiation[bands.size()];

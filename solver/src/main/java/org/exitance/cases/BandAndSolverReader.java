@@ -18,10 +18,10 @@ final class BandAndSolverReader {
         }
         JsonCursor b = o.get().allowOnly("edges_um");
         JsonCursor edges = b.field("edges_um");
-        List<JsonCursor> el = edges.elements();
+        List<JsonCursor> el = edges.elementsWithin(Limits.BAND_EDGES);
         double[] e = new double[el.size()];
         for (int i = 0; i < e.length; i++) {
-            e[i] = el.get(i).positive();
+            e[i] = el.get(i).positiveWithin(Limits.WAVELENGTH_UM);
             if (i > 0 && !(e[i] > e[i - 1])) {
                 throw el.get(i).error("band edges must increase: " + e[i] + " after " + e[i - 1]);
             }
@@ -39,9 +39,9 @@ final class BandAndSolverReader {
                 "maxPropertyIterations");
         SolverSettings d = SolverSettings.DEFAULT;
         return new SolverSettings(
-                s.has("temperatureTolerance_K") ? s.field("temperatureTolerance_K").positive() : d.temperatureToleranceK(),
-                s.has("relativeHeatTolerance") ? s.field("relativeHeatTolerance").positive() : d.relativeHeatTolerance(),
-                s.has("maxNewtonIterations") ? s.field("maxNewtonIterations").positiveInt() : d.maxNewtonIterations(),
-                s.has("maxPropertyIterations") ? s.field("maxPropertyIterations").positiveInt() : d.maxPropertyIterations());
+                s.has("temperatureTolerance_K") ? s.field("temperatureTolerance_K").positiveWithin(Limits.TEMPERATURE_TOLERANCE_K) : d.temperatureToleranceK(),
+                s.has("relativeHeatTolerance") ? s.field("relativeHeatTolerance").positiveWithin(Limits.RELATIVE_HEAT_TOLERANCE) : d.relativeHeatTolerance(),
+                s.has("maxNewtonIterations") ? s.field("maxNewtonIterations").wholeWithin(Limits.NEWTON_ITERATIONS) : d.maxNewtonIterations(),
+                s.has("maxPropertyIterations") ? s.field("maxPropertyIterations").wholeWithin(Limits.PROPERTY_ITERATIONS) : d.maxPropertyIterations());
     }
 }

@@ -31,6 +31,7 @@ final class CaseJson {
         if (!Files.isRegularFile(file)) {
             throw new CaseException(file, "", "not a regular file");
         }
+        FileLimits.requireReadable(file, null);
         try {
             JsonNode n = JSON.readTree(file.toFile());
             if (n == null || n.isMissingNode()) {
@@ -45,10 +46,12 @@ final class CaseJson {
             }
             // the parser names positions as "[Source: ...; line: 3, column: 15]"; keep only the position
             throw new CaseException(file, "", "malformed JSON at line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr() + ": "
-                    + original.replaceAll("\\[Source: [^\\]]*?line: (\\d+), column: (\\d+)\\]", "line $1, column $2"));
+                    + e.getLocation().getColumnNr() + ": " + JsonSyntax.plain(original));
         } catch (JsonProcessingException e) {
-            throw new CaseException(file, "", "malformed JSON: " + CaseException.oneLine(e.getOriginalMessage()));
+            String where = e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column "
+                    + e.getLocation().getColumnNr();
+            throw new CaseException(file, "", "malformed JSON" + where + ": "
+                    + JsonSyntax.plain(CaseException.oneLine(e.getOriginalMessage())));
         } catch (IOException e) {
             throw new CaseException(file, "", "cannot read: " + CaseException.oneLine(e.getMessage()));
         }

@@ -74,6 +74,20 @@ final class CsvCells {
         throw new CaseException(csv, "", "line " + line + ": " + column + " is not a number: '" + s + "'");
     }
 
+    /** The error for a cell outside its range ({@link Limits}). */
+    static CaseException outOfRange(Path csv, int line, String column, double v, Limits.Range r) {
+        return new CaseException(csv, "", "line " + line + ": " + column + " must lie " + r.describe()
+                + " (see Limits in docs/case-format.md), got " + Limits.number(v));
+    }
+
+    /** A table may have at most {@link Limits#TABLE_POINTS} rows. */
+    static void requireRowCount(Path csv, int rows) throws CaseException {
+        if (rows > Limits.TABLE_POINTS.max()) {
+            throw new CaseException(csv, "", rows + " data rows; a table may have at most "
+                    + Limits.number(Limits.TABLE_POINTS.max()) + " (see Limits in docs/case-format.md)");
+        }
+    }
+
     /**
      * The line of the header: the first line that is neither blank nor a comment; −1 if there is
      * none; 1 if the file cannot be read here (the parser then reports why).

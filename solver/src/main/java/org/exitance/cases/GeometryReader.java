@@ -1,24 +1,15 @@
 package org.exitance.cases;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.exitance.geometry.Facet;
-import org.exitance.geometry.GeometryException;
 import org.exitance.geometry.Scene;
 import org.exitance.geometry.Surface;
 import org.exitance.geometry.Transform;
 import org.exitance.geometry.Vec3;
-import org.exitance.geometry.mesh.MeshFormatException;
-import org.exitance.geometry.mesh.MeshImport;
-import org.exitance.geometry.mesh.MeshOptions;
-import org.exitance.geometry.mesh.NormalPolicy;
-import org.exitance.geometry.mesh.ObjReader;
-import org.exitance.geometry.mesh.StlReader;
 import org.exitance.geometry.shape.Enclosures;
 import org.exitance.geometry.shape.Facing;
 import org.exitance.geometry.shape.Shapes;
@@ -39,56 +30,65 @@ final class GeometryReader {
         g.allowOnly("parts", "options");
         Map<String, List<Facet>> bySurface = new LinkedHashMap<>();
         List<String> notes = new ArrayList<>();
-        List<JsonCursor> parts = g.field("parts").elements();
+        List<JsonCursor> parts = g.field("parts").elementsWithin(Limits.FACETS);
         if (parts.isEmpty()) {
             throw g.field("parts").error("needs at least one part");
         }
+        long[] facets = {0};
         for (JsonCursor p : parts) {
             try {
-                for (Surface s : part(p, caseDir, notes)) {
+                for (Surface s : part(p, caseDir, notes, facets)) {
                     bySurface.computeIfAbsent(s.name(), k -> new ArrayList<>()).addAll(s.facets());
                 }
-            } catch (GeometryException e) {
-                throw p.error(e.getMessage());
+            } catch (IllegalArgumentException e) { // GeometryException and the checks of Vec3 and Transform
+                throw p.error(CaseException.oneLine(e.getMessage()));
             }
         }
+        requireWithinBounds(g.field("parts"), bySurface);
         Scene.Builder b = Scene.builder();
         bySurface.forEach(b::add);
         Scene scene;
         try {
             scene = b.build();
-        } catch (GeometryException e) {
-            throw g.error(e.getMessage());
+        } catch (IllegalArgumentException e) {
+            throw g.error(CaseException.oneLine(e.getMessage()));
         }
         ViewFactorOptions options = g.has("options") ? options(g.field("options")) : ViewFactorOptions.defaults();
-        boolean facets = false;
+        boolean onFacets = false;
         if (g.has("options") && g.field("options").has("resolution")) {
             JsonCursor r = g.field("options").field("resolution");
-            facets = switch (r.text()) {
+            onFacets = switch (r.text()) {
                 case "surfaces" -> false;
                 case "facets" -> true;
                 default -> throw r.error("must be \"surfaces\" or \"facets\", got \"" + r.text() + "\"");
             };
         }
-        return new CaseGeometry(scene, options, notes, facets);
+        return new CaseGeometry(scene, options, notes, onFacets);
     }
 
     private static final String[] SHAPES = {"rectangle", "polygon", "disc", "annulus", "cylinder", "cone", "sphere",
         "box", "cylindricalCavity", "mesh"};
 
-    private static List<Surface> part(JsonCursor p, Path caseDir, List<String> notes) throws CaseException {
+    /** @param facets the facet count of the parts so far (modified: this part's facets are added) */
+    private static List<Surface> part(JsonCursor p, Path caseDir, List<String> notes, long[] facets)
+            throws CaseException {
         p.allowOnly("surface", "twoSided", "transform", "rectangle", "polygon", "disc", "annulus", "cylinder", "cone",
                 "sphere", "box", "cylindricalCavity", "mesh");
         String kind = p.exactlyOneOf(SHAPES);
         JsonCursor s = p.field(kind);
+        int sides = p.has("twoSided") && p.field("twoSided").bool() ? 2 : 1;
         List<Surface> out;
         switch (kind) {
-            case "box" -> out = box(s);
-            case "cylindricalCavity" -> out = cavity(s);
-            case "mesh" -> out = mesh(s, caseDir, notes);
+            case "box" -> out = box(s, facets, sides);
+            case "cylindricalCavity" -> out = cavity(s, facets, sides);
+            case "mesh" -> {
+                out = MeshPartReader.read(s, caseDir, notes);
+                facets[0] = GeometryNumbers.addFacets(s, facets[0],
+                        (double) sides * out.stream().mapToInt(x -> x.facets().size()).sum());
+            }
             default -> {
                 String name = p.field("surface").nonEmptyText();
-                out = List.of(new Surface(name, shape(kind, s)));
+                out = List.of(new Surface(name, shape(kind, s, facets, sides)));
             }
         }
         boolean namesItsOwnSurfaces = kind.equals("box") || kind.equals("cylindricalCavity") || kind.equals("mesh");
@@ -103,7 +103,7 @@ final class GeometryReader {
             }
             out = moved;
         }
-        if (p.has("twoSided") && p.field("twoSided").bool()) {
+        if (sides == 2) {
             List<Surface> both = new ArrayList<>();
             for (Surface x : out) {
                 both.add(new Surface(x.name() + Scene.FRONT_SUFFIX, x.facets()));
@@ -114,68 +114,101 @@ final class GeometryReader {
         return out;
     }
 
-    private static List<Facet> shape(String kind, JsonCursor s) throws CaseException {
+    /**
+     * One shape's facets; the facet count is checked before they are built.
+     *
+     * @param facets the facet count so far (modified: this shape's facets are added)
+     * @param sides  2 for a two-sided part, else 1
+     */
+    private static List<Facet> shape(String kind, JsonCursor s, long[] facets, int sides) throws CaseException {
         switch (kind) {
             case "rectangle": {
                 s.allowOnly("origin_m", "edgeU_m", "edgeV_m", "divisions");
-                int[] d = divisions(s, 2, new int[] {1, 1});
-                return Shapes.parallelogram(vec(s.field("origin_m")), vec(s.field("edgeU_m")), vec(s.field("edgeV_m")),
-                        d[0], d[1]);
+                int[] d = divisions(s, 2, new int[] {1, 1}, facets, sides);
+                return Shapes.parallelogram(point(s.field("origin_m")), GeometryNumbers.edge(s.field("edgeU_m")),
+                        GeometryNumbers.edge(s.field("edgeV_m")), d[0], d[1]);
             }
             case "polygon": {
                 s.allowOnly("vertices_m", "divisions");
                 List<Vec3> v = new ArrayList<>();
-                for (JsonCursor c : s.field("vertices_m").elements()) {
-                    v.add(vec(c));
+                for (JsonCursor c : s.field("vertices_m").elementsWithin(Limits.TABLE_POINTS)) {
+                    v.add(point(c));
                 }
-                return Shapes.convexPolygon(v, divisions(s, 1, new int[] {1})[0]);
+                int d = GeometryNumbers.divisions(s, 1, new int[] {1})[0];
+                facets[0] = GeometryNumbers.addFacets(s.has("divisions") ? s.field("divisions") : s, facets[0],
+                        (double) sides * v.size() * d * d);
+                return Shapes.convexPolygon(v, d);
             }
             case "disc": {
                 s.allowOnly("center_m", "normal", "radius_m", "divisions");
-                int[] d = divisions(s, 2, new int[] {2, 16});
-                return Shapes.disc(vec(s.field("center_m")), vec(s.field("normal")), s.field("radius_m").positive(),
-                        d[0], d[1]);
+                int[] d = divisions(s, 2, new int[] {2, 16}, facets, sides);
+                return Shapes.disc(point(s.field("center_m")), direction(s.field("normal")),
+                        GeometryNumbers.length(s, "radius_m"), d[0], d[1]);
             }
             case "annulus": {
                 s.allowOnly("center_m", "normal", "innerRadius_m", "outerRadius_m", "divisions");
-                int[] d = divisions(s, 2, new int[] {2, 16});
-                return Shapes.annulus(vec(s.field("center_m")), vec(s.field("normal")),
-                        s.field("innerRadius_m").nonNegative(), s.field("outerRadius_m").positive(), d[0], d[1]);
+                int[] d = divisions(s, 2, new int[] {2, 16}, facets, sides);
+                return Shapes.annulus(point(s.field("center_m")), direction(s.field("normal")),
+                        GeometryNumbers.radiusOrZero(s, "innerRadius_m"), GeometryNumbers.length(s, "outerRadius_m"),
+                        d[0], d[1]);
             }
             case "cylinder": {
                 s.allowOnly("baseCenter_m", "axis", "radius_m", "height_m", "divisions", "facing");
-                int[] d = divisions(s, 2, new int[] {16, 4});
-                return Shapes.cylinderWall(vec(s.field("baseCenter_m")), vec(s.field("axis")),
-                        s.field("radius_m").positive(), s.field("height_m").positive(), d[0], d[1], facing(s));
+                int[] d = divisions(s, 2, new int[] {16, 4}, facets, sides);
+                return Shapes.cylinderWall(point(s.field("baseCenter_m")), direction(s.field("axis")),
+                        GeometryNumbers.length(s, "radius_m"), GeometryNumbers.length(s, "height_m"), d[0], d[1],
+                        facing(s));
             }
             case "cone": {
                 s.allowOnly("baseCenter_m", "axis", "baseRadius_m", "topRadius_m", "height_m", "divisions", "facing");
-                int[] d = divisions(s, 2, new int[] {16, 4});
-                return Shapes.coneFrustum(vec(s.field("baseCenter_m")), vec(s.field("axis")),
-                        s.field("baseRadius_m").nonNegative(), s.field("topRadius_m").nonNegative(),
-                        s.field("height_m").positive(), d[0], d[1], facing(s));
+                int[] d = divisions(s, 2, new int[] {16, 4}, facets, sides);
+                return Shapes.coneFrustum(point(s.field("baseCenter_m")), direction(s.field("axis")),
+                        GeometryNumbers.radiusOrZero(s, "baseRadius_m"), GeometryNumbers.radiusOrZero(s, "topRadius_m"),
+                        GeometryNumbers.length(s, "height_m"), d[0], d[1], facing(s));
             }
             default: { // sphere
                 s.allowOnly("center_m", "radius_m", "divisions", "facing");
-                int[] d = divisions(s, 2, new int[] {8, 16});
-                return Shapes.sphere(vec(s.field("center_m")), s.field("radius_m").positive(), d[0], d[1], facing(s));
+                int[] d = divisions(s, 2, new int[] {8, 16}, facets, sides);
+                return Shapes.sphere(point(s.field("center_m")), GeometryNumbers.length(s, "radius_m"), d[0], d[1],
+                        facing(s));
             }
         }
     }
 
-    private static List<Surface> box(JsonCursor s) throws CaseException {
+    /** Divisions of a shape that makes d[0]·d[1] facets, added to the count before it is built. */
+    private static int[] divisions(JsonCursor s, int count, int[] defaults, long[] facets, int sides)
+            throws CaseException {
+        int[] d = GeometryNumbers.divisions(s, count, defaults);
+        facets[0] = GeometryNumbers.addFacets(s.has("divisions") ? s.field("divisions") : s, facets[0],
+                (double) sides * d[0] * d[1]);
+        return d;
+    }
+
+    private static List<Surface> box(JsonCursor s, long[] facets, int sides) throws CaseException {
         s.allowOnly("min_m", "max_m", "divisions", "facing", "faces");
-        int[] d = divisions(s, 3, new int[] {1, 1, 1});
-        List<Surface> faces = Enclosures.box("", vec(s.field("min_m")), vec(s.field("max_m")), d[0], d[1], d[2],
-                facing(s));
+        int[] d = GeometryNumbers.divisions(s, 3, new int[] {1, 1, 1});
+        facets[0] = GeometryNumbers.addFacets(s.has("divisions") ? s.field("divisions") : s, facets[0],
+                2.0 * sides * ((double) d[0] * d[1] + (double) d[1] * d[2] + (double) d[0] * d[2]));
+        Vec3 min = point(s.field("min_m"));
+        Vec3 max = point(s.field("max_m"));
+        for (int k = 0; k < 3; k++) {
+            if (!(max.get(k) - min.get(k) >= Limits.LENGTH_M.min())) {
+                throw s.field("max_m").error("must exceed min_m on every axis (by at least "
+                        + Limits.number(Limits.LENGTH_M.min()) + " m): " + "xyz".charAt(k) + " from "
+                        + Limits.number(min.get(k)) + " m to " + Limits.number(max.get(k)) + " m");
+            }
+        }
+        List<Surface> faces = Enclosures.box("", min, max, d[0], d[1], d[2], facing(s));
         return renamed(faces, s.field("faces"), Enclosures.BOX_FACES);
     }
 
-    private static List<Surface> cavity(JsonCursor s) throws CaseException {
+    private static List<Surface> cavity(JsonCursor s, long[] facets, int sides) throws CaseException {
         s.allowOnly("baseCenter_m", "axis", "radius_m", "height_m", "divisions", "faces");
-        int[] d = divisions(s, 3, new int[] {16, 4, 2});
-        List<Surface> parts = Enclosures.cylindricalCavity(vec(s.field("baseCenter_m")), vec(s.field("axis")),
-                s.field("radius_m").positive(), s.field("height_m").positive(), d[0], d[1], d[2]);
+        int[] d = GeometryNumbers.divisions(s, 3, new int[] {16, 4, 2});
+        facets[0] = GeometryNumbers.addFacets(s.has("divisions") ? s.field("divisions") : s, facets[0],
+                (double) sides * d[0] * ((double) d[1] + 2.0 * d[2]));
+        List<Surface> parts = Enclosures.cylindricalCavity(point(s.field("baseCenter_m")), direction(s.field("axis")),
+                GeometryNumbers.length(s, "radius_m"), GeometryNumbers.length(s, "height_m"), d[0], d[1], d[2]);
         return renamed(parts, s.field("faces"), List.of("wall", "base", "lid"));
     }
 
@@ -194,82 +227,17 @@ final class GeometryReader {
         return out;
     }
 
-    private static List<Surface> mesh(JsonCursor s, Path caseDir, List<String> notes) throws CaseException {
-        s.allowOnly("file", "scale_m", "normals", "surface", "groups");
-        JsonCursor ref = s.field("file");
-        Path file = caseDir.resolve(ref.nonEmptyText()).normalize();
-        if (!Files.isRegularFile(file)) {
-            throw ref.error("mesh file not found: " + file);
-        }
-        MeshOptions o = MeshOptions.defaults();
-        if (s.has("scale_m")) {
-            o = o.withScale(s.field("scale_m").positive());
-        }
-        if (s.has("normals")) {
-            JsonCursor n = s.field("normals");
-            o = o.withNormalPolicy(switch (n.text()) {
-                case "strict" -> NormalPolicy.STRICT;
-                case "winding" -> NormalPolicy.USE_WINDING;
-                case "stored" -> NormalPolicy.USE_STORED_NORMAL;
-                default -> throw n.error("must be \"strict\", \"winding\" or \"stored\", got \"" + n.text() + "\"");
-            });
-        }
-        String lower = file.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
-        MeshImport m;
-        try {
-            if (lower.endsWith(".stl")) {
-                m = StlReader.read(file, o);
-            } else if (lower.endsWith(".obj")) {
-                m = ObjReader.read(file, o);
-            } else {
-                throw ref.error("mesh files must end in .stl or .obj: " + file.getFileName());
-            }
-        } catch (MeshFormatException e) {
-            throw new CaseException(file, "", (e.location() == null || e.location().isEmpty() ? "" : e.location() + ": ")
-                    + e.problem());
-        } catch (IOException e) {
-            throw ref.error("cannot read mesh: " + CaseException.oneLine(e.getMessage()));
-        }
-        for (String note : m.notes()) {
-            notes.add(file.getFileName() + ": " + note);
-        }
-        if (s.has("surface")) {
-            if (s.has("groups")) {
-                throw s.error("give \"surface\" (the whole mesh as one surface) or \"groups\", not both");
-            }
-            List<Facet> all = new ArrayList<>();
-            m.surfaces().forEach(x -> all.addAll(x.facets()));
-            return List.of(new Surface(s.field("surface").nonEmptyText(), all));
-        }
-        if (s.has("groups")) {
-            JsonCursor map = s.field("groups");
-            List<Surface> out = new ArrayList<>();
-            for (Surface x : m.surfaces()) {
-                if (!map.has(x.name())) {
-                    throw map.error("mesh group '" + x.name() + "' is not mapped to a surface");
-                }
-                out.add(new Surface(map.field(x.name()).nonEmptyText(), x.facets()));
-            }
-            for (Map.Entry<String, JsonCursor> e : map.entries()) {
-                if (m.surfaces().stream().noneMatch(x -> x.name().equals(e.getKey()))) {
-                    throw e.getValue().error("the mesh has no group '" + e.getKey() + "'");
-                }
-            }
-            return out;
-        }
-        return m.surfaces();
-    }
-
     private static Transform transform(JsonCursor t) throws CaseException {
         t.allowOnly("rotate", "translate_m");
         Transform out = Transform.identity();
         if (t.has("rotate")) {
             JsonCursor r = t.field("rotate").allowOnly("axis", "angle_deg", "pivot_m");
-            Vec3 pivot = r.has("pivot_m") ? vec(r.field("pivot_m")) : Vec3.ZERO;
-            out = out.then(Transform.rotation(pivot, vec(r.field("axis")), Math.toRadians(r.field("angle_deg").number())));
+            Vec3 pivot = r.has("pivot_m") ? point(r.field("pivot_m")) : Vec3.ZERO;
+            out = out.then(Transform.rotation(pivot, direction(r.field("axis")),
+                    Math.toRadians(r.field("angle_deg").within(Limits.ANGLE_DEG))));
         }
         if (t.has("translate_m")) {
-            out = out.then(Transform.translation(vec(t.field("translate_m"))));
+            out = out.then(Transform.translation(GeometryNumbers.translation(t.field("translate_m"))));
         }
         return out;
     }
@@ -278,17 +246,13 @@ final class GeometryReader {
         o.allowOnly("threads", "pairTolerance", "obstruction", "closure", "visibilityOrder", "resolution");
         ViewFactorOptions v = ViewFactorOptions.defaults();
         if (o.has("threads")) {
-            JsonCursor t = o.field("threads");
-            if (!t.node().isIntegralNumber() || t.node().intValue() < 0) {
-                throw t.error("expected a whole number ≥ 0 (0: all cores)");
-            }
-            v = v.withThreads(t.node().intValue());
+            v = v.withThreads(o.field("threads").wholeWithin(Limits.THREADS));
         }
         if (o.has("pairTolerance")) {
-            v = v.withPairTolerance(o.field("pairTolerance").positive());
+            v = v.withPairTolerance(o.field("pairTolerance").positiveWithin(Limits.PAIR_TOLERANCE));
         }
         if (o.has("visibilityOrder")) {
-            v = v.withVisibilityOrder(o.field("visibilityOrder").positiveInt());
+            v = v.withVisibilityOrder(o.field("visibilityOrder").wholeWithin(Limits.VISIBILITY_ORDER));
         }
         if (o.has("obstruction")) {
             JsonCursor c = o.field("obstruction");
@@ -323,27 +287,34 @@ final class GeometryReader {
         };
     }
 
-    private static int[] divisions(JsonCursor s, int count, int[] defaults) throws CaseException {
-        if (!s.has("divisions")) {
-            return defaults;
-        }
-        JsonCursor d = s.field("divisions");
-        List<JsonCursor> el = d.elements();
-        if (el.size() != count) {
-            throw d.error("needs " + count + " whole numbers, got " + el.size());
-        }
-        int[] out = new int[count];
-        for (int i = 0; i < count; i++) {
-            out[i] = el.get(i).positiveInt();
-        }
-        return out;
+    private static Vec3 point(JsonCursor c) throws CaseException {
+        return GeometryNumbers.point(c);
     }
 
-    private static Vec3 vec(JsonCursor c) throws CaseException {
-        double[] v = c.numbers();
-        if (v.length != 3) {
-            throw c.error("expected three numbers [x, y, z], got " + v.length);
+    private static Vec3 direction(JsonCursor c) throws CaseException {
+        return GeometryNumbers.direction(c);
+    }
+
+    /**
+     * Every vertex of the geometry lies within {@link Limits#COORDINATE_M} (a mesh's scale
+     * and a part's transform can move it there).
+     *
+     * @param bySurface the facets by surface; not modified
+     */
+    private static void requireWithinBounds(JsonCursor parts, Map<String, List<Facet>> bySurface)
+            throws CaseException {
+        for (List<Facet> list : bySurface.values()) {
+            for (Facet f : list) {
+                for (int k = 0; k < f.vertexCount(); k++) {
+                    Vec3 v = f.vertex(k);
+                    double far = Math.max(Math.abs(v.x()), Math.max(Math.abs(v.y()), Math.abs(v.z())));
+                    if (far > Limits.COORDINATE_M.max()) {
+                        throw parts.error("a vertex lies " + Limits.number(far) + " m from the origin along an axis;"
+                                + " coordinates must lie " + Limits.COORDINATE_M.describe()
+                                + " (see Limits in docs/case-format.md)");
+                    }
+                }
+            }
         }
-        return new Vec3(v[0], v[1], v[2]);
     }
 }

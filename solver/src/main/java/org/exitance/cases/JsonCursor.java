@@ -168,9 +168,58 @@ public final class JsonCursor {
         }
         double v = node.doubleValue();
         if (!Double.isFinite(v)) {
-            throw error("must be finite, got " + v);
+            throw error("the number " + abbreviate(node.asText()) + " is beyond the range of double precision"
+                    + " (about ±1.8e308)");
         }
         return v;
+    }
+
+    /** A number in the range (docs/case-format.md, "Limits"). */
+    public double within(Limits.Range r) throws CaseException {
+        return inRange(number(), r);
+    }
+
+    /** A positive number in the range: a sign error is reported as such, then the range. */
+    public double positiveWithin(Limits.Range r) throws CaseException {
+        return inRange(positive(), r);
+    }
+
+    /** A number ≥ 0 in the range: a sign error is reported as such, then the range. */
+    public double nonNegativeWithin(Limits.Range r) throws CaseException {
+        return inRange(nonNegative(), r);
+    }
+
+    /** A whole number in the range. */
+    public int wholeWithin(Limits.Range r) throws CaseException {
+        if (!node.isIntegralNumber()) {
+            throw error("expected a whole number " + r.describe() + ", got " + describe(node));
+        }
+        if (!node.canConvertToLong() || !r.contains(node.longValue())) {
+            throw error("must lie " + r.describe() + " (see Limits in docs/case-format.md), got " + node.asText());
+        }
+        return (int) node.longValue();
+    }
+
+    /** The elements of an array, at most as many as the range allows. */
+    public List<JsonCursor> elementsWithin(Limits.Range r) throws CaseException {
+        if (node.isArray() && node.size() > r.max()) {
+            throw error("has " + node.size() + " entries; at most " + Limits.number(r.max()) + " are allowed here"
+                    + " (" + r.quantity() + ", see Limits in docs/case-format.md)");
+        }
+        return elements();
+    }
+
+    private double inRange(double v, Limits.Range r) throws CaseException {
+        if (!r.contains(v)) {
+            throw outOfRange(v, r);
+        }
+        return v;
+    }
+
+    /** The error for a value outside its range. */
+    public CaseException outOfRange(double v, Limits.Range r) {
+        return error("must lie " + r.describe() + " (see Limits in docs/case-format.md), got " + Limits.number(v)
+                + (r.unit().isEmpty() ? "" : " " + r.unit()));
     }
 
     public double positive() throws CaseException {
@@ -198,7 +247,7 @@ public final class JsonCursor {
     }
 
     public int positiveInt() throws CaseException {
-        if (!node.isIntegralNumber() || node.intValue() < 1) {
+        if (!node.isIntegralNumber() || !node.canConvertToInt() || node.intValue() < 1) {
             throw error("expected a positive whole number, got " + describe(node));
         }
         return node.intValue();

@@ -23,7 +23,7 @@ final class LinkAndEnvironmentReader {
         }
         JsonCursor e = o.get().allowOnly("name", "temperature_K", "temperature_C", "description");
         String name = e.field("name").nonEmptyText();
-        double t = TemperatureField.read(e, "temperature", true)
+        double t = TemperatureField.read(e, "temperature", Limits.ENVIRONMENT_TEMPERATURE_K)
                 .orElseThrow(() -> e.error("missing required key 'temperature_K' (or 'temperature_C')"));
         return new Environment(name, t);
     }
@@ -53,7 +53,7 @@ final class LinkAndEnvironmentReader {
             if (a.equals(b)) {
                 throw between.error("a conductive link needs two different surfaces");
             }
-            out.add(new ConductiveLink(a, b, l.field("conductance_W_K").positive()));
+            out.add(new ConductiveLink(a, b, l.field("conductance_W_K").positiveWithin(Limits.CONDUCTANCE_W_K)));
         }
         return out;
     }

@@ -97,7 +97,7 @@ final class MaterialReader {
                     JsonCursor one = el.get(i).allowOnly("temperature_K", "temperature_C", "wavelength_um",
                             "bandEdges_um", "emissivity");
                     one.exactlyOneOf("wavelength_um", "bandEdges_um");
-                    t[i] = TemperatureField.read(one, "temperature", false)
+                    t[i] = TemperatureField.read(one, "temperature")
                             .orElseThrow(() -> one.error("missing required key 'temperature_K' (or 'temperature_C')"));
                     if (i > 0 && !(t[i] > t[i - 1])) {
                         throw one.error("temperatures must increase: " + t[i] + " K after " + t[i - 1] + " K");
@@ -142,8 +142,8 @@ final class MaterialReader {
         }
         JsonCursor wc = s.field("wavelength_um");
         JsonCursor ec = s.field(valueKey);
-        List<JsonCursor> w = wc.elements();
-        List<JsonCursor> e = ec.elements();
+        List<JsonCursor> w = wc.elementsWithin(Limits.TABLE_POINTS);
+        List<JsonCursor> e = ec.elementsWithin(Limits.TABLE_POINTS);
         if (w.isEmpty()) {
             throw wc.error("needs at least one wavelength");
         }
@@ -153,7 +153,7 @@ final class MaterialReader {
         double[] wl = new double[w.size()];
         double[] em = new double[w.size()];
         for (int i = 0; i < wl.length; i++) {
-            wl[i] = w.get(i).positive();
+            wl[i] = w.get(i).positiveWithin(Limits.WAVELENGTH_UM);
             if (i > 0 && !(wl[i] > wl[i - 1])) {
                 throw w.get(i).error("wavelengths must increase: " + wl[i] + " µm after " + wl[i - 1] + " µm");
             }
@@ -165,8 +165,8 @@ final class MaterialReader {
     private static TabulatedEmissivity steps(JsonCursor s, String valueKey) throws CaseException {
         JsonCursor wc = s.field("bandEdges_um");
         JsonCursor ec = s.field(valueKey);
-        List<JsonCursor> w = wc.elements();
-        List<JsonCursor> e = ec.elements();
+        List<JsonCursor> w = wc.elementsWithin(Limits.TABLE_POINTS);
+        List<JsonCursor> e = ec.elementsWithin(Limits.TABLE_POINTS);
         if (e.size() != w.size() + 1) {
             throw ec.error("needs one more value than bandEdges_um has edges (" + (w.size() + 1) + "), got " + e.size());
         }
@@ -181,7 +181,7 @@ final class MaterialReader {
         double[] v = new double[2 * w.size()];
         double previous = 0;
         for (int i = 0; i < w.size(); i++) {
-            double edge = w.get(i).positive();
+            double edge = w.get(i).positiveWithin(Limits.WAVELENGTH_UM);
             if (i > 0 && !(edge > previous)) {
                 throw w.get(i).error("band edges must increase: " + edge + " µm after " + previous + " µm");
             }

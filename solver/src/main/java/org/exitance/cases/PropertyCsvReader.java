@@ -35,6 +35,7 @@ final class PropertyCsvReader {
         if (!Files.isRegularFile(csv)) {
             throw referrer.error("property file not found: " + csv);
         }
+        FileLimits.requireReadable(csv, referrer);
         CsvCells.Rows read;
         try {
             read = CsvCells.read(csv);
@@ -56,6 +57,7 @@ final class PropertyCsvReader {
         if (rows.isEmpty()) {
             throw new CaseException(csv, "", "no data rows");
         }
+        CsvCells.requireRowCount(csv, rows.size());
         Map<Double, List<double[]>> byT = new LinkedHashMap<>();
         Map<Double, Integer> firstLine = new LinkedHashMap<>();
         for (int r = 0; r < rows.size(); r++) {
@@ -64,6 +66,9 @@ final class PropertyCsvReader {
             double t = withT ? CsvCells.number(csv, line, "temperature_K", row) : Double.NaN;
             if (withT && !(t > 0)) {
                 throw new CaseException(csv, "", "line " + line + ": temperature_K must be above 0 K, got " + t);
+            }
+            if (withT && !Limits.TEMPERATURE_K.contains(t)) {
+                throw CsvCells.outOfRange(csv, line, "temperature_K", t, Limits.TEMPERATURE_K);
             }
             double w = CsvCells.number(csv, line, "wavelength_um", row);
             double e = CsvCells.number(csv, line, "emissivity", row);
@@ -81,6 +86,9 @@ final class PropertyCsvReader {
                 int line = (int) pts.get(i)[2];
                 if (!(w[i] > 0)) {
                     throw new CaseException(csv, "", "line " + line + ": wavelength_um must be positive, got " + w[i]);
+                }
+                if (!Limits.WAVELENGTH_UM.contains(w[i])) {
+                    throw CsvCells.outOfRange(csv, line, "wavelength_um", w[i], Limits.WAVELENGTH_UM);
                 }
                 if (i > 0 && !(w[i] > w[i - 1])) {
                     throw new CaseException(csv, "", "line " + line + ": wavelengths must increase, got "

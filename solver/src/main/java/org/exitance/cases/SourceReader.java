@@ -29,22 +29,14 @@ final class SourceReader {
     private static SourcePlacement.Planet planet(JsonCursor p) throws CaseException {
         p.allowOnly("direction", "altitude_m", "radius_m", "shadowing");
         Vec3 toward = direction(p.field("direction"));
-        double altitude = p.field("altitude_m").positive();
-        double radius = p.has("radius_m") ? p.field("radius_m").positive() : PlanetViewFactor.EARTH_RADIUS_M;
+        double altitude = p.field("altitude_m").positiveWithin(Limits.ALTITUDE_M);
+        double radius = p.has("radius_m") ? p.field("radius_m").positiveWithin(Limits.PLANET_RADIUS_M) : PlanetViewFactor.EARTH_RADIUS_M;
         boolean shadowing = p.has("shadowing") && p.field("shadowing").bool();
         return new SourcePlacement.Planet(toward, altitude, radius, shadowing);
     }
 
     private static Vec3 direction(JsonCursor c) throws CaseException {
-        double[] v = c.numbers();
-        if (v.length != 3) {
-            throw c.error("expected three numbers [x, y, z], got " + v.length);
-        }
-        Vec3 d = new Vec3(v[0], v[1], v[2]);
-        if (!(d.length() > 0)) {
-            throw c.error("a direction must not be zero");
-        }
-        return d.normalized();
+        return GeometryNumbers.direction(c).normalized();
     }
 
     /**
@@ -68,8 +60,8 @@ final class SourceReader {
             IrradiationSource spectrum;
             double irradiance;
             if (which.equals("blackbody_K")) {
-                spectrum = new BlackbodySource(spec.field("blackbody_K").positive());
-                irradiance = s.field("irradiance_W_m2").nonNegative();
+                spectrum = new BlackbodySource(spec.field("blackbody_K").positiveWithin(Limits.SOURCE_TEMPERATURE_K));
+                irradiance = s.field("irradiance_W_m2").nonNegativeWithin(Limits.IRRADIANCE_W_M2);
             } else {
                 JsonCursor ref = spec.field("csv");
                 Path csv = caseDir.resolve(ref.nonEmptyText()).normalize();
@@ -77,8 +69,13 @@ final class SourceReader {
                     throw ref.error("spectrum file not found: " + csv);
                 }
                 SourceSpectrum table = SourceSpectrumCsvReader.read(csv);
-                irradiance = s.has("irradiance_W_m2") ? s.field("irradiance_W_m2").nonNegative()
+                irradiance = s.has("irradiance_W_m2") ? s.field("irradiance_W_m2").nonNegativeWithin(Limits.IRRADIANCE_W_M2)
                         : table.totalIrradianceWM2();
+                if (!Limits.IRRADIANCE_W_M2.contains(irradiance)) {
+                    throw ref.error("the spectrum in " + csv.getFileName() + " integrates to "
+                            + Limits.number(irradiance) + " W/m²; an irradiance must lie "
+                            + Limits.IRRADIANCE_W_M2.describe() + " (see Limits in docs/case-format.md)");
+                }
                 spectrum = table;
             }
             Map<String, Double> incidence = Map.of();

@@ -35,6 +35,7 @@ public final class SourceSpectrumCsvReader {
         if (!Files.isRegularFile(csv)) {
             throw new CaseException(csv, "", "not a regular file");
         }
+        FileLimits.requireReadable(csv, null);
         if (CsvCells.headerLine(csv) < 0) {
             throw new CaseException(csv, "", "empty: the first line that is not a comment must be '" + HEADER + "'");
         }
@@ -58,6 +59,7 @@ public final class SourceSpectrumCsvReader {
         if (rows.size() < 2) {
             throw new CaseException(csv, "", "needs at least two data rows, got " + rows.size());
         }
+        CsvCells.requireRowCount(csv, rows.size());
         double[] w = new double[rows.size()];
         double[] g = new double[rows.size()];
         for (int r = 0; r < rows.size(); r++) {
@@ -70,12 +72,18 @@ public final class SourceSpectrumCsvReader {
             if (!(w[r] > 0)) {
                 throw new CaseException(csv, "", "line " + line + ": wavelength_um must be positive, got " + w[r]);
             }
+            if (!Limits.WAVELENGTH_UM.contains(w[r])) {
+                throw CsvCells.outOfRange(csv, line, "wavelength_um", w[r], Limits.WAVELENGTH_UM);
+            }
             if (r > 0 && !(w[r] > w[r - 1])) {
                 throw new CaseException(csv, "", "line " + line + ": wavelengths must increase, got " + w[r]
                         + " µm after " + w[r - 1] + " µm");
             }
             if (g[r] < 0) {
                 throw new CaseException(csv, "", "line " + line + ": irradiance_W_m2_um must not be negative, got " + g[r]);
+            }
+            if (!Limits.SPECTRAL_IRRADIANCE_W_M2_UM.contains(g[r])) {
+                throw CsvCells.outOfRange(csv, line, "irradiance_W_m2_um", g[r], Limits.SPECTRAL_IRRADIANCE_W_M2_UM);
             }
         }
         try {

@@ -24,7 +24,7 @@ final class SurfaceReader {
      */
     static List<EnclosureSurface> read(JsonCursor arr, Map<String, Material> materials,
                                        Map<String, Double> geometryAreas) throws CaseException {
-        List<JsonCursor> el = arr.elements();
+        List<JsonCursor> el = arr.elementsWithin(Limits.FACETS);
         if (el.isEmpty()) {
             throw arr.error("needs at least one surface");
         }
@@ -51,7 +51,7 @@ final class SurfaceReader {
             String otherFace = s.has("otherFace") ? s.field("otherFace").nonEmptyText() : null;
             BoundaryCondition bc = otherFace != null && WindowFaces.conditionLeftOut(s)
                     ? new BoundaryCondition.OnOtherFace() : boundary(s);
-            double initial = TemperatureField.read(s, "initialTemperature", false).orElse(Double.NaN);
+            double initial = TemperatureField.read(s, "initialTemperature").orElse(Double.NaN);
             if (!Double.isNaN(initial) && !bc.temperatureUnknown()) {
                 throw s.error("initialTemperature is only for surfaces whose temperature is unknown"
                         + (otherFace != null ? " (on a node with two faces, give it on the face with the condition)" : ""));
@@ -77,7 +77,7 @@ final class SurfaceReader {
     /** Area of a surface: given in the case, or (for a geometry case) from its facets. */
     private static double area(JsonCursor s, String name, Map<String, Double> geometryAreas) throws CaseException {
         if (geometryAreas == null) {
-            return s.field("area_m2").positive();
+            return s.field("area_m2").positiveWithin(Limits.AREA_M2);
         }
         if (s.has("area_m2")) {
             throw s.field("area_m2").error("the area of a surface comes from the geometry; leave area_m2 out");
@@ -100,13 +100,13 @@ final class SurfaceReader {
         switch (which) {
             case "temperature_K":
             case "temperature_C":
-                return new BoundaryCondition.FixedTemperature(TemperatureField.read(s, "temperature", false).orElseThrow());
+                return new BoundaryCondition.FixedTemperature(TemperatureField.read(s, "temperature").orElseThrow());
             case "netHeat_W":
-                return new BoundaryCondition.FixedNetHeat(s.field("netHeat_W").number());
+                return new BoundaryCondition.FixedNetHeat(s.field("netHeat_W").within(Limits.HEAT_W));
             case "netFlux_W_m2":
-                return new BoundaryCondition.FixedNetFlux(s.field("netFlux_W_m2").number());
+                return new BoundaryCondition.FixedNetFlux(s.field("netFlux_W_m2").within(Limits.FLUX_W_M2));
             case "dissipation_W":
-                return new BoundaryCondition.HeatInput(s.field("dissipation_W").number());
+                return new BoundaryCondition.HeatInput(s.field("dissipation_W").within(Limits.HEAT_W));
             default:
                 JsonCursor a = s.field("adiabatic");
                 if (!a.bool()) {
@@ -118,8 +118,8 @@ final class SurfaceReader {
 
     private static Convection convection(JsonCursor c) throws CaseException {
         c.allowOnly("coefficient_W_m2K", "fluidTemperature_K", "fluidTemperature_C");
-        double h = c.field("coefficient_W_m2K").nonNegative();
-        double tf = TemperatureField.read(c, "fluidTemperature", false)
+        double h = c.field("coefficient_W_m2K").nonNegativeWithin(Limits.CONVECTION_W_M2K);
+        double tf = TemperatureField.read(c, "fluidTemperature")
                 .orElseThrow(() -> c.error("missing required key 'fluidTemperature_K' (or 'fluidTemperature_C')"));
         return new Convection(h, tf);
     }

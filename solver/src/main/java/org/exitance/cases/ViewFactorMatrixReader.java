@@ -29,9 +29,9 @@ final class ViewFactorMatrixReader {
     static double[][] read(JsonCursor vf, List<EnclosureSurface> surfaces, boolean open, List<String> warnings)
             throws CaseException {
         vf.allowOnly("matrix", "rowSumTolerance", "reciprocityTolerance");
-        double rowTol = vf.has("rowSumTolerance") ? vf.field("rowSumTolerance").positive() : DEFAULT_ROW_SUM_TOLERANCE;
+        double rowTol = vf.has("rowSumTolerance") ? vf.field("rowSumTolerance").positiveWithin(Limits.MATRIX_TOLERANCE) : DEFAULT_ROW_SUM_TOLERANCE;
         double recTol = vf.has("reciprocityTolerance")
-                ? vf.field("reciprocityTolerance").positive() : DEFAULT_RECIPROCITY_TOLERANCE;
+                ? vf.field("reciprocityTolerance").positiveWithin(Limits.MATRIX_TOLERANCE) : DEFAULT_RECIPROCITY_TOLERANCE;
         JsonCursor m = vf.field("matrix");
         List<JsonCursor> rows = m.elements();
         int n = surfaces.size();

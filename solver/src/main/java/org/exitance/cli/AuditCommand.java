@@ -70,6 +70,7 @@ final class AuditCommand implements Callable<Integer> {
         }
         BandSet override = bandEdges.bands();
         double tolerance = bandTolerance.fraction();
+        OutputTarget.check(output.file(), force);
         PreparedCase c = Runs.load(caseFile);
         RadiationCase base = c.model();
         List<String> names = base.loadCases().stream().map(LoadCase::name).toList();
@@ -96,11 +97,11 @@ final class AuditCommand implements Callable<Integer> {
             for (AuditResult a : audits) {
                 Path file = audits.size() == 1 ? plot : plot.resolveSibling(plot.getFileName().toString()
                         .replaceAll("(?i)\\.png$", "") + "-" + a.name().replaceAll("[^A-Za-z0-9_.-]", "_") + ".png");
-                OutputTarget.write(file, force.on(), null, ps -> {
+                OutputTarget.write(file, force, null, ps -> {
                     try {
                         org.exitance.report.AuditPlot.writePng(base.title(), a, ps);
                     } catch (java.io.IOException e) {
-                        throw new UserError(file + ": cannot write the plot: " + e.getMessage(), ExitCodes.BAD_INPUT);
+                        throw new UserError(file + ": cannot write the plot: " + OutputTarget.problem(e), ExitCodes.BAD_INPUT);
                     }
                 });
             }
@@ -109,9 +110,9 @@ final class AuditCommand implements Callable<Integer> {
                 StandardCharsets.UTF_8);
         if (json.on()) {
             String text = SolveJsonWriter.MAPPER.writeValueAsString(AuditJsonWriter.toJson(caseFile.toString(), audits));
-            OutputTarget.write(output.file(), force.on(), stdout, ps -> ps.println(text));
+            OutputTarget.write(output.file(), force, stdout, ps -> ps.println(text));
         } else {
-            OutputTarget.write(output.file(), force.on(), stdout, ps -> AuditTableWriter.write(base.title(), audits, ps));
+            OutputTarget.write(output.file(), force, stdout, ps -> AuditTableWriter.write(base.title(), audits, ps));
         }
         return ExitCodes.OK;
     }

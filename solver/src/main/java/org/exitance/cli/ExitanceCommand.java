@@ -2,6 +2,7 @@ package org.exitance.cli;
 
 import java.io.PrintWriter;
 import org.exitance.cases.CaseException;
+import org.exitance.model.MemoryBudget;
 import org.exitance.report.Version;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -54,7 +55,13 @@ public final class ExitanceCommand implements Runnable {
             err.flush();
             return exitCode(ex);
         });
-        int code = cl.execute(args);
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (OutOfMemoryError | StackOverflowError e) { // thrown past picocli, which handles exceptions only
+            err.println("exitance: " + describe(e));
+            code = exitCode(e);
+        }
         out.flush();
         err.flush();
         return code;
@@ -68,12 +75,30 @@ public final class ExitanceCommand implements Runnable {
         return b.toString();
     }
 
+    /** One line for any failure: the user's error as it is, memory and internal errors in words. */
     static String describe(Throwable ex) {
         if (ex instanceof CaseException || ex instanceof UserError) {
             return ex.getMessage();
         }
-        String m = ex.getMessage();
-        return "internal error: " + ex.getClass().getSimpleName() + (m == null ? "" : ": " + m.lines().findFirst().orElse(""))
+        MemoryBudget.Exceeded budget = cause(ex, MemoryBudget.Exceeded.class);
+        if (budget != null) {
+            return budget.getMessage();
+        }
+        if (cause(ex, OutOfMemoryError.class) != null) {
+            return "out of memory: the case needs more than the " + Runtime.getRuntime().maxMemory() / 1_000_000
+                    + " MB the JVM may use; raise the limit, e.g. EXITANCE_JAVA_OPTS=-Xmx16g, or make the model"
+                    + " smaller (fewer facets, surfaces or bands)";
+        }
+        if (cause(ex, StackOverflowError.class) != null) {
+            return "internal error: the program ran out of stack (set EXITANCE_DEBUG=1 for a stack trace; please"
+                    + " report it with the case)";
+        }
+        Throwable root = ex;
+        while (root.getCause() != null && root.getCause() != root) {
+            root = root.getCause();
+        }
+        String m = root.getMessage() == null ? null : root.getMessage().lines().findFirst().orElse(null);
+        return "internal error: " + (m == null || m.isBlank() ? "an unexpected " + root.getClass().getSimpleName() : m)
                 + " (set EXITANCE_DEBUG=1 for a stack trace; please report it with the case)";
     }
 
@@ -84,7 +109,20 @@ public final class ExitanceCommand implements Runnable {
         if (ex instanceof UserError u) {
             return u.exitCode();
         }
+        if (cause(ex, MemoryBudget.Exceeded.class) != null || cause(ex, OutOfMemoryError.class) != null) {
+            return ExitCodes.BAD_INPUT;
+        }
         return ExitCodes.INTERNAL;
+    }
+
+    /** The first throwable of the type in the chain of causes, or null. */
+    private static <T extends Throwable> T cause(Throwable ex, Class<T> type) {
+        for (Throwable t = ex; t != null; t = t.getCause() == t ? null : t.getCause()) {
+            if (type.isInstance(t)) {
+                return type.cast(t);
+            }
+        }
+        return null;
     }
 
     /** Version from the build. */

@@ -119,10 +119,10 @@ final class MaterialCommand implements Callable<Integer> {
         if (json.on()) {
             String text = SolveJsonWriter.MAPPER.writeValueAsString(
                     MaterialJsonWriter.toJson(file.toString(), mf.isCase(), mf.title(), surveys));
-            OutputTarget.write(output.file(), force.on(), stdout, ps -> ps.println(text));
+            OutputTarget.write(output.file(), force, stdout, ps -> ps.println(text));
         } else {
             String label = file + (mf.isCase() ? " (case)" : " (material file)");
-            OutputTarget.write(output.file(), force.on(), stdout, ps -> MaterialTableWriter.write(label, mf.title(), surveys, ps));
+            OutputTarget.write(output.file(), force, stdout, ps -> MaterialTableWriter.write(label, mf.title(), surveys, ps));
         }
         return ExitCodes.OK;
     }
@@ -144,9 +144,7 @@ final class MaterialCommand implements Callable<Integer> {
             }
         }
         for (Path p : new Path[] {plot, output.file()}) {
-            if (p != null && Files.exists(p) && !force.on()) {
-                throw new UserError(p + ": exists; not overwritten (add --force to replace it)", ExitCodes.BAD_INPUT);
-            }
+            OutputTarget.check(p, force);
         }
     }
 
@@ -184,11 +182,11 @@ final class MaterialCommand implements Callable<Integer> {
         }
         String title = "Material " + m.name() + ": spectral emissivity and Planck curves";
         String subtitle = sub;
-        OutputTarget.write(plot, force.on(), stdout, ps -> {
+        OutputTarget.write(plot, force, stdout, ps -> {
             try {
                 SpectrumPlot.writePng(title, subtitle, curves, ps);
             } catch (IOException e) {
-                throw new UserError(plot + ": cannot write the plot: " + e.getMessage(), ExitCodes.BAD_INPUT);
+                throw new UserError(plot + ": cannot write the plot: " + OutputTarget.problem(e), ExitCodes.BAD_INPUT);
             }
             if (ps.checkError()) {
                 throw new UserError(plot + ": cannot write the plot", ExitCodes.BAD_INPUT);

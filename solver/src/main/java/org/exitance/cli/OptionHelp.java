@@ -18,6 +18,7 @@ public final class OptionHelp extends ListResourceBundle {
             {"exitance.solve.json", "Write the machine-readable result (JSON) instead of tables."},
             {"exitance.solve.output", "Write to FILE instead of standard output (never overwrites without --force)."},
             {"exitance.solve.force", "Allow --output to replace an existing file."},
+            {"exitance.solve.create-dirs", "Create the directory of --output when it does not exist (without this option a missing directory is an error)."},
             {"exitance.solve.band-edges", "Interior band edges in µm, overriding the case and the default rule"
                     + " (e.g. 1.5,3,6)."},
             {"exitance.solve.gray", "Solve with one band (the gray solution)."},
@@ -25,6 +26,7 @@ public final class OptionHelp extends ListResourceBundle {
             {"exitance.audit.json", "Write the audit as JSON."},
             {"exitance.audit.output", "Write to FILE (never overwrites without --force)."},
             {"exitance.audit.force", "Allow --output and --plot to replace existing files."},
+            {"exitance.audit.create-dirs", "Create the directory of --output or --plot when it does not exist (without this option a missing directory is an error)."},
             {"exitance.audit.band-edges", "Reference band edges in µm (default: the case's, or the default rule)."},
             {"exitance.audit.band-tolerance", BAND_TOLERANCE},
             {"exitance.sensitivity.json", "Write the ranking as JSON."},
@@ -32,8 +34,10 @@ public final class OptionHelp extends ListResourceBundle {
             {"exitance.material.json", "Write JSON instead of tables."},
             {"exitance.material.output", "Write the table or JSON to FILE instead of standard output."},
             {"exitance.material.force", "Allow --output and --plot to replace existing files."},
+            {"exitance.material.create-dirs", "Create the directory of --output or --plot when it does not exist (without this option a missing directory is an error)."},
             {"exitance.view-factors.json", "Write the matrix and diagnostics as JSON."},
             {"exitance.view-factors.force", "Allow --csv to replace an existing file."},
+            {"exitance.view-factors.create-dirs", "Create the directory of --csv when it does not exist (without this option a missing directory is an error)."},
             {"exitance.verify.json", "Write the verdicts as JSON."},
         };
     }

@@ -6,6 +6,7 @@ import org.exitance.pipeline.CasePipeline;
 import org.exitance.pipeline.PreparedCase;
 import org.exitance.pipeline.ViewFactorStage;
 import org.exitance.model.BandSet;
+import org.exitance.model.MemoryBudget;
 import org.exitance.network.NetworkConvergenceException;
 import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
@@ -69,6 +70,8 @@ final class Runs {
             throw new UserError(c.file() + ": no convergence: " + e.getMessage() + " (after " + e.iterations()
                     + " Newton iterations, residual " + String.format(java.util.Locale.ROOT, "%.3g", e.residualW())
                     + " W); no result reported", ExitCodes.NO_CONVERGENCE);
+        } catch (MemoryBudget.Exceeded e) {
+            throw new UserError(c.file() + ": " + e.getMessage(), ExitCodes.BAD_INPUT);
         } catch (NetworkConvergenceException e) {
             throw new UserError(c.file() + ": no convergence in a band's radiosity solve: " + e.getMessage()
                     + "; no result reported", ExitCodes.NO_CONVERGENCE);

@@ -36,13 +36,25 @@ final class SharedOptions {
         }
     }
 
-    /** {@code --force}: files the command writes may replace existing ones. */
+    /**
+     * How the command may write files: {@code --force} lets them replace existing ones,
+     * {@code --create-dirs} lets a missing directory of theirs be created (without it, a file
+     * in a directory that does not exist is an error).
+     */
     static final class Force {
         @Option(names = "--force", descriptionKey = "force", description = "Allow replacing existing files.")
         private boolean force;
 
+        @Option(names = "--create-dirs", descriptionKey = "create-dirs",
+                description = "Create the missing directories of the files written.")
+        private boolean createDirs;
+
         boolean on() {
             return force;
+        }
+
+        boolean createDirs() {
+            return createDirs;
         }
     }
 

@@ -70,6 +70,7 @@ final class SolveCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         BandSet override = bandEdges.bands(gray);
+        OutputTarget.check(output.file(), force);
         PreparedCase c = Runs.load(caseFile);
         List<LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
                 bandTolerance.fraction());
@@ -92,15 +93,15 @@ final class SolveCommand implements Callable<Integer> {
                 }
             }
             String text = SolveJsonWriter.MAPPER.writeValueAsString(node);
-            OutputTarget.write(output.file(), force.on(), stdout, ps -> ps.println(text));
+            OutputTarget.write(output.file(), force, stdout, ps -> ps.println(text));
             if (!quiet) {
                 c.warnings().forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
             }
         } else if (variants) {
-            OutputTarget.write(output.file(), force.on(), stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
+            OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
                     AuditTableWriter.summaryLines(audits), ps));
         } else {
-            OutputTarget.write(output.file(), force.on(), stdout, ps -> SolveTableWriter.write(results.get(0).result(),
+            OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
                     c.warnings(), AuditTableWriter.summaryLines(audits), ps));
         }
         return ExitCodes.OK;

@@ -34,7 +34,11 @@ final class VerdictJson {
                 co.put("target", c.target());
                 co.put("quantity", c.quantity());
                 co.put("expected", c.expected());
-                co.put("computed", c.computed());
+                if (Double.isFinite(c.computed())) {
+                    co.put("computed", c.computed());
+                } else {
+                    co.putNull("computed"); // the solve did not run
+                }
                 co.put("allowed", c.allowed());
                 co.put("passed", c.passed());
             }

@@ -53,6 +53,7 @@ final class ViewFactorsCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        OutputTarget.check(csv, force);
         Progress progress = Progress.onStderr(!quiet, spec.commandLine().getErr());
         PreparedCase c;
         try {
@@ -68,7 +69,7 @@ final class ViewFactorsCommand implements Callable<Integer> {
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);
         if (csv != null) {
-            OutputTarget.write(csv, force.on(), stdout, ps -> writeCsv(v, ps));
+            OutputTarget.write(csv, force, stdout, ps -> writeCsv(v, ps));
         }
         if (json.on()) {
             stdout.println(SolveJsonWriter.MAPPER.writeValueAsString(toJson(v, caseFile)));

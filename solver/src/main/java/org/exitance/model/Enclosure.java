@@ -67,7 +67,8 @@ public final class Enclosure {
         }
         for (ConductiveLink l : links) {
             if (!names.contains(l.surfaceA()) || !names.contains(l.surfaceB())) {
-                throw new IllegalArgumentException("conductive link names an unknown surface: " + l);
+                throw new IllegalArgumentException("a conductive link between '" + l.surfaceA() + "' and '" + l.surfaceB()
+                        + "' names an unknown surface");
             }
         }
         checkWindows(this.surfaces);

@@ -37,6 +37,12 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
         return false;
     }
 
+    /** A few work vectors of N doubles: the operator is applied from F itself. */
+    @Override
+    public long preparedBytes(int n) {
+        return 16L * Double.BYTES * n;
+    }
+
     /** Opaque enclosures only: a window's coupling breaks the symmetry this method needs. */
     @Override
     public Prepared prepare(double[] f, int n, double[] rho, double[] area, WindowCoupling windows) {

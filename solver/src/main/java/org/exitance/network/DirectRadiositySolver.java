@@ -26,6 +26,13 @@ public final class DirectRadiositySolver implements RadiositySolver {
         return true;
     }
 
+    /** The operator and its LU factors, N² doubles each. */
+    @Override
+    public long preparedBytes(int n) {
+        double bytes = 2.0 * Double.BYTES * n * (double) n + 16.0 * Double.BYTES * n;
+        return bytes >= Long.MAX_VALUE ? Long.MAX_VALUE : (long) bytes;
+    }
+
     @Override
     public Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2,
                             WindowCoupling windows) {

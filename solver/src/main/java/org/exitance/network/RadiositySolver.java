@@ -19,6 +19,12 @@ public interface RadiositySolver {
     /** The strategy's name for reports, e.g. "direct LU". */
     String name();
 
+    /**
+     * Bytes one prepared band operator of N surfaces holds at its peak (the estimate the
+     * memory check makes before every band is prepared); saturates at Long.MAX_VALUE.
+     */
+    long preparedBytes(int n);
+
     /** Whether the strategy solves enclosures with windows (whose coupled matrix is unsymmetric). */
     boolean supportsWindows();
 

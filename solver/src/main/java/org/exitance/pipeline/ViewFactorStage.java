@@ -19,6 +19,7 @@ import org.exitance.geometry.viewfactor.ProgressListener;
 import org.exitance.geometry.viewfactor.SmoothingReport;
 import org.exitance.geometry.viewfactor.ViewFactorCalculator;
 import org.exitance.geometry.viewfactor.ViewFactorResult;
+import org.exitance.model.MemoryBudget;
 
 /**
  * Gets a geometry's surface view factors: from the cache beside the case when its geometry hash
@@ -67,6 +68,12 @@ public final class ViewFactorStage {
                 return hit;
             }
         }
+        int n = g.scene().facetCount();
+        try {
+            MemoryBudget.require(what(n), memoryNeed(n, facets));
+        } catch (MemoryBudget.Exceeded e) {
+            throw new CaseException(caseFile, "$.geometry", e.getMessage());
+        }
         ViewFactorResult r;
         try {
             r = ViewFactorCalculator.compute(g.scene(), g.options(), req.progress(), req.cancel());
@@ -80,6 +87,39 @@ public final class ViewFactorStage {
             write(cache, out);
         }
         return out;
+    }
+
+    /**
+     * Bytes the view factors of a geometry need at their peak: the facet matrix (N² doubles) and
+     * the per-chunk row errors; for a case solved on facets also the facet factors kept for the
+     * solve and their copy in the solve's order.
+     *
+     * @param facets   facets of the geometry
+     * @param onFacets whether the case is solved on facets
+     */
+    public static long memoryNeed(int facets, boolean onFacets) {
+        long matrix = MemoryBudget.squareMatrixBytes(facets);
+        long chunks = MemoryBudget.saturatedProduct(64L * facets, MemoryBudget.DOUBLE_BYTES);
+        return MemoryBudget.saturatedSum(MemoryBudget.saturatedProduct(matrix, onFacets ? 3 : 1), chunks);
+    }
+
+    /**
+     * The memory check of {@link #obtain} against given figures, so that a model can be tried
+     * under a small heap without allocating it.
+     *
+     * @throws CaseException at {@code $.geometry} when the view factors do not fit
+     */
+    public static void requireMemory(Path caseFile, int facets, boolean onFacets, long availableBytes, long maxBytes)
+            throws CaseException {
+        try {
+            MemoryBudget.require(what(facets), memoryNeed(facets, onFacets), availableBytes, maxBytes);
+        } catch (MemoryBudget.Exceeded e) {
+            throw new CaseException(caseFile, "$.geometry", e.getMessage());
+        }
+    }
+
+    private static String what(int facets) {
+        return "the view factors of " + facets + " facets";
     }
 
     private static ComputedViewFactors summarize(ViewFactorResult r, boolean facets) {

@@ -1,5 +1,6 @@
 package org.exitance.report;
 
+import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -14,11 +15,18 @@ import org.exitance.result.SolverReport;
 import org.exitance.result.SurfaceResult;
 
 /**
- * The machine-readable result (documented in docs/output-format.md). Keys carry their units;
+ * The machine-readable result (documented in docs/command-line.md). Keys carry their units;
  * an unbounded band edge is written as null.
  */
 public final class SolveJsonWriter {
-    public static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    /**
+     * The mapper every JSON writer shares. It never writes NaN or Infinity, neither as a token nor
+     * as a string: writing a non-finite number fails, naming its JSON path (a bug, reported with
+     * exit code 1); a value that does not apply is written as null by the writer itself.
+     */
+    public static final ObjectMapper MAPPER = new ObjectMapper(JsonFactory.builder()
+            .addDecorator((factory, generator) -> new FiniteNumbersOnly(generator)).build())
+            .enable(SerializationFeature.INDENT_OUTPUT);
 
     private SolveJsonWriter() {
     }

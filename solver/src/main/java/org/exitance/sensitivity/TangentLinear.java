@@ -4,6 +4,7 @@ import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.exitance.model.BandSet;
+import org.exitance.model.MemoryBudget;
 import org.exitance.model.RadiationCase;
 import org.exitance.thermal.ConvergedState;
 import org.exitance.thermal.IllPosedCaseException;
@@ -59,6 +60,8 @@ public final class TangentLinear {
         for (int a = 0; a < m; a++) {
             faces[a] = s.faces(a);
         }
+        MemoryBudget.require("the emissivity sensitivities of " + n + " surfaces in " + nb + " bands",
+                MemoryBudget.saturatedProduct(MemoryBudget.saturatedProduct(2L * n * n, nb), MemoryBudget.DOUBLE_BYTES));
         double[][][] dq = new double[n][n][nb];
         double[][][] dT = new double[n][n][nb];
         for (int k = 0; k < nb; k++) {

@@ -2,6 +2,7 @@ package org.exitance.thermal;
 
 import org.ejml.data.DMatrixRMaj;
 import org.exitance.bands.BandLoop;
+import org.exitance.model.MemoryBudget;
 
 /**
  * The exact Jacobian of the node heat balances with band properties held fixed. Each band is
@@ -20,6 +21,10 @@ final class Jacobian {
     static double[][][] nodeSensitivities(Problem p, BandLoop loop) {
         int m = p.unknown.length;
         int nb = loop.bands().size();
+        long n = p.area.length;
+        MemoryBudget.require("the Newton sensitivities of " + m + " unknown temperatures in " + nb + " bands over " + n
+                + " surfaces", MemoryBudget.saturatedProduct(MemoryBudget.saturatedProduct((long) nb * m, n)
+                + (long) m * m, MemoryBudget.DOUBLE_BYTES));
         double[][][] sens = new double[nb][m][];
         for (int k = 0; k < nb; k++) {
             for (int b = 0; b < m; b++) {

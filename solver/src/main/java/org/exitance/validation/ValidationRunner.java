@@ -12,6 +12,8 @@ import org.exitance.pipeline.PreparedCase;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.thermal.CaseSolver;
+import org.exitance.thermal.IllPosedCaseException;
+import org.exitance.thermal.SolveFailedException;
 
 /**
  * Runs validation cases: each carries reference values from a named published source and a
@@ -48,9 +50,15 @@ public final class ValidationRunner {
         SolveResult r;
         try {
             r = CaseSolver.solve(c.model(), null);
+        } catch (SolveFailedException e) {
+            return new CaseVerdict(file, c.model().title(), ev.source(), List.of(),
+                    "no convergence: " + e.getMessage(), Double.NaN);
+        } catch (IllPosedCaseException e) {
+            return new CaseVerdict(file, c.model().title(), ev.source(), List.of(), e.getMessage(), Double.NaN);
         } catch (RuntimeException e) {
             return new CaseVerdict(file, c.model().title(), ev.source(), List.of(),
-                    e.getClass().getSimpleName() + ": " + e.getMessage(), Double.NaN);
+                    "the solve failed: " + (e.getMessage() == null ? "an unexpected " + e.getClass().getSimpleName()
+                            : e.getMessage()), Double.NaN);
         }
         List<CheckOutcome> out = new ArrayList<>();
         for (Expectation x : ev.values()) {
