@@ -13,9 +13,6 @@ import org.exitance.model.Material;
  * {@code {"effectiveEmittance": 0.02, "outerMaterial": "outer_film"}}.
  */
 final class CoverReader {
-    /** Most layers in one pack. */
-    static final int MAX_LAYERS = 500;
-
     private CoverReader() {
     }
 
@@ -45,8 +42,8 @@ final class CoverReader {
             if (form.equals("layers")) {
                 JsonCursor n = c.field("layers");
                 int layers = n.positiveInt();
-                if (layers > MAX_LAYERS) {
-                    throw n.error("at most " + MAX_LAYERS + " layers, got " + layers);
+                if (!Limits.COVER_LAYERS.contains(layers)) {
+                    throw n.error("must be " + Limits.COVER_LAYERS.describe() + ", got " + layers);
                 }
                 cover = new Cover(layers, material(c.field("layerMaterial"), materials), outer, Double.NaN);
             } else {

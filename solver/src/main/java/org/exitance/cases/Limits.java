@@ -104,12 +104,15 @@ public final class Limits {
     public static final Range FILE_BYTES = new Range("file size", 0, 256L * 1024 * 1024, "bytes");
 
     /** Every range, in the order of the table in docs/case-format.md. */
+    /** Layers of one insulation blanket or shield pack. */
+    public static final Range COVER_LAYERS = new Range("cover layers", 1, 500, "");
+
     public static final List<Range> ALL = List.of(TEMPERATURE_K, ENVIRONMENT_TEMPERATURE_K, SOURCE_TEMPERATURE_K,
             AREA_M2, COORDINATE_M, LENGTH_M, RADIUS_OR_ZERO_M, DIRECTION_LENGTH, ANGLE_DEG, MESH_SCALE_M,
             PLANET_RADIUS_M, ALTITUDE_M, WAVELENGTH_UM, CONDUCTANCE_W_K, CONVECTION_W_M2K, IRRADIANCE_W_M2,
             SPECTRAL_IRRADIANCE_W_M2_UM, HEAT_W, FLUX_W_M2, FRACTION, TEMPERATURE_TOLERANCE_K,
             RELATIVE_HEAT_TOLERANCE, MATRIX_TOLERANCE, PAIR_TOLERANCE, NEWTON_ITERATIONS, PROPERTY_ITERATIONS,
-            VISIBILITY_ORDER, THREADS, DIVISIONS, FACETS, BAND_EDGES, TABLE_POINTS, FILE_BYTES);
+            VISIBILITY_ORDER, THREADS, DIVISIONS, FACETS, BAND_EDGES, TABLE_POINTS, FILE_BYTES, COVER_LAYERS);
 
     private Limits() {
     }

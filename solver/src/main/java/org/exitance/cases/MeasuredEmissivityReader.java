@@ -103,7 +103,7 @@ final class MeasuredEmissivityReader {
     private static SpectralEmissivity directional(JsonCursor d) throws CaseException {
         d.allowOnly("angle_deg", "emissivity", "wavelength_um");
         JsonCursor ac = d.field("angle_deg");
-        List<JsonCursor> a = ac.elements();
+        List<JsonCursor> a = ac.elementsWithin(Limits.TABLE_POINTS);
         if (a.isEmpty()) {
             throw ac.error("needs at least one angle");
         }
@@ -119,7 +119,7 @@ final class MeasuredEmissivityReader {
             return new GrayEmissivity(DirectionalEmissivity.hemispherical(deg, row(ec, deg.length)));
         }
         JsonCursor wc = d.field("wavelength_um");
-        List<JsonCursor> w = wc.elements();
+        List<JsonCursor> w = wc.elementsWithin(Limits.TABLE_POINTS);
         List<JsonCursor> rows = ec.elements();
         if (w.isEmpty() || rows.size() != w.size()) {
             throw ec.error("needs one row of " + deg.length + " values per wavelength (" + w.size() + "), got "
@@ -128,7 +128,7 @@ final class MeasuredEmissivityReader {
         double[] wl = new double[w.size()];
         double[] e = new double[w.size()];
         for (int i = 0; i < wl.length; i++) {
-            wl[i] = w.get(i).positive();
+            wl[i] = w.get(i).positiveWithin(Limits.WAVELENGTH_UM);
             if (i > 0 && !(wl[i] > wl[i - 1])) {
                 throw w.get(i).error("wavelengths must increase: " + wl[i] + " µm after " + wl[i - 1] + " µm");
             }
