@@ -32,6 +32,15 @@ final class PropertyCsvReader {
      * @return tables sorted by temperature (one table with NaN temperature when there is no temperature column)
      */
     static List<Table> read(Path csv, JsonCursor referrer) throws CaseException {
+        return read(csv, referrer, "emissivity");
+    }
+
+    /**
+     * As {@link #read(Path, JsonCursor)} for a property column of another name: {@code
+     * transmissivity} or {@code reflectivity} of a window (the header is then
+     * {@code wavelength_um,<column>}, with an optional leading {@code temperature_K}).
+     */
+    static List<Table> read(Path csv, JsonCursor referrer, String column) throws CaseException {
         if (!Files.isRegularFile(csv)) {
             throw referrer.error("property file not found: " + csv);
         }
@@ -48,11 +57,11 @@ final class PropertyCsvReader {
         List<Integer> lines = read.lines();
         List<String> header = read.header();
         boolean withT = header.contains("temperature_K");
-        List<String> expected = withT ? List.of("temperature_K", "wavelength_um", "emissivity")
-                : List.of("wavelength_um", "emissivity");
+        List<String> expected = withT ? List.of("temperature_K", "wavelength_um", column)
+                : List.of("wavelength_um", column);
         if (!header.equals(expected)) {
-            throw new CaseException(csv, "", "line " + Math.max(1, CsvCells.headerLine(csv)) + ": header must be 'wavelength_um,emissivity'"
-                    + " or 'temperature_K,wavelength_um,emissivity', got '" + String.join(",", header) + "'");
+            throw new CaseException(csv, "", "line " + Math.max(1, CsvCells.headerLine(csv)) + ": header must be 'wavelength_um,"
+                    + column + "' or 'temperature_K,wavelength_um," + column + "', got '" + String.join(",", header) + "'");
         }
         if (rows.isEmpty()) {
             throw new CaseException(csv, "", "no data rows");
@@ -71,7 +80,7 @@ final class PropertyCsvReader {
                 throw CsvCells.outOfRange(csv, line, "temperature_K", t, Limits.TEMPERATURE_K);
             }
             double w = CsvCells.number(csv, line, "wavelength_um", row);
-            double e = CsvCells.number(csv, line, "emissivity", row);
+            double e = CsvCells.number(csv, line, column, row);
             byT.computeIfAbsent(t, k -> new ArrayList<>()).add(new double[] {w, e, line});
             firstLine.putIfAbsent(t, line);
         }
@@ -95,7 +104,7 @@ final class PropertyCsvReader {
                             + w[i] + " after " + w[i - 1]);
                 }
                 if (v[i] < 0 || v[i] > 1) {
-                    throw new CaseException(csv, "", "line " + line + ": emissivity must lie in [0, 1], got " + v[i]);
+                    throw new CaseException(csv, "", "line " + line + ": " + column + " must lie in [0, 1], got " + v[i]);
                 }
             }
             out.add(new Table(e.getKey(), w, v, firstLine.get(e.getKey())));

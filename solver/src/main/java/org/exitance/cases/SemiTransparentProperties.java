@@ -1,6 +1,7 @@
 package org.exitance.cases;
 
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.TreeSet;
 import org.exitance.model.Material;
@@ -117,9 +118,20 @@ final class SemiTransparentProperties {
         if (grayKey.equals("emissivity")) {
             model = MaterialReader.spectral(s, caseDir);
         } else {
-            s.allowOnly("wavelength_um", "bandEdges_um", grayKey);
-            s.exactlyOneOf("wavelength_um", "bandEdges_um");
-            model = MaterialReader.table(s, grayKey);
+            s.allowOnly("wavelength_um", "bandEdges_um", grayKey, "csv");
+            String form = s.exactlyOneOf("wavelength_um", "bandEdges_um", "csv");
+            if (form.equals("csv")) {
+                JsonCursor ref = s.field("csv");
+                Path csv = caseDir.resolve(ref.nonEmptyText()).normalize();
+                List<PropertyCsvReader.Table> tables = PropertyCsvReader.read(csv, ref, grayKey);
+                if (tables.size() > 1) {
+                    throw ref.error("a semi-transparent material needs properties that do not depend on temperature;"
+                            + " give one table (no temperature_K column)");
+                }
+                model = new TabulatedEmissivity(tables.get(0).wavelengthUm(), tables.get(0).emissivity());
+            } else {
+                model = MaterialReader.table(s, grayKey);
+            }
         }
         if (model.dependsOnTemperature()) {
             throw s.error("a semi-transparent material needs properties that do not depend on temperature");

@@ -93,4 +93,26 @@ class MeasuredDataTest {
         String line = BadInput.oneLineError(CliRun.of("solve", file.toString()), 2);
         assertThat(line).contains("$.materials.glass", "normalToHemispherical");
     }
+
+    /** A window's transmissivity from a CSV file solves as the same table given inline. */
+    @Test
+    void aWindowsTransmissivityFromCsvEqualsTheInlineTable() throws Exception {
+        ObjectNode inline = RepoCases.load("window-between-black-plates.json");
+        inline.remove("expected");
+        ObjectNode fromCsv = inline.deepCopy();
+        ((ObjectNode) inline.get("materials").get("quartz_step")).set("spectralTransmissivity",
+                json("{\"wavelength_um\": [1, 2, 3, 5], \"transmissivity\": [0.9, 0.85, 0.3, 0.0]}"));
+        ((ObjectNode) inline.get("materials").get("quartz_step")).set("spectralEmissivity",
+                json("{\"wavelength_um\": [1, 2, 3, 5], \"emissivity\": [0.05, 0.1, 0.6, 0.9]}"));
+        RepoCases.writeText(dir, "tau.csv", "# invented test data\nwavelength_um,transmissivity\n1,0.9\n2,0.85\n3,0.3\n5,0.0\n");
+        ((ObjectNode) fromCsv.get("materials").get("quartz_step")).set("spectralTransmissivity",
+                json("{\"csv\": \"tau.csv\"}"));
+        ((ObjectNode) fromCsv.get("materials").get("quartz_step")).set("spectralEmissivity",
+                json("{\"wavelength_um\": [1, 2, 3, 5], \"emissivity\": [0.05, 0.1, 0.6, 0.9]}"));
+        SolveResult a = solve(inline, "inline.json");
+        SolveResult b = solve(fromCsv, "csv.json");
+        for (int i = 0; i < a.surfaces().size(); i++) {
+            assertThat(b.surfaces().get(i).netHeatW()).isEqualTo(a.surfaces().get(i).netHeatW());
+        }
+    }
 }
