@@ -76,29 +76,9 @@ final class BlackbodyIntegrals {
             HEAD3[j] = b / (factorial * (2 * j + 3));
             HEAD2[j] = b / (factorial * (2 * j + 2));
         }
-        // Gauss–Legendre nodes/weights on [-1, 1] by Newton iteration on P_n (Golub–Welsch not needed).
-        int n = GAUSS_POINTS;
-        for (int i = 0; i < n; i++) {
-            double x = Math.cos(Math.PI * (i + 0.75) / (n + 0.5));
-            double dp = 0;
-            for (int it = 0; it < 100; it++) {
-                double p0 = 1.0;
-                double p1 = x;
-                for (int k = 2; k <= n; k++) {
-                    double p2 = ((2.0 * k - 1.0) * x * p1 - (k - 1.0) * p0) / k;
-                    p0 = p1;
-                    p1 = p2;
-                }
-                dp = n * (x * p1 - p0) / (x * x - 1.0);
-                double dx = p1 / dp;
-                x -= dx;
-                if (Math.abs(dx) < 1e-16) {
-                    break;
-                }
-            }
-            GAUSS_X[i] = x;
-            GAUSS_W[i] = 2.0 / ((1.0 - x * x) * dp * dp);
-        }
+        double[][] rule = GaussLegendre.rule(GAUSS_POINTS);
+        System.arraycopy(rule[0], 0, GAUSS_X, 0, GAUSS_POINTS);
+        System.arraycopy(rule[1], 0, GAUSS_W, 0, GAUSS_POINTS);
     }
 
     private BlackbodyIntegrals() {

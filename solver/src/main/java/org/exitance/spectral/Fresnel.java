@@ -18,34 +18,9 @@ package org.exitance.spectral;
  */
 public final class Fresnel {
     static final int PANELS = 64;
-    private static final double[] X = new double[20];
-    private static final double[] W = new double[20];
-
-    static {
-        // Gauss–Legendre nodes by Newton's method on P_20 (Abramowitz & Stegun, §25.4.29)
-        int m = X.length;
-        for (int i = 0; i < m; i++) {
-            double x = Math.cos(Math.PI * (i + 0.75) / (m + 0.5));
-            double dp = 0;
-            for (int it = 0; it < 100; it++) {
-                double p0 = 1;
-                double p1 = x;
-                for (int j = 2; j <= m; j++) {
-                    double p2 = ((2 * j - 1) * x * p1 - (j - 1) * p0) / j;
-                    p0 = p1;
-                    p1 = p2;
-                }
-                dp = m * (x * p1 - p0) / (x * x - 1);
-                double dx = p1 / dp;
-                x -= dx;
-                if (Math.abs(dx) < 1e-16) {
-                    break;
-                }
-            }
-            X[i] = x;
-            W[i] = 2 / ((1 - x * x) * dp * dp);
-        }
-    }
+    private static final double[][] RULE = GaussLegendre.rule(20);
+    private static final double[] X = RULE[0];
+    private static final double[] W = RULE[1];
 
     private Fresnel() {
     }
