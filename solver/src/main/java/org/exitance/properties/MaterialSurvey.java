@@ -33,7 +33,17 @@ public record MaterialSurvey(Material material, List<IrradiationSource> sources,
             for (int k = 0; k < alpha.length; k++) {
                 alpha[k] = sources.get(k).absorptivity(e, t);
             }
-            rows.add(new SurveyRow(t, BandAverages.totalEmissivity(e, t), alpha));
+            SpectralEmissivity tau = material.transmissivity();
+            if (tau == null) {
+                rows.add(new SurveyRow(t, BandAverages.totalEmissivity(e, t), alpha));
+                continue;
+            }
+            double[] tr = new double[sources.size()];
+            for (int k = 0; k < tr.length; k++) {
+                tr[k] = sources.get(k).absorptivity(tau, t); // the source-weighted mean of τ_λ, as for α_λ
+            }
+            rows.add(new SurveyRow(t, BandAverages.totalEmissivity(e, t), alpha, BandAverages.totalEmissivity(tau, t),
+                    tr));
         }
         return new MaterialSurvey(material, sources, rows);
     }

@@ -7,10 +7,35 @@ package org.exitance.properties;
  * @param temperatureK    surface temperature, K
  * @param totalEmissivity ε(T) = ∫ ε_λ E_bλ(T) dλ / σT⁴
  * @param absorptivity    α for source k at this surface temperature (copied)
+ * @param totalTransmissivity  for a window: τ(T) = ∫ τ_λ E_bλ(T) dλ / σT⁴, the share of a blackbody
+ *                             at the surface's own temperature that passes; NaN for an opaque material
+ * @param transmissivity  for a window: τ for source k (copied; empty for an opaque material)
  */
-public record SurveyRow(double temperatureK, double totalEmissivity, double[] absorptivity) {
+public record SurveyRow(double temperatureK, double totalEmissivity, double[] absorptivity,
+                        double totalTransmissivity, double[] transmissivity) {
     public SurveyRow {
         absorptivity = absorptivity.clone();
+        transmissivity = transmissivity.clone();
+    }
+
+    /** An opaque material's row. */
+    public SurveyRow(double temperatureK, double totalEmissivity, double[] absorptivity) {
+        this(temperatureK, totalEmissivity, absorptivity, Double.NaN, new double[0]);
+    }
+
+    @Override
+    public double[] transmissivity() {
+        return transmissivity.clone();
+    }
+
+    /** Whether the row belongs to a window (semi-transparent material). */
+    public boolean window() {
+        return !Double.isNaN(totalTransmissivity);
+    }
+
+    /** For a window: total reflectivity ρ(T) = 1 − ε(T) − τ(T) for a blackbody at the surface's temperature. */
+    public double totalReflectivity() {
+        return 1 - totalEmissivity - totalTransmissivity;
     }
 
     @Override

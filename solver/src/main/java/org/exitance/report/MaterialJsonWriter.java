@@ -46,11 +46,18 @@ public final class MaterialJsonWriter {
                 ObjectNode ro = rows.addObject();
                 ro.put("temperature_K", r.temperatureK());
                 ro.put("totalEmissivity", r.totalEmissivity());
+                if (r.window()) {
+                    ro.put("totalTransmissivity", r.totalTransmissivity());
+                    ro.put("totalReflectivity", r.totalReflectivity());
+                }
                 ArrayNode ab = ro.putArray("absorptivity");
                 for (int k = 0; k < m.sources().size(); k++) {
                     ObjectNode a = ab.addObject();
                     source(a, m.sources().get(k), false);
                     a.put("totalAbsorptivity", r.absorptivity(k));
+                    if (r.window()) {
+                        a.put("totalTransmissivity", r.transmissivity()[k]);
+                    }
                     double q = r.alphaOverEpsilon(k);
                     if (Double.isFinite(q)) {
                         a.put("alphaOverEpsilon", q);

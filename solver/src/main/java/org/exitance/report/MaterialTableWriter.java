@@ -68,10 +68,17 @@ public final class MaterialTableWriter {
         if (!m.material().description().isEmpty()) {
             out.println("  " + m.material().description());
         }
+        boolean window = !m.rows().isEmpty() && m.rows().get(0).window();
         List<String> headers = new ArrayList<>(List.of("T K", "ε"));
+        if (window) {
+            headers.addAll(List.of("τ", "ρ"));
+        }
         for (IrradiationSource s : m.sources()) {
             headers.add("α " + column(s));
             headers.add("α/ε " + column(s));
+            if (window) {
+                headers.add("τ " + column(s));
+            }
         }
         boolean[] numeric = new boolean[headers.size()];
         Arrays.fill(numeric, true);
@@ -79,13 +86,24 @@ public final class MaterialTableWriter {
         for (SurveyRow r : m.rows()) {
             List<String> cells = new ArrayList<>(List.of(Numbers.temperature(r.temperatureK()),
                     Numbers.ratio(r.totalEmissivity())));
+            if (window) {
+                cells.add(Numbers.ratio(r.totalTransmissivity()));
+                cells.add(Numbers.ratio(r.totalReflectivity()));
+            }
             for (int k = 0; k < m.sources().size(); k++) {
                 cells.add(Numbers.ratio(r.absorptivity(k)));
                 cells.add(quotient(r.alphaOverEpsilon(k)));
+                if (window) {
+                    cells.add(Numbers.ratio(r.transmissivity()[k]));
+                }
             }
             t.row(cells);
         }
         t.render(2).forEach(out::println);
+        if (window) {
+            out.println("  (τ, ρ: total transmissivity and reflectivity for a blackbody at T, ρ = 1 − ε − τ; τ for a"
+                    + " source: the share of its radiation that passes)");
+        }
     }
 
     /** α/ε to three decimals; "∞" for ε = 0 with α &gt; 0, "—" for 0/0. */
