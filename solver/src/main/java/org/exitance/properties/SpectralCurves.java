@@ -21,9 +21,10 @@ import org.exitance.spectral.source.SourceSpectrum;
  * @param emissivity   ε(λ): one curve, or one per temperature when ε depends on temperature
  * @param planck       one normalized Planck curve per plotted surface temperature
  * @param sources      one normalized curve per source
+ * @param transmissivity  τ(λ) of a window (one curve), empty for an opaque material
  */
 public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity, List<Curve> planck,
-                             List<Curve> sources) {
+                             List<Curve> sources, List<Curve> transmissivity) {
 
     /** Points per decade of wavelength on the sampling grid. */
     public static final int POINTS_PER_DECADE = 200;
@@ -53,7 +54,13 @@ public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity,
         }
     }
 
+    /** Curves of an opaque material. */
+    public SpectralCurves(double fromUm, double toUm, List<Curve> emissivity, List<Curve> planck, List<Curve> sources) {
+        this(fromUm, toUm, emissivity, planck, sources, List.of());
+    }
+
     public SpectralCurves {
+        transmissivity = List.copyOf(transmissivity);
         emissivity = List.copyOf(emissivity);
         planck = List.copyOf(planck);
         sources = List.copyOf(sources);
@@ -116,7 +123,13 @@ public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity,
                 src.add(new Curve("source: " + g.label(), Double.NaN, g.wavelengthUm(), y));
             }
         }
-        return new SpectralCurves(from, to, eps, planck, src);
+        List<Curve> tau = new ArrayList<>();
+        if (material.transmissivity() != null) {
+            SpectralEmissivity tr = material.transmissivity();
+            double[] g = grid(from, to, tr.breakpointsUm());
+            tau.add(new Curve("τ(λ) " + material.name(), Double.NaN, g, emissivity(tr, temperaturesK[0], g)));
+        }
+        return new SpectralCurves(from, to, eps, planck, src, tau);
     }
 
     /**

@@ -41,6 +41,8 @@ public final class SpectrumPlot {
     private static final Color[] SOURCES = {new Color(215, 145, 0), new Color(30, 150, 70), new Color(150, 60, 170)};
     private static final Color SPECTRUM = new Color(95, 95, 95);
     private static final Color EMISSIVITY = new Color(20, 20, 20);
+    /** Transmissivity: a blue that stays distinct in grey print by its long-dash pattern. */
+    private static final Color TRANSMISSIVITY = new Color(0, 90, 170);
 
     static {
         System.setProperty("java.awt.headless", "true");
@@ -80,6 +82,11 @@ public final class SpectrumPlot {
             r.setSeriesPaint(n, single ? EMISSIVITY : ramp(c.temperatureK(), tLo, tHi));
             r.setSeriesStroke(n++, new BasicStroke(2.6f));
         }
+        for (Curve c : curves.transmissivity()) {
+            add(data, c, n);
+            r.setSeriesPaint(n, TRANSMISSIVITY);
+            r.setSeriesStroke(n++, dashed(2.4f, 14f, 5f));
+        }
         for (Curve c : curves.planck()) {
             add(data, c, n);
             r.setSeriesPaint(n, ramp(c.temperatureK(), tLo, tHi));
@@ -99,7 +106,9 @@ public final class SpectrumPlot {
         x.setMinorTickMarksVisible(true);
         x.setNumberFormatOverride(new DecimalFormat("0.###"));
         x.setRange(curves.fromUm() * 0.999, curves.toUm() * 1.001); // keeps the end decades' labels
-        NumberAxis y = new NumberAxis("Spectral emissivity ε_λ  and  normalized E_bλ / E_bλ,max  (–)");
+        NumberAxis y = new NumberAxis(curves.transmissivity().isEmpty()
+                ? "Spectral emissivity ε_λ  and  normalized E_bλ / E_bλ,max  (–)"
+                : "Spectral ε_λ, transmissivity τ_λ  and  normalized E_bλ / E_bλ,max  (–)");
         y.setRange(0.0, 1.05);
         y.setTickUnit(new NumberTickUnit(0.1));
 
