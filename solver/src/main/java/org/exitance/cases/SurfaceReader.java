@@ -49,6 +49,9 @@ final class SurfaceReader {
             }
             double area = area(s, name, geometryAreas);
             String otherFace = s.has("otherFace") ? s.field("otherFace").nonEmptyText() : null;
+            if (name.equals(otherFace)) {
+                throw s.field("otherFace").error("a window face cannot be its own other face");
+            }
             BoundaryCondition bc = otherFace != null && WindowFaces.conditionLeftOut(s)
                     ? new BoundaryCondition.OnOtherFace() : boundary(s);
             double initial = TemperatureField.read(s, "initialTemperature").orElse(Double.NaN);

@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.exitance.cases.Limits;
 import org.exitance.cases.MaterialFileReader;
 import org.exitance.cases.MaterialFileReader.MaterialFile;
 import org.exitance.cases.SourceSpectrumCsvReader;
@@ -150,6 +151,12 @@ final class MaterialCommand implements Callable<Integer> {
 
     private double[] temperatures() {
         try {
+            for (double t : new double[] {fromK, toK}) {
+                if (Double.isFinite(t) && t > 0 && !Limits.TEMPERATURE_K.contains(t)) {
+                    throw new UserError("--from-K/--to-K: temperatures must lie " + Limits.TEMPERATURE_K.describe()
+                            + ", got " + Limits.number(t) + " K", ExitCodes.BAD_INPUT);
+                }
+            }
             return new TemperatureRange(fromK, toK, stepK).temperaturesK();
         } catch (IllegalArgumentException e) {
             throw new UserError("--from-K/--to-K/--step-K: " + e.getMessage(), ExitCodes.BAD_INPUT);
@@ -160,6 +167,10 @@ final class MaterialCommand implements Callable<Integer> {
         List<IrradiationSource> out = new ArrayList<>();
         List<Double> temps = sourceK.isEmpty() && sourceSpectrum == null ? List.of(DEFAULT_SOURCE_K) : sourceK;
         for (double t : temps) {
+            if (Double.isFinite(t) && t > 0 && !Limits.SOURCE_TEMPERATURE_K.contains(t)) {
+                throw new UserError("--source-K: a source temperature must lie " + Limits.SOURCE_TEMPERATURE_K.describe()
+                        + ", got " + Limits.number(t) + " K", ExitCodes.BAD_INPUT);
+            }
             try {
                 out.add(new BlackbodySource(t));
             } catch (IllegalArgumentException e) {

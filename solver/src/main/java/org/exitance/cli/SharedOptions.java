@@ -1,6 +1,7 @@
 package org.exitance.cli;
 
 import java.nio.file.Path;
+import org.exitance.cases.Limits;
 import org.exitance.model.BandSet;
 import picocli.CommandLine.Option;
 
@@ -99,6 +100,16 @@ final class SharedOptions {
                 } catch (NumberFormatException ex) {
                     throw new UserError("--band-edges: '" + parts[i].trim() + "' is not a number (write e.g. 1.5,3,6"
                             + " in µm)", ExitCodes.BAD_INPUT);
+                }
+            }
+            if (e.length > Limits.BAND_EDGES.max()) {
+                throw new UserError("--band-edges: at most " + Limits.number(Limits.BAND_EDGES.max()) + " edges, got "
+                        + e.length, ExitCodes.BAD_INPUT);
+            }
+            for (double x : e) {
+                if (Double.isFinite(x) && x > 0 && !Limits.WAVELENGTH_UM.contains(x)) {
+                    throw new UserError("--band-edges: an edge must lie " + Limits.WAVELENGTH_UM.describe() + ", got "
+                            + Limits.number(x) + " µm", ExitCodes.BAD_INPUT);
                 }
             }
             try {

@@ -26,7 +26,8 @@ import org.exitance.model.ViewFactorMatrix;
  * The solve ({@code thermal.CaseSolver}), the gray-body audit and the writers follow it.
  * A library user who only wants what the file says calls {@link CaseReader#read} instead, which
  * computes no view factors and writes no cache. Checks that need the view factors (a geometry
- * without an environment must be closed) run here, after every check of the reader.
+ * without an environment must be closed) run here, after every check of the reader; a given
+ * matrix that is not reciprocal and closed is made so here ({@link GivenViewFactors}).
  */
 public final class CasePipeline {
     private CasePipeline() {
@@ -46,18 +47,22 @@ public final class CasePipeline {
     public static PreparedCase prepare(CaseDescription d, ViewFactorStage.Request request) throws CaseException {
         CaseGeometry g = d.geometry();
         if (g == null) {
-            return new PreparedCase(d, surfaceModel(d, d.viewFactors(), SourceIncidence.place(d.sources(), null, null)),
-                    d.warnings(), null);
+            List<String> warnings = new ArrayList<>(d.warnings());
+            RadiationCase model = surfaceModel(d, GivenViewFactors.consistent(d, warnings),
+                    SourceIncidence.place(d.sources(), null, null));
+            return new PreparedCase(d, model, warnings, null);
         }
         List<String> warnings = new ArrayList<>(d.warnings());
         ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets());
         double[][] f = GeometryViewFactors.inCaseOrder(computed, d.surfaces(), d.environment() != null, d.file(),
                 warnings);
         if (!g.solveOnFacets()) {
+            f = GeometryViewFactors.consistent(f, d.surfaces(), d.environment() != null, d.file(), warnings);
             RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), g.scene(), null));
             return new PreparedCase(d, model, warnings, computed);
         }
-        FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces());
+        FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces(), d.environment() != null,
+                d.file(), warnings);
         Enclosure enclosure = enclosure(d, facets.surfaces(), facets.matrix());  // shares the facet matrix
         List<ExternalSource> sources = FacetExpansion.spreadOverFacets(
                 SourceIncidence.place(d.sources(), g.scene(), facets.sceneOrder()), facets.groups());

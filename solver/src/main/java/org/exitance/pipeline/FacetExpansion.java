@@ -28,8 +28,13 @@ final class FacetExpansion {
     private FacetExpansion() {
     }
 
-    /** @param caseSurfaces the case's surfaces (none a window face: the reader has checked) */
-    static Result expand(ComputedViewFactors v, List<EnclosureSurface> caseSurfaces) {
+    /**
+     * @param caseSurfaces the case's surfaces (none a window face: the reader has checked)
+     * @param open         whether an environment receives what the facet rows leave
+     * @param warnings     receives a line when the facet matrix is made consistent (modified)
+     */
+    static Result expand(ComputedViewFactors v, List<EnclosureSurface> caseSurfaces, boolean open,
+                         java.nio.file.Path file, List<String> warnings) throws org.exitance.cases.CaseException {
         ComputedViewFactors.FacetFactors ff = v.facets();
         int n = ff.count();
         String[] sceneNames = new String[n];
@@ -55,7 +60,12 @@ final class FacetExpansion {
             }
             groups.put(s.name(), names);
         }
-        return new Result(out, facetMatrix(ff.matrix(), order, n), new FacetGroups(groups), List.of(sceneNames));
+        double[] area = new double[n];
+        for (int a = 0; a < n; a++) {
+            area[a] = out.get(a).areaM2();
+        }
+        ViewFactorMatrix m = facetMatrix(ff.matrix(), order, n, area, open, file, warnings);
+        return new Result(out, m, new FacetGroups(groups), List.of(sceneNames));
     }
 
     /**
@@ -65,7 +75,9 @@ final class FacetExpansion {
      *
      * @param scene  facet view factors in scene order, row-major; not modified
      */
-    private static ViewFactorMatrix facetMatrix(double[] scene, List<Integer> order, int n) {
+    private static ViewFactorMatrix facetMatrix(double[] scene, List<Integer> order, int n, double[] area,
+                                                boolean open, java.nio.file.Path file, List<String> warnings)
+            throws org.exitance.cases.CaseException {
         boolean identity = true;
         for (int a = 0; a < n && identity; a++) {
             identity = order.get(a) == a;
@@ -74,7 +86,8 @@ final class FacetExpansion {
         for (int i = 0; i < scene.length && nonNegative; i++) {
             nonNegative = Double.doubleToRawLongBits(scene[i]) >= 0; // sign bit clear: +0 and positive, not −0
         }
-        if (identity && nonNegative) {
+        if (identity && nonNegative
+                && ConsistentViewFactors.worstError(scene, n, area, open) <= ConsistentViewFactors.CONSISTENT) {
             return ViewFactorMatrix.adopt(scene, n);
         }
         double[] m = new double[scene.length];
@@ -83,6 +96,14 @@ final class FacetExpansion {
             for (int b = 0; b < n; b++) {
                 m[a * n + b] = Math.max(0.0, scene[fa * n + order.get(b)]);
             }
+        }
+        try {
+            String changed = ConsistentViewFactors.repair(m, n, area, open);
+            if (changed != null) {
+                warnings.add(changed.replace("view factors:", "facet view factors:"));
+            }
+        } catch (ConsistentViewFactors.Unrepairable e) {
+            throw new org.exitance.cases.CaseException(file, "$.geometry", e.getMessage());
         }
         return ViewFactorMatrix.adopt(m, n);
     }

@@ -14,6 +14,11 @@ import org.exitance.model.EnclosureSurface;
 final class GeometryViewFactors {
     /** Share of a surface's radiation that may escape a geometry declared closed (no environment). */
     static final double OPEN_GEOMETRY = 1e-3;
+    /**
+     * Excess of a facet row above 1 beyond which facets overlap (two parts in the same place) or
+     * the divisions are far too coarse for the view factors to mean anything.
+     */
+    static final double OVERLAP = 0.05;
 
     private GeometryViewFactors() {
     }
@@ -42,6 +47,11 @@ final class GeometryViewFactors {
                         + " to receive it, or close the geometry");
             }
         }
+        if (v.maxRowSumExcess() > OVERLAP) {
+            throw new CaseException(file, "$.geometry", "a facet row of view factors sums to "
+                    + CaseReader.fmt(1 + v.maxRowSumExcess()) + ", more than " + Math.round(100 * OVERLAP)
+                    + " % above 1: facets overlap (two parts in the same place), or the divisions are too coarse");
+        }
         if (!open && v.maxRowSumDeviation() > 1e-9) {
             warnings.add("view factors: closed geometry, largest facet row-sum error "
                     + CaseReader.fmt(v.maxRowSumDeviation()) + " (row " + v.worstRow()
@@ -51,5 +61,38 @@ final class GeometryViewFactors {
             warnings.add("view factors: a facet row sums to " + CaseReader.fmt(1 + v.maxRowSumExcess()) + ", above 1");
         }
         return f;
+    }
+
+    /**
+     * The surface matrix made consistent for the solve ({@link ConsistentViewFactors}).
+     *
+     * @param f        F[i][j] in the order of {@code surfaces}; not modified
+     * @param warnings receives a line when the matrix is changed (modified)
+     * @return f itself when consistent, else a new array
+     */
+    static double[][] consistent(double[][] f, List<EnclosureSurface> surfaces, boolean open, Path file,
+                                 List<String> warnings) throws CaseException {
+        int n = surfaces.size();
+        double[] flat = new double[n * n];
+        double[] area = new double[n];
+        for (int i = 0; i < n; i++) {
+            area[i] = surfaces.get(i).areaM2();
+            System.arraycopy(f[i], 0, flat, i * n, n);
+        }
+        String changed;
+        try {
+            changed = ConsistentViewFactors.repair(flat, n, area, open);
+        } catch (ConsistentViewFactors.Unrepairable e) {
+            throw new CaseException(file, "$.geometry", e.getMessage());
+        }
+        if (changed == null) {
+            return f;
+        }
+        warnings.add(changed);
+        double[][] out = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(flat, i * n, out[i], 0, n);
+        }
+        return out;
     }
 }

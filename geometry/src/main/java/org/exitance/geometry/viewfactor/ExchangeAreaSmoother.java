@@ -31,13 +31,13 @@ import org.apache.commons.math3.linear.RealVector;
  * surface) and is free, so C holds only rows whose remainder would be negative; rows join C until
  * no remainder is negative.
  */
-final class ExchangeAreaSmoother {
+public final class ExchangeAreaSmoother {
 
     private ExchangeAreaSmoother() {
     }
 
     /**
-     * Smooths the facet matrix in place.
+     * Smooths a facet (or surface) matrix in place; also used for a view-factor matrix a case gives.
      *
      * @param f row-major n × n view factors; modified (replaced by the smoothed factors)
      * @param n number of facets
@@ -45,7 +45,7 @@ final class ExchangeAreaSmoother {
      * @param mode CLOSED or OPEN
      * @return what changed
      */
-    static SmoothingReport smooth(double[] f, int n, double[] area, Smoothing mode) {
+    public static SmoothingReport smooth(double[] f, int n, double[] area, Smoothing mode) {
         if (mode == Smoothing.NONE) {
             return SmoothingReport.none();
         }
