@@ -21,6 +21,8 @@ final class SectionPieces {
     final int shell;
     /** L_arc − L_chord for concave arcs (m), 0 otherwise: the self-exchange of the hollow */
     final double[] selfExchange;
+    /** per piece: the strip lying exactly on this chord and facing into the hollow (a lid), or −1 */
+    final int[] lidOf;
 
     /**
      * @param elements surfaces in canonical order; not modified
@@ -65,9 +67,13 @@ final class SectionPieces {
             scale = Math.max(scale, p.length);
         }
         double tol = 1e-9 * scale;
+        lidOf = new int[pieces.size()];
+        java.util.Arrays.fill(lidOf, -1);
         for (int a = 0; a < pieces.size(); a++) {
             for (int b = a + 1; b < pieces.size(); b++) {
-                checkApart(pieces.get(a), pieces.get(b), elements, names, tol);
+                if (!lid(pieces.get(a), pieces.get(b), names, tol) && !lid(pieces.get(b), pieces.get(a), names, tol)) {
+                    checkApart(pieces.get(a), pieces.get(b), elements, names, tol);
+                }
             }
         }
         if (shell >= 0) {
@@ -83,6 +89,28 @@ final class SectionPieces {
 
     private void add(Piece.Kind kind, Piece.Block block, int owner, double... g) {
         pieces.add(new Piece(kind, block, pieces.size(), owner, g));
+    }
+
+    /**
+     * Whether strip s lies on the chord of concave arc c and faces into its hollow (a lid): then
+     * the lid and the hollow see only each other through the chord. Modifies lidOf.
+     *
+     * @throws GeometryException if s lies along the chord otherwise (partly, or with its back to the hollow)
+     */
+    private boolean lid(Piece c, Piece s, List<String> names, double tol) {
+        if (c.kind != Piece.Kind.FLAT || c.block != Piece.Block.CAP || s.block != Piece.Block.SEG
+                || collinearOverlap(c, s, tol) == null) {
+            return false;
+        }
+        boolean same = Math.hypot(s.x0 - c.x1, s.y0 - c.y1) < tol && Math.hypot(s.x1 - c.x0, s.y1 - c.y0) < tol;
+        boolean reversed = Math.hypot(s.x0 - c.x0, s.y0 - c.y0) < tol && Math.hypot(s.x1 - c.x1, s.y1 - c.y1) < tol;
+        if (same) {
+            lidOf[c.id] = s.id;
+            return true;
+        }
+        throw new GeometryException("section surface '" + names.get(s.owner) + "' lies along the chord of concave arc '"
+                + names.get(c.owner) + "'" + (reversed ? " with its back to the hollow" : " but does not cover it exactly")
+                + "; a strip on the chord must run from the arc's end to its start, radiating into the hollow");
     }
 
     private static void checkApart(Piece p, Piece q, List<SectionElement> elements, List<String> names,
@@ -139,18 +167,23 @@ final class SectionPieces {
         double den = ex * fy - ey * fx;
         double wx = q.x0 - p.x0, wy = q.y0 - p.y0;
         if (Math.abs(den) <= 1e-14 * p.length * q.length) {
-            // parallel: collinear overlap of more than a point?
-            if (Math.abs(ex * wy - ey * wx) > tol * p.length) {
-                return null;
-            }
-            double t0 = (wx * ex + wy * ey) / (p.length * p.length);
-            double t1 = ((q.x1 - p.x0) * ex + (q.y1 - p.y0) * ey) / (p.length * p.length);
-            double lo = Math.max(0, Math.min(t0, t1)), hi = Math.min(1, Math.max(t0, t1));
-            return hi - lo > tol / p.length ? "(" + (p.x0 + lo * ex) + ", " + (p.y0 + lo * ey) + ")" : null;
+            return collinearOverlap(p, q, tol);
         }
         double t = (wx * fy - wy * fx) / den, v = (wx * ey - wy * ex) / den;
         double et = tol / p.length, ev = tol / q.length;
         return t > et && t < 1 - et && v > ev && v < 1 - ev ? "(" + (p.x0 + t * ex) + ", " + (p.y0 + t * ey) + ")" : null;
+    }
+
+    /** Where two segments on one line overlap by more than a point, or null. */
+    private static String collinearOverlap(Piece p, Piece q, double tol) {
+        double ex = p.x1 - p.x0, ey = p.y1 - p.y0, wx = q.x0 - p.x0, wy = q.y0 - p.y0;
+        double vx = q.x1 - p.x0, vy = q.y1 - p.y0;
+        if (Math.abs(ex * wy - ey * wx) > tol * p.length || Math.abs(ex * vy - ey * vx) > tol * p.length) {
+            return null;
+        }
+        double t0 = (wx * ex + wy * ey) / (p.length * p.length), t1 = (vx * ex + vy * ey) / (p.length * p.length);
+        double lo = Math.max(0, Math.min(t0, t1)), hi = Math.min(1, Math.max(t0, t1));
+        return hi - lo > tol / p.length ? "(" + (p.x0 + lo * ex) + ", " + (p.y0 + lo * ey) + ")" : null;
     }
 
     private static double distanceToSegment(Piece s, double x, double y) {

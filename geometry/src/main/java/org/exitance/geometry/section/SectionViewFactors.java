@@ -27,6 +27,8 @@ import org.exitance.geometry.viewfactor.ClosureDiagnostics;
  * that cannot see each other. A concave arc exchanges through its chord:
  * L_arc F_arc,j = L_chord F_chord,j, and F_arc,arc = 1 − L_chord / L_arc (closure of the
  * hollow).</li>
+ * <li>A strip lying exactly on the chord of a concave arc and radiating into its hollow is a lid:
+ * the two see each other through the whole chord (F_lid,arc = 1) and nothing else.</li>
  * <li>A shell (inward-radiating circle) around everything gets what the other rows leave:
  * F_i,shell = 1 − Σ_{j ≠ shell} F_ij, its row by reciprocity and its self factor by closure.</li>
  * </ul>
@@ -96,6 +98,15 @@ public final class SectionViewFactors {
         for (int p = 0; p < pieces.size(); p++) {
             for (int q = p + 1; q < pieces.size(); q++) {
                 Piece e = pieces.get(p), r = pieces.get(q);
+                if (sp.lidOf[p] >= 0 || sp.lidOf[q] >= 0) {
+                    // a lidded hollow sees only its lid, through the whole chord
+                    if (sp.lidOf[p] == q || sp.lidOf[q] == p) {
+                        Piece chord = sp.lidOf[p] == q ? e : r;
+                        x[e.owner * n + r.owner] += chord.length;
+                        x[r.owner * n + e.owner] += chord.length;
+                    }
+                    continue;
+                }
                 double[] box = union(e.box(), r.box());
                 List<Piece> obstacles = new ArrayList<>();
                 for (Piece o : pieces) {
