@@ -26,6 +26,7 @@ final class EventLines {
     static List<Double> candidates(Piece e, Piece rcv, List<Piece> obstacles) {
         List<double[]> circles = new ArrayList<>();
         features(rcv, circles);
+        int own = circles.size();
         for (Piece o : obstacles) {
             features(o, circles);
         }
@@ -34,13 +35,13 @@ final class EventLines {
         for (int a = 0; a < circles.size(); a++) {
             for (int b = a + 1; b < circles.size(); b++) {
                 for (double[] line : tangents(circles.get(a), circles.get(b))) {
-                    cross(e, line, out);
+                    cross(e, rcv, line, a >= own, out);
                 }
             }
             if (curved) {
                 for (double[] line : tangents(new double[] {e.cx, e.cy, e.r}, circles.get(a))) {
                     // the touching point on the emitter circle: centre − r n
-                    add(e, e.cx - e.r * line[0], e.cy - e.r * line[1], out);
+                    add(e, rcv, e.cx - e.r * line[0], e.cy - e.r * line[1], line, a >= own, out);
                 }
             }
         }
@@ -91,12 +92,16 @@ final class EventLines {
         return lines;
     }
 
-    private static void cross(Piece e, double[] line, List<Double> out) {
+    /** Adds where the line crosses the emitter. Modifies out. */
+    private static void cross(Piece e, Piece rcv, double[] line, boolean prune, List<Double> out) {
         double nx = line[0], ny = line[1], c = line[2];
         if (e.kind == Piece.Kind.FLAT) {
             double f0 = nx * e.x0 + ny * e.y0 + c, f1 = nx * e.x1 + ny * e.y1 + c;
             if (f0 != f1 && f0 * f1 < 0) {
-                out.add(f0 / (f0 - f1));
+                double u = f0 / (f0 - f1);
+                if (!prune || Visibility.withinFace(e, u, rcv, -ny, nx, 1e-9)) {
+                    out.add(u);
+                }
             }
             return;
         }
@@ -106,16 +111,20 @@ final class EventLines {
         }
         double h = Math.sqrt(e.r * e.r - dist * dist);
         double fx = e.cx - dist * nx, fy = e.cy - dist * ny;
-        add(e, fx - h * ny, fy + h * nx, out);
-        add(e, fx + h * ny, fy - h * nx, out);
+        add(e, rcv, fx - h * ny, fy + h * nx, line, prune, out);
+        add(e, rcv, fx + h * ny, fy - h * nx, line, prune, out);
     }
 
-    /** Adds the parameter of a point of the emitter's circle if it lies on the emitter. Modifies out. */
-    private static void add(Piece e, double x, double y, List<Double> out) {
+    /**
+     * Adds the parameter of a point of the emitter's circle if it lies on the emitter and, when
+     * pruning (lines between obstacle features only), if the line falls within the receiver's
+     * face there. Modifies out.
+     */
+    private static void add(Piece e, Piece rcv, double x, double y, double[] line, boolean prune, List<Double> out) {
         double a = Math.atan2(y - e.cy, x - e.cx) - e.a0;
         a -= 2 * Math.PI * Math.floor(a / (2 * Math.PI));
         double u = a / e.sweep;
-        if (u > 0 && u < 1) {
+        if (u > 0 && u < 1 && (!prune || Visibility.withinFace(e, u, rcv, -line[1], line[0], 1e-9))) {
             out.add(u);
         }
     }

@@ -108,9 +108,10 @@ public final class SectionViewFactors {
                     continue;
                 }
                 double[] box = union(e.box(), r.box());
+                PairHull hull = new PairHull(e, r);
                 List<Piece> obstacles = new ArrayList<>();
                 for (Piece o : pieces) {
-                    if (o != e && o != r && overlaps(o.box(), box)) {
+                    if (o != e && o != r && overlaps(o.box(), box) && !hull.excludes(o)) {
                         obstacles.add(o);
                     }
                 }

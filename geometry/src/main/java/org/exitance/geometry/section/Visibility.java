@@ -135,6 +135,35 @@ final class Visibility {
         return sig;
     }
 
+    /**
+     * Whether the line through the emitter point at u with direction (dx, dy), taken toward the
+     * emitter's front, falls within the receiver's face as seen from there (within tol, rad),
+     * before obstacles. Used to skip candidate cuts that cannot change the visible set.
+     */
+    static boolean withinFace(Piece e, double u, Piece rcv, double dx, double dy, double tol) {
+        double sx = e.px(u), sy = e.py(u);
+        double[] fr = new double[4];
+        e.frame(u, fr);
+        double[] d = new double[4];
+        Feature[] f = new Feature[2];
+        if (!rcv.faceEdges(sx, sy, d, f)) {
+            return false;
+        }
+        if (dx * fr[2] + dy * fr[3] < 0) {
+            dx = -dx;
+            dy = -dy;
+        }
+        double p1 = phi(d[0], d[1], fr), p2 = phi(d[2], d[3], fr), w = Feature.wrap(p2 - p1);
+        double lo = w >= 0 ? p1 : p2, hi = lo + Math.abs(w), p = phi(dx, dy, fr);
+        for (int k = -1; k <= 1; k++) {
+            double q = p + 2 * Math.PI * k;
+            if (q >= lo - tol && q <= hi + tol) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** Angle (rad) of direction (dx, dy) from the normal fr[2..3], positive toward the tangent fr[0..1]. */
     private static double phi(double dx, double dy, double[] fr) {
         return Math.atan2(dx * fr[0] + dy * fr[1], dx * fr[2] + dy * fr[3]);
