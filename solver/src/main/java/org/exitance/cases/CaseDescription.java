@@ -35,12 +35,14 @@ import org.exitance.model.SolverSettings;
  * @param expected    the {@code expected} block of a validation case, unread (the validation package
  *                    reads it), or null
  * @param warnings    non-fatal findings of reading (mesh repairs, small matrix errors), one line each
+ * @param covers      insulation blankets and shield packs by covered surface name (empty for none)
+ * @param section     the 2-D cross-section of an infinitely long case, or null
  */
 public record CaseDescription(Path file, String title, String notes, List<Material> materials,
                               List<EnclosureSurface> surfaces, Environment environment, List<ConductiveLink> links,
                               double[][] viewFactors, CaseGeometry geometry, BandSet bands, SolverSettings settings,
                               List<CaseSource> sources, List<LoadCase> loadCases, JsonCursor expected,
-                              List<String> warnings, Map<String, Cover> covers) {
+                              List<String> warnings, Map<String, Cover> covers, CaseSection section) {
     public CaseDescription {
         covers = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(covers));
         materials = List.copyOf(materials);

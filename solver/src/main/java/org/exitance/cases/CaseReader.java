@@ -33,9 +33,9 @@ public final class CaseReader {
         JsonCursor root = JsonCursor.root(CaseJson.parse(file), file);
         Path dir = file.toAbsolutePath().getParent();
         List<String> warnings = new ArrayList<>();
-        root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "geometry",
+        root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "geometry", "section",
                 "bands", "conductiveLinks", "sources", "loadCases", "solver", "expected");
-        root.exactlyOneOf("viewFactors", "geometry");
+        root.exactlyOneOf("viewFactors", "geometry", "section");
         CaseGeometry geometry = root.has("geometry") ? GeometryReader.read(root.field("geometry"), dir) : null;
         Map<String, Double> geometryAreas = null;
         if (geometry != null) {
@@ -45,6 +45,10 @@ public final class CaseReader {
             }
             geometry.notes().forEach(n -> warnings.add("geometry: " + n));
         }
+        CaseSection section = root.has("section") ? CaseSection.read(root.field("section")) : null;
+        if (section != null) {
+            geometryAreas = new LinkedHashMap<>(section.areasM2());
+        }
         String title = root.optional("title").isPresent() ? root.field("title").text() : "";
         String notes = root.optional("notes").isPresent() ? root.field("notes").text() : "";
         Map<String, Material> materials = MaterialReader.readAll(root.field("materials"), dir);
@@ -52,7 +56,9 @@ public final class CaseReader {
         Environment env = LinkAndEnvironmentReader.environment(root);
         List<ConductiveLink> links = LinkAndEnvironmentReader.links(root, surfaces);
         double[][] matrix = null;
-        if (geometry != null) {
+        if (section != null) {
+            SurfaceReader.requireListed(geometryAreas, surfaces, root.field("surfaces"));
+        } else if (geometry != null) {
             SurfaceReader.requireListed(geometryAreas, surfaces, root.field("surfaces"));
             if (geometry.solveOnFacets()) {
                 requireSolvableOnFacets(root.field("geometry").field("options").field("resolution"), surfaces, links);
@@ -74,7 +80,7 @@ public final class CaseReader {
         Map<String, Cover> covers = CoverReader.read(root.field("surfaces"), surfaces, materials,
                 geometry != null && geometry.solveOnFacets());
         return new CaseDescription(file, title, notes, new ArrayList<>(materials.values()), surfaces, env, links,
-                matrix, geometry, bands, settings, sources, loadCases, expected, warnings, covers);
+                matrix, geometry, bands, settings, sources, loadCases, expected, warnings, covers, section);
     }
 
     /** A case solved facet by facet: no conductive links and no windows (both join whole surfaces). */

@@ -80,6 +80,11 @@ final class CheckCommand implements Callable<Integer> {
                     : s.boundary().label() + " (" + (s.isWindowFace() ? "window" : "two-sided") + " face; other face '"
                     + s.otherFace() + "')"));
         }
+        if (c.description().section() != null) {
+            var sec = c.description().section();
+            out.println("  section: 2-D, " + sec.section().size() + " parts of " + sec.areasM2().size() + " surfaces, "
+                    + Numbers.area(sec.section().axialLength_m()) + " m long (crossed strings; heats for the whole length)");
+        }
         c.description().covers().forEach((surface, cover) -> out.println("  covered: " + surface + " under "
                 + (cover.effective() ? "a pack of effective emittance " + Numbers.ratio(cover.effectiveEmittance())
                 : cover.layers() + " layer" + (cover.layers() == 1 ? "" : "s") + " of " + cover.layerMaterial().name())

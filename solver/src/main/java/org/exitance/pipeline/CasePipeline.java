@@ -46,6 +46,13 @@ public final class CasePipeline {
     /** Prepares a case already read: view factors, facet expansion, source incidence, the model. */
     public static PreparedCase prepare(CaseDescription d, ViewFactorStage.Request request) throws CaseException {
         CaseGeometry g = d.geometry();
+        if (d.section() != null) {
+            List<String> warnings = new ArrayList<>(d.warnings());
+            double[][] f = GeometryViewFactors.consistent(SectionStage.viewFactors(d, warnings), d.surfaces(),
+                    d.environment() != null, d.file(), warnings);
+            return new PreparedCase(d, surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null)), warnings,
+                    null);
+        }
         if (g == null) {
             List<String> warnings = new ArrayList<>(d.warnings());
             RadiationCase model = surfaceModel(d, GivenViewFactors.consistent(d, warnings),
