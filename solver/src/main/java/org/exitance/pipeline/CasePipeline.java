@@ -27,7 +27,7 @@ import org.exitance.model.ViewFactorMatrix;
  * A library user who only wants what the file says calls {@link CaseReader#read} instead, which
  * computes no view factors and writes no cache. Checks that need the view factors (a geometry
  * without an environment must be closed) run here, after every check of the reader; a given
- * matrix that is not reciprocal and closed is made so here ({@link GivenViewFactors}).
+ * matrix that is not reciprocal and closed is made so here ({@link ConsistentViewFactors}).
  */
 public final class CasePipeline {
     private CasePipeline() {
@@ -46,30 +46,28 @@ public final class CasePipeline {
     /** Prepares a case already read: view factors, facet expansion, source incidence, the model. */
     public static PreparedCase prepare(CaseDescription d, ViewFactorStage.Request request) throws CaseException {
         CaseGeometry g = d.geometry();
+        List<String> warnings = new ArrayList<>(d.warnings());
+        boolean open = d.environment() != null;
         if (d.section() != null) {
-            List<String> warnings = new ArrayList<>(d.warnings());
-            double[][] f = GeometryViewFactors.consistent(SectionStage.viewFactors(d, warnings), d.surfaces(),
-                    d.environment() != null, d.file(), warnings);
+            double[][] f = ConsistentViewFactors.forSolve(SectionStage.viewFactors(d, warnings), d.surfaces(), open,
+                    d.file(), "$.section", warnings);
             return new PreparedCase(d, surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null)), warnings,
                     null);
         }
         if (g == null) {
-            List<String> warnings = new ArrayList<>(d.warnings());
-            RadiationCase model = surfaceModel(d, GivenViewFactors.consistent(d, warnings),
-                    SourceIncidence.place(d.sources(), null, null));
+            double[][] f = ConsistentViewFactors.forSolve(d.viewFactors(), d.surfaces(), open, d.file(),
+                    "$.viewFactors.matrix", warnings);
+            RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null));
             return new PreparedCase(d, model, warnings, null);
         }
-        List<String> warnings = new ArrayList<>(d.warnings());
         ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets());
-        double[][] f = GeometryViewFactors.inCaseOrder(computed, d.surfaces(), d.environment() != null, d.file(),
-                warnings);
+        double[][] f = GeometryViewFactors.inCaseOrder(computed, d.surfaces(), open, d.file(), warnings);
         if (!g.solveOnFacets()) {
-            f = GeometryViewFactors.consistent(f, d.surfaces(), d.environment() != null, d.file(), warnings);
+            f = ConsistentViewFactors.forSolve(f, d.surfaces(), open, d.file(), "$.geometry", warnings);
             RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), g.scene(), null));
             return new PreparedCase(d, model, warnings, computed);
         }
-        FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces(), d.environment() != null,
-                d.file(), warnings);
+        FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces(), open, d.file(), warnings);
         Enclosure enclosure = enclosure(d, facets.surfaces(), facets.matrix());  // shares the facet matrix
         List<ExternalSource> sources = FacetExpansion.spreadOverFacets(
                 SourceIncidence.place(d.sources(), g.scene(), facets.sceneOrder()), facets.groups());

@@ -1,6 +1,10 @@
 package org.exitance.pipeline;
 
+import java.nio.file.Path;
+import java.util.List;
+import org.exitance.cases.CaseException;
 import org.exitance.cases.CaseReader;
+import org.exitance.model.EnclosureSurface;
 import org.exitance.geometry.viewfactor.ExchangeAreaSmoother;
 import org.exitance.geometry.viewfactor.Smoothing;
 import org.exitance.geometry.viewfactor.SmoothingReport;
@@ -16,8 +20,8 @@ import org.exitance.geometry.viewfactor.SmoothingReport;
  */
 final class ConsistentViewFactors {
     /** Largest relative reciprocity or row-sum error of a matrix used as it is. */
-    static final double CONSISTENT = 1e-12;
-    /** Largest such error of a repaired matrix (the smoothing iterates to about this). */
+    static final double CONSISTENT = 1e-9;
+    /** Largest such error of a repaired matrix. */
     static final double REPAIRED = 1e-9;
 
     private ConsistentViewFactors() {
@@ -30,6 +34,41 @@ final class ConsistentViewFactors {
         Unrepairable(String message) {
             super(message);
         }
+    }
+
+    /**
+     * The surface matrix a solve uses, made consistent.
+     *
+     * @param f        F[i][j] in the order of {@code surfaces}; not modified
+     * @param jsonPath where an unrepairable matrix is reported ({@code $.viewFactors.matrix}, {@code $.geometry})
+     * @param warnings receives a line when the matrix is changed (modified)
+     * @return f itself when consistent, else a new array
+     * @throws CaseException when no consistent matrix lies near f
+     */
+    static double[][] forSolve(double[][] f, List<EnclosureSurface> surfaces, boolean open, Path file,
+                               String jsonPath, List<String> warnings) throws CaseException {
+        int n = surfaces.size();
+        double[] flat = new double[n * n];
+        double[] area = new double[n];
+        for (int i = 0; i < n; i++) {
+            area[i] = surfaces.get(i).areaM2();
+            System.arraycopy(f[i], 0, flat, i * n, n);
+        }
+        String changed;
+        try {
+            changed = repair(flat, n, area, open);
+        } catch (Unrepairable e) {
+            throw new CaseException(file, jsonPath, e.getMessage() + ": check the areas against the view factors");
+        }
+        if (changed == null) {
+            return f;
+        }
+        warnings.add(changed);
+        double[][] out = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(flat, i * n, out[i], 0, n);
+        }
+        return out;
     }
 
     /**

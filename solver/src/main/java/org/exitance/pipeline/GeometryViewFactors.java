@@ -62,37 +62,4 @@ final class GeometryViewFactors {
         }
         return f;
     }
-
-    /**
-     * The surface matrix made consistent for the solve ({@link ConsistentViewFactors}).
-     *
-     * @param f        F[i][j] in the order of {@code surfaces}; not modified
-     * @param warnings receives a line when the matrix is changed (modified)
-     * @return f itself when consistent, else a new array
-     */
-    static double[][] consistent(double[][] f, List<EnclosureSurface> surfaces, boolean open, Path file,
-                                 List<String> warnings) throws CaseException {
-        int n = surfaces.size();
-        double[] flat = new double[n * n];
-        double[] area = new double[n];
-        for (int i = 0; i < n; i++) {
-            area[i] = surfaces.get(i).areaM2();
-            System.arraycopy(f[i], 0, flat, i * n, n);
-        }
-        String changed;
-        try {
-            changed = ConsistentViewFactors.repair(flat, n, area, open);
-        } catch (ConsistentViewFactors.Unrepairable e) {
-            throw new CaseException(file, "$.geometry", e.getMessage());
-        }
-        if (changed == null) {
-            return f;
-        }
-        warnings.add(changed);
-        double[][] out = new double[n][n];
-        for (int i = 0; i < n; i++) {
-            System.arraycopy(flat, i * n, out[i], 0, n);
-        }
-        return out;
-    }
 }

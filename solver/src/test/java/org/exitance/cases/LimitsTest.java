@@ -148,7 +148,7 @@ class LimitsTest {
         ObjectNode c = RepoCases.plates();
         surface(c, 1).put("area_m2", 1.0001);
         Path file = RepoCases.write(dir, "unequal-plates.json", c);
-        BadInput.rejected(file, "$.viewFactors.matrix", "no reciprocal, closed set of view factors", "areas");
+        BadInput.rejected(file, "$.viewFactors.matrix", "no reciprocal, closed set of view factors", "check the areas");
     }
 
     @Test
