@@ -24,8 +24,6 @@ final class PairEvaluator {
     static final int ZERO = 0, CLIPPED = 1, CONTOUR = 2, QUADRATURE = 3, PARTIAL = 4, HIDDEN = 5;
     static final int COUNTERS = 6;
 
-    /** Relative error attributed to the contour integral (measured against closed forms: below 1e-10 at order 6). */
-    static final double CONTOUR_RELATIVE_ERROR = 1e-10;
 
     private final FacetTable t;
     private final TriangleBvh occluders;
@@ -35,6 +33,8 @@ final class PairEvaluator {
     private final ContourIntegral contour = new ContourIntegral();
     private final AreaQuadrature quadrature;
     private final VisibilityQuadrature visibility;
+    private final SplitPairs split;
+    private final double contourTolerance;
     private final Shaft shaft = new Shaft();
     private final Poly p = new Poly();
     private final Poly q = new Poly();
@@ -50,6 +50,8 @@ final class PairEvaluator {
         this.contourOrder = contourOrder;
         this.visibilityOrder = visibilityOrder;
         this.quadrature = new AreaQuadrature(t);
+        this.contourTolerance = 0.1 * rule.tolerance();
+        this.split = new SplitPairs(contour, quadrature, rule, contourOrder);
         this.visibility = occluders == null ? null : new VisibilityQuadrature(t, occluders);
     }
 
@@ -102,8 +104,8 @@ final class PairEvaluator {
         }
         double s;
         if (order == 0) {
-            s = contour.exchangeArea(p, q, contourOrder);
-            lastError = CONTOUR_RELATIVE_ERROR * Math.abs(s);
+            s = split.exchangeArea(p, q, contourTolerance);
+            lastError = split.lastError;
         } else {
             s = quadrature.exchangeArea(p, q, order);
             lastError = rule.bound(rho) * p.area * q.area / (Math.PI * r * r);

@@ -87,9 +87,72 @@ final class Poly {
                 out++;
             }
         }
-        System.arraycopy(scratch, 0, xyz, 0, 3 * out);
-        n = out;
+        // drop vertices that (nearly) repeat their predecessor: a vertex on the plane can come
+        // back as an intersection point a rounding error away, and a zero-length edge has no tangent
+        double tol2 = sqDist(1e-12 * radius);
+        int kept = 0;
+        for (int k = 0; k < out; k++) {
+            int prev = kept == 0 ? out - 1 : -1;
+            double px, py, pz;
+            if (prev >= 0) {
+                px = scratch[3 * prev];
+                py = scratch[3 * prev + 1];
+                pz = scratch[3 * prev + 2];
+            } else {
+                px = xyz[3 * (kept - 1)];
+                py = xyz[3 * (kept - 1) + 1];
+                pz = xyz[3 * (kept - 1) + 2];
+            }
+            double dx = scratch[3 * k] - px, dy = scratch[3 * k + 1] - py, dz = scratch[3 * k + 2] - pz;
+            if (dx * dx + dy * dy + dz * dz > tol2 || out == 1) {
+                System.arraycopy(scratch, 3 * k, xyz, 3 * kept, 3);
+                kept++;
+            }
+        }
+        n = kept;
         clipped = true;
         updateMeasures();
+    }
+
+    private static double sqDist(double d) {
+        return d * d;
+    }
+
+    /** Copies {@code o} into this. Modifies this. */
+    void copyFrom(Poly o) {
+        n = o.n;
+        System.arraycopy(o.xyz, 0, xyz, 0, 3 * n);
+        nx = o.nx;
+        ny = o.ny;
+        nz = o.nz;
+        area = o.area;
+        cx = o.cx;
+        cy = o.cy;
+        cz = o.cz;
+        radius = o.radius;
+        facet = o.facet;
+        clipped = o.clipped;
+    }
+
+    /**
+     * Direction of the largest extent: from the centroid to the farthest vertex (unit). Writes
+     * {@code dir[0..2]} (modified).
+     */
+    void longAxis(double[] dir) {
+        double best = -1;
+        for (int k = 0; k < n; k++) {
+            double dx = xyz[3 * k] - cx, dy = xyz[3 * k + 1] - cy, dz = xyz[3 * k + 2] - cz;
+            double d2 = dx * dx + dy * dy + dz * dz;
+            if (d2 > best) {
+                best = d2;
+                dir[0] = dx;
+                dir[1] = dy;
+                dir[2] = dz;
+            }
+        }
+        double len = Math.sqrt(best);
+        dir[0] /= len;
+        dir[1] /= len;
+        dir[2] /= len;
     }
 }

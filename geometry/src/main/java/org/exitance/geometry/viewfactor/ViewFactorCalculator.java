@@ -88,6 +88,11 @@ public final class ViewFactorCalculator {
                         }
                         for (int j = i + 1; j < n; j++) {
                             double s = ev.exchangeArea(i, j);
+                            if (!Double.isFinite(s) || !Double.isFinite(ev.lastError)) {
+                                // never let NaN or infinity out: an internal error, not a result
+                                throw new ArithmeticException("non-finite exchange area between facets " + i
+                                        + " and " + j + " (internal error)");
+                            }
                             f[i * n + j] = s / t.area[i];
                             f[j * n + i] = s / t.area[j];
                             err[i] += ev.lastError;

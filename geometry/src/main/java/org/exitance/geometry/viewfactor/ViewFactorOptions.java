@@ -37,7 +37,7 @@ public record ViewFactorOptions(int threads, double pairTolerance, int contourOr
 
     /** @return the defaults: all cores, 1e-7, contour order 6, visibility order 2, AUTO, NONE */
     public static ViewFactorOptions defaults() {
-        return new ViewFactorOptions(0, 1e-7, 6, 2, Obstruction.AUTO, Smoothing.NONE);
+        return new ViewFactorOptions(0, 1e-7, 10, 2, Obstruction.AUTO, Smoothing.NONE);
     }
 
     /** @return a copy with another thread count */
