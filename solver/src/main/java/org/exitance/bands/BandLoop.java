@@ -23,8 +23,10 @@ public final class BandLoop {
     private final ExternalIrradiation[] external;
     private int maxIterations;
     private double maxRelativeResidual;
+    private final int[] bandIterations;
 
     private BandLoop(List<Band> bands, double[][] emissivity, BandNetwork[] networks, ExternalIrradiation[] external) {
+        this.bandIterations = new int[networks.length];
         this.bands = bands;
         this.emissivity = emissivity;
         this.networks = networks;
@@ -63,12 +65,20 @@ public final class BandLoop {
     public BandState[] solve(double[] t) {
         double[][] e = emissivePowers(t);
         BandState[] states = new BandState[networks.length];
+        // bands are independent: solved in parallel, each by the same operations whatever the thread
+        java.util.stream.IntStream.range(0, networks.length).parallel()
+                .forEach(k -> states[k] = networks[k].solve(e[k]));
         for (int k = 0; k < networks.length; k++) {
-            states[k] = networks[k].solve(e[k]);
             maxIterations = Math.max(maxIterations, states[k].iterations());
+            bandIterations[k] = Math.max(bandIterations[k], states[k].iterations());
             maxRelativeResidual = Math.max(maxRelativeResidual, states[k].relativeResidual());
         }
         return states;
+    }
+
+    /** Per band, the most linear-solver iterations of any solve so far (a new array). */
+    public int[] iterationsPerBand() {
+        return bandIterations.clone();
     }
 
     /** Band emissive powers E_ik (W/m²), [band][surface], at temperatures t (K, not modified). */

@@ -37,6 +37,7 @@ public final class BandNetwork {
     private final double[] reflected;
     private final double[] retained;
     private final double[] retainedMagnitude;
+    private final double[] area;
     private final RadiositySolver.Prepared prepared;
 
     /**
@@ -95,7 +96,8 @@ public final class BandNetwork {
             other[i] = windows.other(i);
             rho[i] = Math.max(0.0, 1.0 - eps[i] - tau[i]);
         }
-        this.prepared = solver.prepare(f, n, rho, areasM2.clone(), windows);
+        this.area = areasM2.clone();
+        this.prepared = solver.prepare(f, n, rho, area, windows);
     }
 
     /**
@@ -128,7 +130,148 @@ public final class BandNetwork {
             q[i] = emitted - taken + fromOther - retained[i];
             through[i] = Math.abs(emitted) + Math.abs(taken) + Math.abs(fromOther) + retainedMagnitude[i];
         }
-        return new BandState(j, g, q, through, prepared.lastIterations(), prepared.lastRelativeResidual());
+        double residual = checkedResidual(b, j, fj);
+        return new BandState(j, g, q, through, prepared.lastIterations(), residual);
+    }
+
+    /**
+     * The relative residual ‖b − (I − ρF − TF)J‖∞ / ‖b‖∞ of a solve, from the product F·J already
+     * formed (no extra pass over F).
+     *
+     * @param b   right-hand side, not modified
+     * @param j   solution, not modified
+     * @param fj  F·J, not modified
+     * @throws NetworkConvergenceException when it exceeds what the strategy accepts (a singular or
+     *         too ill-conditioned band)
+     */
+    private double checkedResidual(double[] b, double[] j, double[] fj) {
+        double worst = 0;
+        double scale = 0;
+        for (int i = 0; i < n; i++) {
+            double v = j[i] - rho[i] * fj[i] - (other[i] >= 0 ? tau[i] * fj[other[i]] : 0.0);
+            worst = Math.max(worst, Math.abs(b[i] - v));
+            scale = Math.max(scale, Math.abs(b[i]));
+        }
+        double residual = scale > 0 ? worst / scale : worst;
+        if (!(residual <= prepared.acceptedResidual())) {
+            throw new NetworkConvergenceException("radiosity matrix is singular or too ill-conditioned (relative"
+                    + " residual " + residual + " after " + prepared.lastIterations() + " iteration(s) of "
+                    + "the band solve): a closed part of the enclosure reflects (almost) everything in this band",
+                    prepared.lastIterations(), residual);
+        }
+        return residual;
+    }
+
+    /**
+     * The heat sensitivities of the unknown nodes in this band, from one blocked solve for all
+     * nodes' columns ({@link RadiositySolver.Prepared#solveBlock}): entry {@code [a·m + c]} is
+     * {@code Σ_{i ∈ a} A_i ∂q_i/∂E_c} (m²), where raising node c's emissive power raises that of all
+     * its faces. The flux derivative is that of the net-flux form of {@link #solve}, exact and free
+     * of cancellation as ε → 0. Memory: one N×m array for the block besides the m×m result.
+     *
+     * @param nodeFaces  per node, its faces (a surface, or a window's two faces); not modified
+     * @return a new m×m row-major array
+     */
+    public double[] nodeHeatSensitivities(int[][] nodeFaces) {
+        int m = nodeFaces.length;
+        double[] x = new double[Math.multiplyExact(n, m)];
+        for (int c = 0; c < m; c++) {
+            for (int face : nodeFaces[c]) {
+                x[face * m + c] += eps[face];
+            }
+        }
+        prepared.solveBlock(x, m, x);
+        double[] out = new double[m * m];
+        java.util.stream.IntStream.range(0, m).parallel().forEach(a -> {
+            double[] fx = new double[m];
+            double[] fo = new double[m];
+            int row = a * m;
+            for (int i : nodeFaces[a]) {
+                rowTimesBlock(i, x, m, fx);
+                double take = eps[i] + tau[i];
+                for (int c = 0; c < m; c++) {
+                    out[row + c] -= area[i] * take * fx[c];
+                }
+                if (other[i] >= 0 && tau[i] != 0) {
+                    rowTimesBlock(other[i], x, m, fo);
+                    for (int c = 0; c < m; c++) {
+                        out[row + c] += area[i] * tau[i] * fo[c];
+                    }
+                }
+            }
+        });
+        int[] nodeOf = new int[n];
+        java.util.Arrays.fill(nodeOf, -1);
+        for (int c = 0; c < m; c++) {
+            for (int face : nodeFaces[c]) {
+                nodeOf[face] = c;
+            }
+        }
+        for (int a = 0; a < m; a++) {
+            for (int i : nodeFaces[a]) {
+                out[a * m + nodeOf[i]] += area[i] * eps[i];
+            }
+        }
+        return out;
+    }
+
+    /** out = row i of F times the N×m block x; x not modified, out modified. */
+    private void rowTimesBlock(int i, double[] x, int m, double[] out) {
+        java.util.Arrays.fill(out, 0.0);
+        int row = i * n;
+        for (int k = 0; k < n; k++) {
+            double fik = f[row + k];
+            if (fik != 0) {
+                int xk = k * m;
+                for (int c = 0; c < m; c++) {
+                    out[c] += fik * x[xk + c];
+                }
+            }
+        }
+    }
+
+    /**
+     * The change of the net flux of the given surfaces when the emissive powers change by δE, at
+     * fixed properties: one band solve, {@code (I − ρF − TF) x = ε δE}, then
+     * {@code δq_i = ε_i δE_i − (ε_i + τ_i)(Fx)_i + τ_i (Fx)_o(i)} (W/m²). This is the band's part of
+     * a Jacobian–vector product of Newton–Krylov; only the rows asked for are formed.
+     *
+     * @param deltaEmissive  δE per surface (W/m²), not modified
+     * @param rows           the surfaces whose δq is wanted; not modified
+     * @return δq of those surfaces, in the order of {@code rows} (a new array)
+     */
+    public double[] fluxResponse(double[] deltaEmissive, int[] rows) {
+        double[] b = new double[n];
+        for (int i = 0; i < n; i++) {
+            b[i] = eps[i] * deltaEmissive[i];
+        }
+        double[] x = new double[n];
+        prepared.solve(b, x);
+        double[] out = new double[rows.length];
+        for (int r = 0; r < rows.length; r++) {
+            int i = rows[r];
+            double v = b[i] - (eps[i] + tau[i]) * rowTimes(i, x);
+            if (other[i] >= 0 && tau[i] != 0) {
+                v += tau[i] * rowTimes(other[i], x);
+            }
+            out[r] = v;
+        }
+        return out;
+    }
+
+    /** Iterations of the last linear solve of this band. */
+    public int lastIterations() {
+        return prepared.lastIterations();
+    }
+
+    /** (F x)_i; x not modified. */
+    private double rowTimes(int i, double[] x) {
+        double s = 0;
+        int row = i * n;
+        for (int k = 0; k < n; k++) {
+            s += f[row + k] * x[k];
+        }
+        return s;
     }
 
     /**
@@ -145,6 +288,7 @@ public final class BandNetwork {
         double[] x = new double[n];
         prepared.solve(b, x);
         double[] fx = irradiationFrom(x, new double[n]);
+        checkedResidual(b, x, fx);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             // the derivative of the net-flux form of solve(): exact, and free of cancellation as ε → 0
@@ -168,6 +312,7 @@ public final class BandNetwork {
         double[] x = new double[n];
         prepared.solve(b, x);
         double[] fx = irradiationFrom(x, new double[n]);
+        checkedResidual(b, x, fx);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             out[i] = x[i] - fx[i];

@@ -54,10 +54,43 @@ public interface RadiositySolver {
          */
         void solve(double[] b, double[] j);
 
+        /**
+         * Solves for several right-hand sides at once: {@code (I − diag(ρ) F − T F) X = B}, with B
+         * and X N×cols row-major (row i at [i·cols, (i+1)·cols)). The direct strategy does this with
+         * one factorization and one residual check of the block; the default solves column by column.
+         *
+         * @param b     right-hand sides (W/m² or per unit), N×cols; not modified unless it is x itself
+         * @param cols  number of right-hand sides
+         * @param x     receives X, N×cols; modified (may be the same array as b: solved in place)
+         */
+        default void solveBlock(double[] b, int cols, double[] x) {
+            int n = b.length / Math.max(cols, 1);
+            double[] col = new double[n];
+            double[] out = new double[n];
+            for (int c = 0; c < cols; c++) { // column c is read before it is overwritten
+                for (int i = 0; i < n; i++) {
+                    col[i] = b[i * cols + c];
+                }
+                solve(col, out);
+                for (int i = 0; i < n; i++) {
+                    x[i * cols + c] = out[i];
+                }
+            }
+        }
+
+        /**
+         * The largest relative residual {@code ‖b − AJ‖∞ / ‖b‖∞} the strategy accepts; the band
+         * network checks every solve against it with the product F·J it computes anyway.
+         */
+        double acceptedResidual();
+
         /** Iterations used by the last solve (1 for a direct solve). */
         int lastIterations();
 
-        /** Relative residual ‖b − AJ‖∞ / ‖b‖∞ of the last solve. */
+        /**
+         * Relative residual ‖b − AJ‖∞ / ‖b‖∞ of the last solve, as the strategy knows it without an
+         * extra product (0 for a direct solve, whose residual the network measures).
+         */
         double lastRelativeResidual();
     }
 

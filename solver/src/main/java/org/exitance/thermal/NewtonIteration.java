@@ -20,11 +20,13 @@ final class NewtonIteration {
     private final Problem p;
     private final SolverSettings settings;
     private final Counters counters;
+    private final SolverChoice choice;
 
-    NewtonIteration(Problem p, SolverSettings settings, Counters counters) {
+    NewtonIteration(Problem p, SolverSettings settings, Counters counters, SolverChoice choice) {
         this.p = p;
         this.settings = settings;
         this.counters = counters;
+        this.choice = choice;
     }
 
     /**
@@ -40,14 +42,23 @@ final class NewtonIteration {
     double[] solve(BandLoop loop, double[] start) {
         int[] u = p.unknown;
         int m = u.length;
-        double[][][] sens = Jacobian.nodeSensitivities(p, loop);
+        // direct: the sensitivities of every band, from one blocked solve each, serve every Newton step
+        double[][] sens = choice.jacobianFree() ? null : Jacobian.nodeHeatSensitivities(p, loop);
+        KrylovStep krylov = choice.jacobianFree() ? new KrylovStep(p, loop) : null;
         double[] t = start.clone();
         NodeBalance bal = NodeBalance.of(p, loop.solve(t), t, settings.relativeHeatTolerance());
         for (int it = 0; it < settings.maxNewtonIterations(); it++) {
             double norm = bal.scaledNorm();
-            DMatrixRMaj jac = Jacobian.of(p, sens, loop.emissivePowerDerivatives(t));
-            Posedness.requireLiveColumns(p, jac);
-            double[] dx = step(jac, bal.residualW());
+            double[] dx;
+            if (krylov != null) {
+                int before = krylov.products();
+                dx = krylov.solve(loop.emissivePowerDerivatives(t), bal);
+                counters.krylovProducts += krylov.products() - before;
+            } else {
+                DMatrixRMaj jac = Jacobian.compact(p, sens, loop.emissivePowerDerivatives(t));
+                Posedness.requireLiveColumns(p, jac);
+                dx = step(jac, bal.residualW());
+            }
             double lambda = 1.0;
             for (int a = 0; a < m; a++) {
                 double d = Math.abs(dx[a]);
