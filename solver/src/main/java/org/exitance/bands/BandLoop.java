@@ -4,6 +4,7 @@ import java.util.List;
 import org.exitance.model.Band;
 import org.exitance.network.BandNetwork;
 import org.exitance.network.BandState;
+import org.exitance.network.NetworkGroup;
 import org.exitance.network.RadiositySolver;
 import org.exitance.network.WindowCoupling;
 import org.exitance.spectral.Planck;
@@ -64,16 +65,26 @@ public final class BandLoop {
      */
     public BandState[] solve(double[] t) {
         double[][] e = emissivePowers(t);
-        BandState[] states = new BandState[networks.length];
-        // bands are independent: solved in parallel, each by the same operations whatever the thread
-        java.util.stream.IntStream.range(0, networks.length).parallel()
-                .forEach(k -> states[k] = networks[k].solve(e[k]));
+        // all bands at once: side by side, or iterating together over one pass of F per iteration
+        BandState[] states = NetworkGroup.solve(networks, e);
         for (int k = 0; k < networks.length; k++) {
             maxIterations = Math.max(maxIterations, states[k].iterations());
             bandIterations[k] = Math.max(bandIterations[k], states[k].iterations());
             maxRelativeResidual = Math.max(maxRelativeResidual, states[k].relativeResidual());
         }
         return states;
+    }
+
+    /**
+     * The net-flux change of the given surfaces in every band for emissive-power changes δE at the
+     * loop's fixed properties (one band solve per band, all bands at once; {@link NetworkGroup}).
+     *
+     * @param delta  δE per band and surface (W/m²), not modified
+     * @param rows   the surfaces wanted, not modified
+     * @return δq per band, in the order of rows (W/m²)
+     */
+    public double[][] fluxResponses(double[][] delta, int[] rows) {
+        return NetworkGroup.fluxResponses(networks, delta, rows);
     }
 
     /** Per band, the most linear-solver iterations of any solve so far (a new array). */

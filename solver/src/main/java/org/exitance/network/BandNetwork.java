@@ -112,13 +112,27 @@ public final class BandNetwork {
      * @return radiosity, irradiation, net flux and throughput of every surface
      */
     public BandState solve(double[] emissive) {
+        double[] b = source(emissive);
+        double[] j = new double[n];
+        prepared.solve(b, j);
+        return finish(emissive, b, j, irradiationFrom(j, new double[n]));
+    }
+
+    /** The right-hand side ε_i E_i + R_i of a solve (a new array; emissive not modified). */
+    double[] source(double[] emissive) {
         double[] b = new double[n];
         for (int i = 0; i < n; i++) {
             b[i] = eps[i] * emissive[i] + reflected[i];
         }
-        double[] j = new double[n];
-        prepared.solve(b, j);
-        double[] fj = irradiationFrom(j, new double[n]);
+        return b;
+    }
+
+    /**
+     * The band state of a solved J, with its residual checked ({@link #checkedResidual}).
+     *
+     * @param emissive  E (W/m²), b its right-hand side, j the solution, fj = F·J; none modified
+     */
+    BandState finish(double[] emissive, double[] b, double[] j, double[] fj) {
         double[] g = new double[n];
         double[] q = new double[n];
         double[] through = new double[n];
@@ -132,6 +146,39 @@ public final class BandNetwork {
         }
         double residual = checkedResidual(b, j, fj);
         return new BandState(j, g, q, through, prepared.lastIterations(), residual);
+    }
+
+    /** The prepared linear operator of this band. */
+    RadiositySolver.Prepared prepared() {
+        return prepared;
+    }
+
+    /** The view factors (shared). */
+    double[] viewFactors() {
+        return f;
+    }
+
+    /** ε_i δE_i (a new array; not modified). */
+    double[] responseSource(double[] deltaEmissive) {
+        double[] b = new double[n];
+        for (int i = 0; i < n; i++) {
+            b[i] = eps[i] * deltaEmissive[i];
+        }
+        return b;
+    }
+
+    /** δq_i from the source b_i = ε_i δE_i, (Fx)_i and (Fx)_o(i) (the latter ignored without a window). */
+    double response(int i, double[] b, double fxi, double fxo) {
+        double v = b[i] - (eps[i] + tau[i]) * fxi;
+        if (other[i] >= 0 && tau[i] != 0) {
+            v += tau[i] * fxo;
+        }
+        return v;
+    }
+
+    /** Surface i's other face, or −1. */
+    int otherFace(int i) {
+        return other[i];
     }
 
     /**
@@ -241,20 +288,13 @@ public final class BandNetwork {
      * @return δq of those surfaces, in the order of {@code rows} (a new array)
      */
     public double[] fluxResponse(double[] deltaEmissive, int[] rows) {
-        double[] b = new double[n];
-        for (int i = 0; i < n; i++) {
-            b[i] = eps[i] * deltaEmissive[i];
-        }
+        double[] b = responseSource(deltaEmissive);
         double[] x = new double[n];
         prepared.solve(b, x);
         double[] out = new double[rows.length];
         for (int r = 0; r < rows.length; r++) {
             int i = rows[r];
-            double v = b[i] - (eps[i] + tau[i]) * rowTimes(i, x);
-            if (other[i] >= 0 && tau[i] != 0) {
-                v += tau[i] * rowTimes(other[i], x);
-            }
-            out[r] = v;
+            out[r] = response(i, b, rowTimes(i, x), other[i] >= 0 ? rowTimes(other[i], x) : 0.0);
         }
         return out;
     }
@@ -336,17 +376,10 @@ public final class BandNetwork {
         return d;
     }
 
-    /** G = F J + H; arrays not modified, result new. */
+    /** G = F J + H, rows in parallel; arrays not modified, result new. */
     private double[] irradiationFrom(double[] j, double[] external) {
         double[] g = new double[n];
-        for (int i = 0; i < n; i++) {
-            int row = i * n;
-            double s = external[i];
-            for (int k = 0; k < n; k++) {
-                s += f[row + k] * j[k];
-            }
-            g[i] = s;
-        }
+        java.util.stream.IntStream.range(0, n).parallel().forEach(i -> g[i] = external[i] + rowTimes(i, j));
         return g;
     }
 

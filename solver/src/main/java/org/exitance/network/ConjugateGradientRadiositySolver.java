@@ -1,6 +1,5 @@
 package org.exitance.network;
 
-import java.util.stream.IntStream;
 
 /**
  * Preconditioned conjugate gradients on the symmetric form of the radiosity equations.
@@ -59,204 +58,20 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
             throw new IllegalArgumentException("conjugate gradients need a symmetric radiosity matrix; an enclosure"
                     + " with windows needs the direct solver (RadiositySolver.forSize)");
         }
-        int[] free = new int[n];
-        int m = 0;
-        for (int i = 0; i < n; i++) {
-            if (rho[i] > 0) {
-                free[m++] = i;
-            }
-        }
-        return new Symmetric(f, n, rho.clone(), area.clone(), java.util.Arrays.copyOf(free, m), relativeTolerance,
-                maxIterations);
+        return new SymmetricBand(f, n, rho.clone(), area.clone(), relativeTolerance, maxIterations);
     }
 
-    /** The prepared symmetric operator of one band. */
-    private static final class Symmetric implements Prepared {
-        private final double[] f;
-        private final int n;
-        private final double[] rho;
-        private final double[] area;
-        private final int[] idx;
-        private final double[] diag;
-        private final double coarse;
-        private final double tol;
-        private final int maxIterations;
-        private int iterations;
-        private double residual;
-
-        Symmetric(double[] f, int n, double[] rho, double[] area, int[] idx, double tol, int maxIterations) {
-            this.f = f;
-            this.n = n;
-            this.rho = rho;
-            this.area = area;
-            this.idx = idx;
-            this.tol = tol;
-            this.maxIterations = maxIterations;
-            int count = idx.length;
-            diag = new double[count];
-            double[] ones = new double[count];
-            java.util.Arrays.fill(ones, 1.0);
-            double[] s1 = new double[count];
-            multiply(ones, s1);
-            double zsz = 0;
-            for (int a = 0; a < count; a++) {
-                int i = idx[a];
-                diag[a] = area[i] / rho[i] - area[i] * f[i * n + i];
-                zsz += s1[a];
-            }
-            coarse = zsz > 0 ? 1.0 / zsz : 0.0;
-        }
-
-        @Override
-        public void solve(double[] b, double[] j) {
-            int count = idx.length;
-            double[] x = new double[n];
-            for (int i = 0; i < n; i++) {
-                if (!(rho[i] > 0)) {
-                    x[i] = b[i];
-                }
-            }
-            // c = A_i b_i/ρ_i + A_i Σ_{black k} F_ik J_k for the free rows
-            double[] c = new double[count];
-            for (int a = 0; a < count; a++) {
-                int i = idx[a];
-                double s = 0;
-                int row = i * n;
-                for (int k = 0; k < n; k++) {
-                    if (!(rho[k] > 0)) {
-                        s += f[row + k] * x[k];
-                    }
-                }
-                c[a] = area[i] * b[i] / rho[i] + area[i] * s;
-            }
-            double[] y = new double[count];
-            double[] r = c.clone();
-            double[] z = new double[count];
-            double[] p = new double[count];
-            double[] q = new double[count];
-            if (count > 0) {
-                precondition(c, y);
-                multiply(y, q);
-                for (int a = 0; a < count; a++) {
-                    r[a] = c[a] - q[a];
-                }
-            }
-            precondition(r, z);
-            System.arraycopy(z, 0, p, 0, count);
-            double rz = dot(r, z);
-            iterations = 0;
-            while (!converged(b, y, r)) {
-                if (iterations >= maxIterations) {
-                    throw new NetworkConvergenceException("conjugate gradients did not converge in " + iterations
-                            + " iterations (relative residual " + residual + "; a nearly perfectly reflecting band"
-                            + " converges slowly)", iterations, residual);
-                }
-                multiply(p, q);
-                double pq = dot(p, q);
-                if (!(pq > 0)) {
-                    throw new NetworkConvergenceException("conjugate gradients broke down (matrix not positive"
-                            + " definite: check reciprocity and that the band has some absorption)",
-                            iterations, residual);
-                }
-                double alpha = rz / pq;
-                for (int a = 0; a < count; a++) {
-                    y[a] += alpha * p[a];
-                    r[a] -= alpha * q[a];
-                }
-                precondition(r, z);
-                double rzNew = dot(r, z);
-                double beta = rzNew / rz;
-                rz = rzNew;
-                for (int a = 0; a < count; a++) {
-                    p[a] = z[a] + beta * p[a];
-                }
-                iterations++;
-            }
-            for (int a = 0; a < count; a++) {
-                x[idx[a]] = y[a];
-            }
-            System.arraycopy(x, 0, j, 0, n);
-        }
-
-        /** The heat test of the class doc on the recurrence residual; sets {@link #residual}. */
-        private boolean converged(double[] b, double[] y, double[] r) {
-            boolean ok = true;
-            double worst = 0;
-            double scale = 0;
-            for (double v : b) {
-                scale = Math.max(scale, Math.abs(v));
-            }
-            for (int a = 0; a < idx.length; a++) {
-                int i = idx[a];
-                double heat = rho[i] * r[a]; // A_i r_i (W)
-                double through = area[i] * (Math.abs(b[i]) + Math.abs(y[a]));
-                if (Math.abs(heat) > tol * through) {
-                    ok = false;
-                }
-                worst = Math.max(worst, Math.abs(heat) / area[i]);
-            }
-            residual = scale > 0 ? worst / scale : worst;
-            return ok;
-        }
-
-        /** z = (D⁻¹ + 1 (1ᵀS1)⁻¹ 1ᵀ) r; r not modified, z modified. */
-        private void precondition(double[] r, double[] z) {
-            double sum = 0;
-            for (double v : r) {
-                sum += v;
-            }
-            double shift = coarse * sum;
-            for (int a = 0; a < r.length; a++) {
-                z[a] = r[a] / diag[a] + shift;
-            }
-        }
-
-        /** out = S v on the free rows, rows in parallel; v not modified, out modified. */
-        private void multiply(double[] v, double[] out) {
-            int count = idx.length;
-            int blocks = Math.max(1, Math.min(count / 64, 64));
-            IntStream.range(0, blocks).parallel().forEach(blk -> {
-                int a0 = (int) ((long) count * blk / blocks);
-                int a1 = (int) ((long) count * (blk + 1) / blocks);
-                for (int a = a0; a < a1; a++) {
-                    int i = idx[a];
-                    int row = i * n;
-                    double s0 = 0;
-                    double s1 = 0;
-                    int bb = 0;
-                    for (; bb + 1 < count; bb += 2) {
-                        s0 += f[row + idx[bb]] * v[bb];
-                        s1 += f[row + idx[bb + 1]] * v[bb + 1];
-                    }
-                    if (bb < count) {
-                        s0 += f[row + idx[bb]] * v[bb];
-                    }
-                    out[a] = area[i] / rho[i] * v[a] - area[i] * (s0 + s1);
-                }
-            });
-        }
-
-        @Override
-        public double acceptedResidual() {
-            return Math.max(1e-8, 1e3 * tol);
-        }
-
-        @Override
-        public int lastIterations() {
-            return iterations;
-        }
-
-        @Override
-        public double lastRelativeResidual() {
-            return residual;
-        }
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int i = 0; i < a.length; i++) {
-            s += a[i] * b[i];
-        }
-        return s;
+    /**
+     * Solves several bands of the same enclosure together: each band runs its own conjugate
+     * gradients, but every iteration multiplies F with all active bands' search directions in one
+     * pass over F ({@link FusedProduct}). Each band's numbers are the same as when it is solved
+     * alone.
+     *
+     * @param bands  prepared bands sharing one view-factor array
+     * @param b      right-hand side per band, not modified
+     * @param j      receives J per band; modified
+     */
+    static void solveTogether(SymmetricBand[] bands, double[][] b, double[][] j) {
+        SymmetricBand.solveTogether(bands, b, j);
     }
 }

@@ -1,6 +1,5 @@
 package org.exitance.thermal;
 
-import java.util.stream.IntStream;
 import org.exitance.bands.BandLoop;
 
 /**
@@ -153,20 +152,19 @@ final class KrylovStep {
         return jv;
     }
 
-    /** J v (W) for node temperature changes v (K); bands in parallel, summed in band order. */
+    /** J v (W) for node temperature changes v (K); all bands at once, summed in band order. */
     double[] product(double[] v, double[][] dE) {
         int n = p.area.length;
         int nb = loop.bands().size();
-        double[][] dq = new double[nb][];
-        IntStream.range(0, nb).parallel().forEach(k -> {
-            double[] de = new double[n];
+        double[][] de = new double[nb][n];
+        for (int k = 0; k < nb; k++) {
             for (int a = 0; a < v.length; a++) {
                 for (int i : p.faces[a]) {
-                    de[i] = dE[k][i] * v[a];
+                    de[k][i] = dE[k][i] * v[a];
                 }
             }
-            dq[k] = loop.network(k).fluxResponse(de, rows);
-        });
+        }
+        double[][] dq = loop.fluxResponses(de, rows);
         double[] out = new double[v.length];
         for (int k = 0; k < nb; k++) {
             for (int r = 0; r < rows.length; r++) {

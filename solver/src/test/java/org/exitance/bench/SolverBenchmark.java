@@ -73,6 +73,7 @@ public final class SolverBenchmark {
             RadiationCase rc = BoxModels.box(size, bands);
             double[] times = new double[runs];
             SolveResult last = null;
+            long cpu0 = cpuNanos();
             for (int r = 0; r < runs; r++) {
                 System.gc();
                 long t0 = System.nanoTime();
@@ -83,11 +84,12 @@ public final class SolverBenchmark {
             double[] sorted = times.clone();
             Arrays.sort(sorted);
             double median = sorted[runs / 2];
+            double cpuPerRun = (cpuNanos() - cpu0) * 1e-9 / runs;
             SolverReport s = last.solver();
-            System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s %-9.3f %-9.3f %-9d %-7d %-7d %-8d %s  (runs %s; balance %.3g W)%n",
+            System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s %-9.3f %-9.3f %-9d %-7d %-7d %-8d %s  (runs %s; cpu %.1f s/run; balance %.3g W)%n",
                     n, m, bands, s.strategy(), median, sorted[0], s.peakHeapBytes() >> 20, s.estimatedBytes() >> 20,
                     s.newtonIterations(), s.krylovProducts(), Arrays.toString(s.bandIterations()), fmt(times),
-                    last.energyBalanceW());
+                    cpuPerRun, last.energyBalanceW());
             points.add(new double[] {n, median});
         }
         if (points.size() >= 2) {
@@ -95,6 +97,12 @@ public final class SolverBenchmark {
                     exponent(points));
         }
         pool.shutdown();
+    }
+
+    /** CPU time of the whole process so far (ns): on a shared machine, the work done, not the waiting. */
+    static long cpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
+                .getOperatingSystemMXBean()).getProcessCpuTime();
     }
 
     /** Least-squares slope of log t against log N. */
