@@ -72,6 +72,6 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
      * @param j      receives J per band; modified
      */
     static void solveTogether(SymmetricBand[] bands, double[][] b, double[][] j) {
-        SymmetricBand.solveTogether(bands, b, j);
+        SymmetricBand.solveTogether(bands, b, j, 1.0);
     }
 }

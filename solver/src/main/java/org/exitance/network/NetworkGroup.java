@@ -34,7 +34,7 @@ public final class NetworkGroup {
         for (int k = 0; k < nb; k++) {
             b[k] = nets[k].source(emissive[k]);
         }
-        SymmetricBand.solveTogether(cg, b, j);
+        SymmetricBand.solveTogether(cg, b, j, 1.0);
         double[] fj = product(nets[0].viewFactors(), n, j);
         for (int k = 0; k < nb; k++) {
             double[] col = new double[n];
@@ -48,7 +48,9 @@ public final class NetworkGroup {
 
     /**
      * The net-flux change of the given surfaces in every band for emissive-power changes δE at
-     * fixed properties ({@link BandNetwork#fluxResponse}, all bands at once).
+     * fixed properties ({@link BandNetwork#fluxResponse}, all bands at once). With conjugate
+     * gradients the responses are solved to a tolerance relaxed by
+     * {@link SymmetricBand#RESPONSE_RELAXATION} (1e-9 per surface): they steer Newton steps only.
      *
      * @param delta  δE per band and surface (W/m²), not modified
      * @param rows   the surfaces wanted, not modified
@@ -68,7 +70,7 @@ public final class NetworkGroup {
         for (int k = 0; k < nb; k++) {
             b[k] = nets[k].responseSource(delta[k]);
         }
-        SymmetricBand.solveTogether(cg, b, x);
+        SymmetricBand.solveTogether(cg, b, x, SymmetricBand.RESPONSE_RELAXATION);
         // F x on the rows asked for and (for windows) their other faces
         double[] v = interleave(x, n);
         double[] w = new double[rows.length * nb];

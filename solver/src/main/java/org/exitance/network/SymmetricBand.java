@@ -45,13 +45,24 @@ final class SymmetricBand implements RadiositySolver.Prepared {
         coarse = zsz > 0 ? 1.0 / zsz : 0.0;
     }
 
+    /**
+     * Tolerance factor of the flux responses behind Newton–Krylov products: they only steer the
+     * Newton step (GMRES asks for 1e-8 of the Newton residual), never the converged residual, which
+     * every path evaluates with full band solves.
+     */
+    static final double RESPONSE_RELAXATION = 1e4;
+
     @Override
     public void solve(double[] b, double[] j) {
-        solveTogether(new SymmetricBand[] {this}, new double[][] {b}, new double[][] {j});
+        solveTogether(new SymmetricBand[] {this}, new double[][] {b}, new double[][] {j}, 1.0);
     }
 
-    /** See {@link ConjugateGradientRadiositySolver#solveTogether}. */
-    static void solveTogether(SymmetricBand[] bands, double[][] b, double[][] out) {
+    /**
+     * See {@link ConjugateGradientRadiositySolver#solveTogether}.
+     *
+     * @param relax  factor on the tolerance (1 for a band solve, {@link #RESPONSE_RELAXATION} for a response)
+     */
+    static void solveTogether(SymmetricBand[] bands, double[][] b, double[][] out, double relax) {
         int nb = bands.length;
         int n = bands[0].n;
         double[] f = bands[0].f;
@@ -89,7 +100,7 @@ final class SymmetricBand implements RadiositySolver.Prepared {
             boolean any = false;
             for (int k = 0; k < nb; k++) {
                 State x = st[k];
-                if (!x.done && bands[k].converged(b[k], x.y, x.r)) {
+                if (!x.done && bands[k].converged(b[k], x.y, x.r, relax)) {
                     x.done = true;
                 } else if (!x.done) {
                     bands[k].checkProgress();
@@ -167,7 +178,7 @@ final class SymmetricBand implements RadiositySolver.Prepared {
     }
 
     /** The heat test of the class doc on the recurrence residual; sets {@link #residual}. */
-    private boolean converged(double[] b, double[] y, double[] r) {
+    private boolean converged(double[] b, double[] y, double[] r, double relax) {
         boolean ok = true;
         double worst = 0;
         double scale = 0;
@@ -177,7 +188,7 @@ final class SymmetricBand implements RadiositySolver.Prepared {
         for (int i = 0; i < n; i++) {
             if (free[i]) {
                 double heat = rho[i] * r[i]; // A_i r_i (W)
-                if (Math.abs(heat) > tol * area[i] * (Math.abs(b[i]) + Math.abs(y[i]))) {
+                if (Math.abs(heat) > relax * tol * area[i] * (Math.abs(b[i]) + Math.abs(y[i]))) {
                     ok = false;
                 }
                 worst = Math.max(worst, Math.abs(heat) / area[i]);
