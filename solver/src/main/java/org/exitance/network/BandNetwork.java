@@ -27,18 +27,18 @@ package org.exitance.network;
  * the view-factor array (read only).
  */
 public final class BandNetwork {
-    private final int n;
-    private final double[] f;
-    private final double[] eps;
+    final int n;
+    final double[] f;
+    final double[] eps;
     private final double[] rho;
-    private final double[] tau;
-    private final int[] other;
+    final double[] tau;
+    final int[] other;
     private final double[] irradiation;
     private final double[] reflected;
     private final double[] retained;
     private final double[] retainedMagnitude;
-    private final double[] area;
-    private final RadiositySolver.Prepared prepared;
+    final double[] area;
+    final RadiositySolver.Prepared prepared;
 
     /**
      * @param viewFactors          F, N×N row-major (not modified, not copied)
@@ -220,61 +220,7 @@ public final class BandNetwork {
      * @return a new m×m row-major array
      */
     public double[] nodeHeatSensitivities(int[][] nodeFaces) {
-        int m = nodeFaces.length;
-        double[] x = new double[Math.multiplyExact(n, m)];
-        for (int c = 0; c < m; c++) {
-            for (int face : nodeFaces[c]) {
-                x[face * m + c] += eps[face];
-            }
-        }
-        prepared.solveBlock(x, m, x);
-        double[] out = new double[m * m];
-        java.util.stream.IntStream.range(0, m).parallel().forEach(a -> {
-            double[] fx = new double[m];
-            double[] fo = new double[m];
-            int row = a * m;
-            for (int i : nodeFaces[a]) {
-                rowTimesBlock(i, x, m, fx);
-                double take = eps[i] + tau[i];
-                for (int c = 0; c < m; c++) {
-                    out[row + c] -= area[i] * take * fx[c];
-                }
-                if (other[i] >= 0 && tau[i] != 0) {
-                    rowTimesBlock(other[i], x, m, fo);
-                    for (int c = 0; c < m; c++) {
-                        out[row + c] += area[i] * tau[i] * fo[c];
-                    }
-                }
-            }
-        });
-        int[] nodeOf = new int[n];
-        java.util.Arrays.fill(nodeOf, -1);
-        for (int c = 0; c < m; c++) {
-            for (int face : nodeFaces[c]) {
-                nodeOf[face] = c;
-            }
-        }
-        for (int a = 0; a < m; a++) {
-            for (int i : nodeFaces[a]) {
-                out[a * m + nodeOf[i]] += area[i] * eps[i];
-            }
-        }
-        return out;
-    }
-
-    /** out = row i of F times the N×m block x; x not modified, out modified. */
-    private void rowTimesBlock(int i, double[] x, int m, double[] out) {
-        java.util.Arrays.fill(out, 0.0);
-        int row = i * n;
-        for (int k = 0; k < n; k++) {
-            double fik = f[row + k];
-            if (fik != 0) {
-                int xk = k * m;
-                for (int c = 0; c < m; c++) {
-                    out[c] += fik * x[xk + c];
-                }
-            }
-        }
+        return NodeSensitivities.of(this, nodeFaces);
     }
 
     /**

@@ -11,10 +11,10 @@ import java.util.stream.IntStream;
  *
  * <p>Memory: the factors overwrite the array; nothing else of size N² is allocated. Work is
  * split by rows (factorization) or by right-hand-side columns (solves) over the fork-join pool
- * the caller runs in; every entry is computed by the same operations in the same order whatever
+ * the caller runs in (also used for the m×m Newton step of the temperature solve); every entry is computed by the same operations in the same order whatever
  * the split, so the factors and solutions are bit-for-bit the same for any thread count.
  */
-final class DenseLu {
+public final class DenseLu {
     /** Panel width (columns factored together). */
     static final int PANEL = 64;
     /** Column chunk of the trailing update and of block solves (doubles). */
@@ -32,7 +32,7 @@ final class DenseLu {
      * @param n  N
      * @return the factorization, or null when a pivot is exactly zero (the matrix is singular)
      */
-    static DenseLu factor(double[] a, int n) {
+    public static DenseLu factor(double[] a, int n) {
         DenseLu lu = new DenseLu(a, n);
         return lu.run() ? lu : null;
     }
@@ -157,7 +157,7 @@ final class DenseLu {
      * @param b  right-hand side, not modified
      * @param x  receives the solution; modified
      */
-    void solve(double[] b, double[] x) {
+    public void solve(double[] b, double[] x) {
         if (x != b) {
             System.arraycopy(b, 0, x, 0, n);
         }
@@ -208,36 +208,49 @@ final class DenseLu {
         IntStream.range(0, chunks).parallel().forEach(ch -> {
             int c0 = ch * width;
             int c1 = Math.min(c0 + width, cols);
-            for (int i = 0; i < n; i++) {
-                int ri = i * n;
-                int xi = i * cols;
-                for (int k = 0; k < i; k++) {
-                    double l = a[ri + k];
-                    if (l != 0) {
-                        int xk = k * cols;
-                        for (int c = c0; c < c1; c++) {
-                            x[xi + c] -= l * x[xk + c];
-                        }
-                    }
+            // forward, unit L: row block by row block; the rows above a block are applied a k-block
+            // at a time, so that strip of X stays in cache for the whole row block
+            for (int ib = 0; ib < n; ib += PANEL) {
+                int ie = Math.min(ib + PANEL, n);
+                for (int kb = 0; kb < ib; kb += PANEL) {
+                    eliminate(x, cols, ib, ie, kb, Math.min(kb + PANEL, ib), c0, c1);
+                }
+                for (int i = ib; i < ie; i++) {
+                    eliminate(x, cols, i, i + 1, ib, i, c0, c1);
                 }
             }
-            for (int i = n - 1; i >= 0; i--) {
-                int ri = i * n;
-                int xi = i * cols;
-                for (int k = i + 1; k < n; k++) {
-                    double u = a[ri + k];
-                    if (u != 0) {
-                        int xk = k * cols;
-                        for (int c = c0; c < c1; c++) {
-                            x[xi + c] -= u * x[xk + c];
-                        }
-                    }
+            // backward, U: row blocks from the bottom; within a block rows from the bottom
+            for (int ib = (n - 1) / PANEL * PANEL; ib >= 0; ib -= PANEL) {
+                int ie = Math.min(ib + PANEL, n);
+                for (int kb = ie; kb < n; kb += PANEL) {
+                    eliminate(x, cols, ib, ie, kb, Math.min(kb + PANEL, n), c0, c1);
                 }
-                double d = a[ri + i];
-                for (int c = c0; c < c1; c++) {
-                    x[xi + c] /= d;
+                for (int i = ie - 1; i >= ib; i--) {
+                    eliminate(x, cols, i, i + 1, i + 1, ie, c0, c1);
+                    double d = a[i * n + i];
+                    int xi = i * cols;
+                    for (int c = c0; c < c1; c++) {
+                        x[xi + c] /= d;
+                    }
                 }
             }
         });
+    }
+
+    /** X[i, c0..c1) −= Σ_{k in k0..k1} A[i][k] X[k, c0..c1) for rows i in i0..i1, k ascending; x modified. */
+    private void eliminate(double[] x, int cols, int i0, int i1, int k0, int k1, int c0, int c1) {
+        for (int i = i0; i < i1; i++) {
+            int ri = i * n;
+            int xi = i * cols;
+            for (int k = k0; k < k1; k++) {
+                double l = a[ri + k];
+                if (l != 0) {
+                    int xk = k * cols;
+                    for (int c = c0; c < c1; c++) {
+                        x[xi + c] -= l * x[xk + c];
+                    }
+                }
+            }
+        }
     }
 }

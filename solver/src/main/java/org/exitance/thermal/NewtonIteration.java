@@ -1,11 +1,10 @@
 package org.exitance.thermal;
 
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
-import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.exitance.bands.BandLoop;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.SolverSettings;
+import org.exitance.network.DenseLu;
 
 /**
  * Damped Newton on the unknown temperatures with band properties held fixed (Kelley, Solving
@@ -104,25 +103,25 @@ final class NewtonIteration {
                 + " W)", counters.newtonIterations, maxAbs(r));
     }
 
-    /** The Newton step −J⁻¹ r by LU (a new array). */
+    /** The Newton step −J⁻¹ r by LU ({@link DenseLu}, in place on the Jacobian's array; a new array). */
     private double[] step(DMatrixRMaj jac, double[] r) {
         int m = r.length;
-        LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(m);
-        DMatrixRMaj rhs = new DMatrixRMaj(m, 1);
-        for (int a = 0; a < m; a++) {
-            rhs.set(a, 0, -r[a]);
-        }
-        DMatrixRMaj dx = new DMatrixRMaj(m, 1);
-        if (!lu.setA(jac.copy())) {
+        DenseLu lu = DenseLu.factor(jac.data, m);
+        if (lu == null) {
             throw Posedness.singular();
         }
+        double[] rhs = new double[m];
+        for (int a = 0; a < m; a++) {
+            rhs[a] = -r[a];
+        }
+        double[] dx = new double[m];
         lu.solve(rhs, dx);
         for (int a = 0; a < m; a++) {
-            if (!Double.isFinite(dx.get(a, 0))) {
+            if (!Double.isFinite(dx[a])) {
                 throw Posedness.singular();
             }
         }
-        return dx.data.clone();
+        return dx;
     }
 
     /** A demand that needs a temperature at or below 0 K is impossible: say so. */
