@@ -67,7 +67,7 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--solver", paramLabel = "METHOD",
             description = "Linear algebra: direct (LU per band, blocked Jacobian), newton-krylov (LU per band,"
                     + " GMRES Newton steps) or iterative (conjugate gradients per band, GMRES Newton steps)."
-                    + " Default: chosen by size (docs/theory.md).")
+                    + " Default: chosen by size and bands (docs/theory.md).")
     private String solver;
 
     @Option(names = {"-q", "--quiet"}, description = "Do not print warnings on standard error.")

@@ -15,6 +15,11 @@ package org.exitance.thermal;
  *   <li>vectors per band and surface (states, emissive powers, properties): about 40 doubles
  *       each, 320·N·B, and a fixed 64 MB for the JVM's own needs.</li>
  * </ul>
+ *
+ * <p>The figure is the live data: a heap of that size suffices (the benchmark runs the box at
+ * {@code -Xmx} equal to the estimate; docs/performance.md). The JVM's measured peak heap
+ * ({@code SolverReport.peakHeapBytes}) can be higher when there is room, because the previous
+ * property update's band factors stay on the heap until the collector needs the space.
  */
 public final class MemoryEstimate {
     private static final long FIXED = 64L << 20;

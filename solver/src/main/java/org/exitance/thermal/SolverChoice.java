@@ -21,10 +21,16 @@ import org.exitance.network.RadiositySolver;
  *       symmetric form, no N² array besides F (opaque enclosures only).</li>
  * </ul>
  *
- * <p><b>The default rule</b> ({@link #forCase}), from the benchmark in docs/performance.md: direct
- * up to {@link #DIRECT_LIMIT} surfaces; above it iterative (newton-krylov when the enclosure has a
- * window, which conjugate gradients cannot solve); and iterative at any size when the direct
- * path's memory estimate ({@link MemoryEstimate}) does not fit in the heap.
+ * <p><b>The default rule</b> ({@link #forCase}), from the benchmark in docs/performance.md (closed
+ * box, a third of the facets unknown; CPU seconds for 1 / 8 bands at 1,944 facets: direct 5.8 / 78,
+ * newton-krylov 2.8 / 37, iterative 3.7 / 17): direct up to {@link #DIRECT_LIMIT} facets, where
+ * the three cost about the same and the exact Jacobian is the most robust; above it iterative
+ * when the case has {@link #FUSED_BANDS} or more bands (the bands' conjugate gradients share each
+ * pass over F) or more than {@link #FACTOR_LIMIT} facets (B factorizations of 2N³/3 flops
+ * outgrow the CG passes), else newton-krylov. An enclosure with a window never gets iterative
+ * (conjugate gradients cannot solve its coupling): direct up to the limit, newton-krylov above.
+ * When the chosen path's memory estimate ({@link MemoryEstimate}) exceeds the heap, iterative is
+ * chosen if the case allows it.
  */
 public enum SolverChoice {
     DIRECT("direct"),
@@ -32,7 +38,11 @@ public enum SolverChoice {
     ITERATIVE("iterative");
 
     /** Above this many surfaces (facets) the default rule leaves the direct path. */
-    public static final int DIRECT_LIMIT = 2000;
+    public static final int DIRECT_LIMIT = 500;
+    /** From this many bands the default rule prefers iterative above {@link #DIRECT_LIMIT}. */
+    public static final int FUSED_BANDS = 4;
+    /** Above this many surfaces the default rule prefers iterative whatever the bands. */
+    public static final int FACTOR_LIMIT = 3000;
 
     /** Relative (per-surface, in watts) tolerance of the conjugate-gradient band solves. */
     static final double CG_TOLERANCE = 1e-13;
@@ -83,13 +93,17 @@ public enum SolverChoice {
      * @param heapBytes  memory available to the solve (bytes), e.g. {@code Runtime.maxMemory()}
      */
     public static SolverChoice forCase(int n, int unknown, int bands, boolean windows, long heapBytes) {
-        boolean fits = MemoryEstimate.bytes(n, unknown, bands, DIRECT) <= heapBytes;
-        if (n <= DIRECT_LIMIT && fits) {
-            return DIRECT;
+        SolverChoice c;
+        if (n <= DIRECT_LIMIT) {
+            c = DIRECT;
+        } else if (windows || bands < FUSED_BANDS && n <= FACTOR_LIMIT) {
+            c = NEWTON_KRYLOV;
+        } else {
+            c = ITERATIVE;
         }
-        if (windows) {
-            return NEWTON_KRYLOV;
+        if (!windows && MemoryEstimate.bytes(n, unknown, bands, c) > heapBytes) {
+            c = ITERATIVE;
         }
-        return ITERATIVE;
+        return c;
     }
 }
