@@ -50,7 +50,7 @@ public final class NetworkGroup {
      * The net-flux change of the given surfaces in every band for emissive-power changes δE at
      * fixed properties ({@link BandNetwork#fluxResponse}, all bands at once). With conjugate
      * gradients the responses are solved to a tolerance relaxed by
-     * {@link SymmetricBand#RESPONSE_RELAXATION} (1e-9 per surface): they steer Newton steps only.
+     * {@link SymmetricBand#RESPONSE_RELAXATION} (1e-7 per surface): they steer Newton steps only.
      *
      * @param delta  δE per band and surface (W/m²), not modified
      * @param rows   the surfaces wanted, not modified

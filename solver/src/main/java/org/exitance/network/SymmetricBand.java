@@ -47,10 +47,10 @@ final class SymmetricBand implements RadiositySolver.Prepared {
 
     /**
      * Tolerance factor of the flux responses behind Newton–Krylov products: they only steer the
-     * Newton step (GMRES asks for 1e-8 of the Newton residual), never the converged residual, which
+     * Newton step (GMRES asks for 1e-6 of the Newton residual), never the converged residual, which
      * every path evaluates with full band solves.
      */
-    static final double RESPONSE_RELAXATION = 1e4;
+    static final double RESPONSE_RELAXATION = 1e6;
 
     @Override
     public void solve(double[] b, double[] j) {

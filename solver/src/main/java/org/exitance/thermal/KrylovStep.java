@@ -22,7 +22,7 @@ final class KrylovStep {
     static final int RESTART = 60;
     /** Products allowed per Newton step. */
     static final int MAX_PRODUCTS = 20 * RESTART;
-    static final double RELATIVE = 1e-8;
+    static final double RELATIVE = 1e-6;
     static final double ABSOLUTE = 1e-2;
 
     private final Problem p;
