@@ -6,14 +6,15 @@ package org.exitance.network;
  * band reflectivities, T the window coupling ({@link WindowCoupling}: row i holds τ_i in the column
  * block of its other face, zero without windows) and b the source vector (W/m²).
  *
- * <p>Two strategies exist: {@link DirectRadiositySolver} (LU, exact to round-off, O(N³) once
- * then O(N²) per right-hand side) and {@link ConjugateGradientRadiositySolver} (the symmetric
- * form with a Jacobi preconditioner, O(N²) per iteration). {@link #forSize(int)} states the
- * rule that picks one.
+ * <p>Two strategies exist: {@link DirectRadiositySolver} (blocked in-place LU, exact to round-off,
+ * O(N³) once then O(N²) per right-hand side) and {@link ConjugateGradientRadiositySolver} (the
+ * symmetric form with a Jacobi preconditioner and a coarse correction, O(N²) per iteration).
+ * {@link #forSize(int, boolean)} is a rule for callers that need a band solver alone; a
+ * temperature solve chooses its band solver and its Newton step together (thermal.SolverChoice).
  */
 public interface RadiositySolver {
 
-    /** Above this many surfaces (or facets) the default rule switches to conjugate gradients. */
+    /** Above this many surfaces (or facets) {@link #forSize} switches to conjugate gradients. */
     int DIRECT_LIMIT = 2000;
 
     /** The strategy's name for reports, e.g. "direct LU". */

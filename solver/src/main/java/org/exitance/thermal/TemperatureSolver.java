@@ -21,7 +21,9 @@ import org.exitance.result.SolveResult;
  *   <li>with several bands and unknown temperatures, a one-band gray solve first (each
  *       surface's total hemispherical emissivity at its temperature) as the starting point;</li>
  *   <li>{@link PropertyLoop}: band properties updated around {@link NewtonIteration} until the
- *       temperatures settle;</li>
+ *       temperatures settle; the linear algebra (band solves and Newton step) is a
+ *       {@link SolverChoice}, by default chosen by {@link SolverChoice#forCase} from the size, the
+ *       bands and the memory estimate ({@link MemoryEstimate});</li>
  *   <li>the band loop at the converged state ({@link BandLoop}) and {@link ResultAssembler}; a
  *       case solved on facets is reported by surface ({@link FacetAggregation}).</li>
  * </ol>
