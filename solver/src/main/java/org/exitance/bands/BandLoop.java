@@ -5,6 +5,7 @@ import org.exitance.model.Band;
 import org.exitance.model.MemoryBudget;
 import org.exitance.network.BandNetwork;
 import org.exitance.network.BandState;
+import org.exitance.network.NetworkGroup;
 import org.exitance.network.RadiositySolver;
 import org.exitance.network.WindowCoupling;
 import org.exitance.spectral.Planck;
@@ -24,8 +25,10 @@ public final class BandLoop {
     private final ExternalIrradiation[] external;
     private int maxIterations;
     private double maxRelativeResidual;
+    private final int[] bandIterations;
 
     private BandLoop(List<Band> bands, double[][] emissivity, BandNetwork[] networks, ExternalIrradiation[] external) {
+        this.bandIterations = new int[networks.length];
         this.bands = bands;
         this.emissivity = emissivity;
         this.networks = networks;
@@ -65,13 +68,31 @@ public final class BandLoop {
      */
     public BandState[] solve(double[] t) {
         double[][] e = emissivePowers(t);
-        BandState[] states = new BandState[networks.length];
+        // all bands at once: side by side, or iterating together over one pass of F per iteration
+        BandState[] states = NetworkGroup.solve(networks, e);
         for (int k = 0; k < networks.length; k++) {
-            states[k] = networks[k].solve(e[k]);
             maxIterations = Math.max(maxIterations, states[k].iterations());
+            bandIterations[k] = Math.max(bandIterations[k], states[k].iterations());
             maxRelativeResidual = Math.max(maxRelativeResidual, states[k].relativeResidual());
         }
         return states;
+    }
+
+    /**
+     * The net-flux change of the given surfaces in every band for emissive-power changes δE at the
+     * loop's fixed properties (one band solve per band, all bands at once; {@link NetworkGroup}).
+     *
+     * @param delta  δE per band and surface (W/m²), not modified
+     * @param rows   the surfaces wanted, not modified
+     * @return δq per band, in the order of rows (W/m²)
+     */
+    public double[][] fluxResponses(double[][] delta, int[] rows) {
+        return NetworkGroup.fluxResponses(networks, delta, rows);
+    }
+
+    /** Per band, the most linear-solver iterations of any solve so far (a new array). */
+    public int[] iterationsPerBand() {
+        return bandIterations.clone();
     }
 
     /** Band emissive powers E_ik (W/m²), [band][surface], at temperatures t (K, not modified). */

@@ -52,13 +52,23 @@ final class Runs {
     /** Every load case (or the one named), or the case as given when it has none. */
     static java.util.List<LoadCaseResult> solveAll(PreparedCase c, BandSet override, String only,
                                                    double bandTolerance) {
+        return solveAll(c, override, only, bandTolerance, null);
+    }
+
+    /** As above, with the linear algebra named by {@code --solver} (null: the default rule). */
+    static java.util.List<LoadCaseResult> solveAll(PreparedCase c, BandSet override, String only,
+                                                   double bandTolerance, org.exitance.thermal.SolverChoice choice) {
         java.util.List<String> names = c.model().loadCases().stream().map(org.exitance.model.LoadCase::name).toList();
         if (only != null && !names.contains(only)) {
             throw new UserError(c.file() + ": --load-case: no load case named '" + only + "'"
                     + (names.isEmpty() ? " (the case has none)" : " (the case has: " + String.join(", ", names) + ")"),
                     ExitCodes.BAD_INPUT);
         }
-        return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only, bandTolerance));
+        if (choice == org.exitance.thermal.SolverChoice.ITERATIVE && c.model().enclosure().hasWindows()) {
+            throw new UserError(c.file() + ": --solver iterative: the enclosure has windows, whose coupling conjugate"
+                    + " gradients cannot solve (use direct or newton-krylov)", ExitCodes.BAD_INPUT);
+        }
+        return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only, bandTolerance, choice));
     }
 
     static <T> T guarded(PreparedCase c, java.util.function.Supplier<T> work) {

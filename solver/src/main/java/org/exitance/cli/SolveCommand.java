@@ -64,6 +64,12 @@ final class SolveCommand implements Callable<Integer> {
             description = "Audit: flag surfaces whose gray error exceeds this many percent (default ${DEFAULT-VALUE}).")
     private double thresholdPct;
 
+    @Option(names = "--solver", paramLabel = "METHOD",
+            description = "Linear algebra: direct (LU per band, blocked Jacobian), newton-krylov (LU per band,"
+                    + " GMRES Newton steps) or iterative (conjugate gradients per band, GMRES Newton steps)."
+                    + " Default: chosen by size and bands (docs/theory.md).")
+    private String solver;
+
     @Option(names = {"-q", "--quiet"}, description = "Do not print warnings on standard error.")
     private boolean quiet;
 
@@ -72,8 +78,14 @@ final class SolveCommand implements Callable<Integer> {
         BandSet override = bandEdges.bands(gray);
         OutputTarget.check(output.file(), force);
         PreparedCase c = Runs.load(caseFile);
+        org.exitance.thermal.SolverChoice choice;
+        try {
+            choice = solver == null ? null : org.exitance.thermal.SolverChoice.of(solver);
+        } catch (IllegalArgumentException e) {
+            throw new UserError("--solver: " + e.getMessage(), ExitCodes.BAD_INPUT);
+        }
         List<LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
-                bandTolerance.fraction());
+                bandTolerance.fraction(), choice);
         boolean variants = !c.model().loadCases().isEmpty();
         List<AuditResult> audits = noAudit || gray.on() ? List.of() : audit(c, results);
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,

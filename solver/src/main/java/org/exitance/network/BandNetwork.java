@@ -27,17 +27,18 @@ package org.exitance.network;
  * the view-factor array (read only).
  */
 public final class BandNetwork {
-    private final int n;
-    private final double[] f;
-    private final double[] eps;
+    final int n;
+    final double[] f;
+    final double[] eps;
     private final double[] rho;
-    private final double[] tau;
-    private final int[] other;
+    final double[] tau;
+    final int[] other;
     private final double[] irradiation;
     private final double[] reflected;
     private final double[] retained;
     private final double[] retainedMagnitude;
-    private final RadiositySolver.Prepared prepared;
+    final double[] area;
+    final RadiositySolver.Prepared prepared;
 
     /**
      * @param viewFactors          F, N×N row-major (not modified, not copied)
@@ -95,7 +96,8 @@ public final class BandNetwork {
             other[i] = windows.other(i);
             rho[i] = Math.max(0.0, 1.0 - eps[i] - tau[i]);
         }
-        this.prepared = solver.prepare(f, n, rho, areasM2.clone(), windows);
+        this.area = areasM2.clone();
+        this.prepared = solver.prepare(f, n, rho, area, windows);
     }
 
     /**
@@ -110,13 +112,27 @@ public final class BandNetwork {
      * @return radiosity, irradiation, net flux and throughput of every surface
      */
     public BandState solve(double[] emissive) {
+        double[] b = source(emissive);
+        double[] j = new double[n];
+        prepared.solve(b, j);
+        return finish(emissive, b, j, irradiationFrom(j, new double[n]));
+    }
+
+    /** The right-hand side ε_i E_i + R_i of a solve (a new array; emissive not modified). */
+    double[] source(double[] emissive) {
         double[] b = new double[n];
         for (int i = 0; i < n; i++) {
             b[i] = eps[i] * emissive[i] + reflected[i];
         }
-        double[] j = new double[n];
-        prepared.solve(b, j);
-        double[] fj = irradiationFrom(j, new double[n]);
+        return b;
+    }
+
+    /**
+     * The band state of a solved J, with its residual checked ({@link #checkedResidual}).
+     *
+     * @param emissive  E (W/m²), b its right-hand side, j the solution, fj = F·J; none modified
+     */
+    BandState finish(double[] emissive, double[] b, double[] j, double[] fj) {
         double[] g = new double[n];
         double[] q = new double[n];
         double[] through = new double[n];
@@ -128,7 +144,120 @@ public final class BandNetwork {
             q[i] = emitted - taken + fromOther - retained[i];
             through[i] = Math.abs(emitted) + Math.abs(taken) + Math.abs(fromOther) + retainedMagnitude[i];
         }
-        return new BandState(j, g, q, through, prepared.lastIterations(), prepared.lastRelativeResidual());
+        double residual = checkedResidual(b, j, fj);
+        return new BandState(j, g, q, through, prepared.lastIterations(), residual);
+    }
+
+    /** The prepared linear operator of this band. */
+    RadiositySolver.Prepared prepared() {
+        return prepared;
+    }
+
+    /** The view factors (shared). */
+    double[] viewFactors() {
+        return f;
+    }
+
+    /** ε_i δE_i (a new array; not modified). */
+    double[] responseSource(double[] deltaEmissive) {
+        double[] b = new double[n];
+        for (int i = 0; i < n; i++) {
+            b[i] = eps[i] * deltaEmissive[i];
+        }
+        return b;
+    }
+
+    /** δq_i from the source b_i = ε_i δE_i, (Fx)_i and (Fx)_o(i) (the latter ignored without a window). */
+    double response(int i, double[] b, double fxi, double fxo) {
+        double v = b[i] - (eps[i] + tau[i]) * fxi;
+        if (other[i] >= 0 && tau[i] != 0) {
+            v += tau[i] * fxo;
+        }
+        return v;
+    }
+
+    /** Surface i's other face, or −1. */
+    int otherFace(int i) {
+        return other[i];
+    }
+
+    /**
+     * The relative residual ‖b − (I − ρF − TF)J‖∞ / ‖b‖∞ of a solve, from the product F·J already
+     * formed (no extra pass over F).
+     *
+     * @param b   right-hand side, not modified
+     * @param j   solution, not modified
+     * @param fj  F·J, not modified
+     * @throws NetworkConvergenceException when it exceeds what the strategy accepts (a singular or
+     *         too ill-conditioned band)
+     */
+    private double checkedResidual(double[] b, double[] j, double[] fj) {
+        double worst = 0;
+        double scale = 0;
+        for (int i = 0; i < n; i++) {
+            double v = j[i] - rho[i] * fj[i] - (other[i] >= 0 ? tau[i] * fj[other[i]] : 0.0);
+            worst = Math.max(worst, Math.abs(b[i] - v));
+            scale = Math.max(scale, Math.abs(b[i]));
+        }
+        double residual = scale > 0 ? worst / scale : worst;
+        if (!(residual <= prepared.acceptedResidual())) {
+            throw new NetworkConvergenceException("radiosity matrix is singular or too ill-conditioned (relative"
+                    + " residual " + residual + " after " + prepared.lastIterations() + " iteration(s) of "
+                    + "the band solve): a closed part of the enclosure reflects (almost) everything in this band",
+                    prepared.lastIterations(), residual);
+        }
+        return residual;
+    }
+
+    /**
+     * The heat sensitivities of the unknown nodes in this band, from one blocked solve for all
+     * nodes' columns ({@link RadiositySolver.Prepared#solveBlock}): entry {@code [a·m + c]} is
+     * {@code Σ_{i ∈ a} A_i ∂q_i/∂E_c} (m²), where raising node c's emissive power raises that of all
+     * its faces. The flux derivative is that of the net-flux form of {@link #solve}, exact and free
+     * of cancellation as ε → 0. Memory: one N×m array for the block besides the m×m result.
+     *
+     * @param nodeFaces  per node, its faces (a surface, or a window's two faces); not modified
+     * @return a new m×m row-major array
+     */
+    public double[] nodeHeatSensitivities(int[][] nodeFaces) {
+        return NodeSensitivities.of(this, nodeFaces);
+    }
+
+    /**
+     * The change of the net flux of the given surfaces when the emissive powers change by δE, at
+     * fixed properties: one band solve, {@code (I − ρF − TF) x = ε δE}, then
+     * {@code δq_i = ε_i δE_i − (ε_i + τ_i)(Fx)_i + τ_i (Fx)_o(i)} (W/m²). This is the band's part of
+     * a Jacobian–vector product of Newton–Krylov; only the rows asked for are formed.
+     *
+     * @param deltaEmissive  δE per surface (W/m²), not modified
+     * @param rows           the surfaces whose δq is wanted; not modified
+     * @return δq of those surfaces, in the order of {@code rows} (a new array)
+     */
+    public double[] fluxResponse(double[] deltaEmissive, int[] rows) {
+        double[] b = responseSource(deltaEmissive);
+        double[] x = new double[n];
+        prepared.solve(b, x);
+        double[] out = new double[rows.length];
+        for (int r = 0; r < rows.length; r++) {
+            int i = rows[r];
+            out[r] = response(i, b, rowTimes(i, x), other[i] >= 0 ? rowTimes(other[i], x) : 0.0);
+        }
+        return out;
+    }
+
+    /** Iterations of the last linear solve of this band. */
+    public int lastIterations() {
+        return prepared.lastIterations();
+    }
+
+    /** (F x)_i; x not modified. */
+    private double rowTimes(int i, double[] x) {
+        double s = 0;
+        int row = i * n;
+        for (int k = 0; k < n; k++) {
+            s += f[row + k] * x[k];
+        }
+        return s;
     }
 
     /**
@@ -145,6 +274,7 @@ public final class BandNetwork {
         double[] x = new double[n];
         prepared.solve(b, x);
         double[] fx = irradiationFrom(x, new double[n]);
+        checkedResidual(b, x, fx);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             // the derivative of the net-flux form of solve(): exact, and free of cancellation as ε → 0
@@ -168,6 +298,7 @@ public final class BandNetwork {
         double[] x = new double[n];
         prepared.solve(b, x);
         double[] fx = irradiationFrom(x, new double[n]);
+        checkedResidual(b, x, fx);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             out[i] = x[i] - fx[i];
@@ -191,17 +322,10 @@ public final class BandNetwork {
         return d;
     }
 
-    /** G = F J + H; arrays not modified, result new. */
+    /** G = F J + H, rows in parallel; arrays not modified, result new. */
     private double[] irradiationFrom(double[] j, double[] external) {
         double[] g = new double[n];
-        for (int i = 0; i < n; i++) {
-            int row = i * n;
-            double s = external[i];
-            for (int k = 0; k < n; k++) {
-                s += f[row + k] * j[k];
-            }
-            g[i] = s;
-        }
+        java.util.stream.IntStream.range(0, n).parallel().forEach(i -> g[i] = external[i] + rowTimes(i, j));
         return g;
     }
 

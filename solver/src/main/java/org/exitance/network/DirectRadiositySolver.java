@@ -1,16 +1,16 @@
 package org.exitance.network;
 
-import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
-import org.ejml.interfaces.linsol.LinearSolverDense;
-
 /**
- * LU factorization with partial pivoting (EJML) of {@code I − diag(ρ) F − T F} (T: the window
- * coupling, {@link WindowCoupling}; absent for opaque enclosures). It handles the unsymmetric
- * matrix that windows produce. The matrix is
+ * LU factorization with partial pivoting ({@link DenseLu}: blocked, in place, split over the
+ * cores) of {@code I − diag(ρ) F − T F} (T: the window coupling, {@link WindowCoupling}; absent for
+ * opaque enclosures). It handles the unsymmetric matrix that windows produce. The matrix is
  * non-singular whenever every closed sub-enclosure has some absorption (some ρ &lt; 1) in the band;
- * every solve checks its residual, and a singular or near-singular matrix is reported, never
- * solved silently.
+ * the band network checks every solve's residual with the product F·J it forms anyway
+ * ({@link BandNetwork}), and a singular or near-singular matrix is reported, never solved silently.
+ *
+ * <p>Memory: one N×N work array per prepared band (8·N² bytes, the factors), besides the shared
+ * view factors; a case with B bands holds B of them while its band loop lives. Several right-hand
+ * sides ({@link Prepared#solveBlock}) cost one more N×cols array.
  */
 public final class DirectRadiositySolver implements RadiositySolver {
     /** Largest relative residual accepted after an LU solve; beyond it the matrix is reported singular. */
@@ -36,12 +36,12 @@ public final class DirectRadiositySolver implements RadiositySolver {
     @Override
     public Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2,
                             WindowCoupling windows) {
-        DMatrixRMaj a = new DMatrixRMaj(n, n);
-        double[] data = a.data;
+        double[] data = new double[Math.multiplyExact(n, n)];
         for (int i = 0; i < n; i++) {
             int row = i * n;
+            double r = reflectivity[i];
             for (int k = 0; k < n; k++) {
-                data[row + k] = -reflectivity[i] * viewFactors[row + k];
+                data[row + k] = -r * viewFactors[row + k];
             }
             int o = windows.other(i);
             double tau = windows.tau(i);
@@ -53,26 +53,52 @@ public final class DirectRadiositySolver implements RadiositySolver {
             }
             data[row + i] += 1.0;
         }
-        LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(n);
-        if (!lu.setA(a)) {
+        DenseLu lu = DenseLu.factor(data, n);
+        if (lu == null) {
             throw new NetworkConvergenceException("radiosity matrix is singular (a closed part of the enclosure"
                     + " reflects everything in this band)", 0, Double.POSITIVE_INFINITY);
         }
         return new Prepared() {
-            private double residual;
-
             @Override
             public void solve(double[] b, double[] j) {
-                DMatrixRMaj rhs = DMatrixRMaj.wrap(n, 1, b.clone());
-                DMatrixRMaj x = new DMatrixRMaj(n, 1);
-                lu.solve(rhs, x);
-                System.arraycopy(x.data, 0, j, 0, n);
-                residual = RadiositySolver.relativeResidual(viewFactors, n, reflectivity, windows, b, j);
+                lu.solve(b, j);
+            }
+
+            /** One blocked solve, then one residual check of the block (of its column sum). */
+            @Override
+            public void solveBlock(double[] b, int cols, double[] x) {
+                // the sum of the columns solves the system for the sum of the right-hand sides
+                double[] bs = new double[n];
+                for (int i = 0; i < n; i++) {
+                    double sb = 0;
+                    for (int c = 0; c < cols; c++) {
+                        sb += b[i * cols + c];
+                    }
+                    bs[i] = sb;
+                }
+                if (x != b) {
+                    System.arraycopy(b, 0, x, 0, n * cols);
+                }
+                lu.solveInPlace(x, cols);
+                double[] xs = new double[n];
+                for (int i = 0; i < n; i++) {
+                    double sx = 0;
+                    for (int c = 0; c < cols; c++) {
+                        sx += x[i * cols + c];
+                    }
+                    xs[i] = sx;
+                }
+                double residual = RadiositySolver.relativeResidual(viewFactors, n, reflectivity, windows, bs, xs);
                 if (!(residual <= SOLVE_CHECK)) {
                     throw new NetworkConvergenceException("radiosity matrix is singular or too ill-conditioned"
                             + " (relative residual " + residual + " after LU): a closed part of the enclosure reflects"
                             + " (almost) everything in this band", 1, residual);
                 }
+            }
+
+            @Override
+            public double acceptedResidual() {
+                return SOLVE_CHECK;
             }
 
             @Override
@@ -82,7 +108,7 @@ public final class DirectRadiositySolver implements RadiositySolver {
 
             @Override
             public double lastRelativeResidual() {
-                return residual;
+                return 0;
             }
         };
     }

@@ -6,14 +6,15 @@ package org.exitance.network;
  * band reflectivities, T the window coupling ({@link WindowCoupling}: row i holds τ_i in the column
  * block of its other face, zero without windows) and b the source vector (W/m²).
  *
- * <p>Two strategies exist: {@link DirectRadiositySolver} (LU, exact to round-off, O(N³) once
- * then O(N²) per right-hand side) and {@link ConjugateGradientRadiositySolver} (the symmetric
- * form with a Jacobi preconditioner, O(N²) per iteration). {@link #forSize(int)} states the
- * rule that picks one.
+ * <p>Two strategies exist: {@link DirectRadiositySolver} (blocked in-place LU, exact to round-off,
+ * O(N³) once then O(N²) per right-hand side) and {@link ConjugateGradientRadiositySolver} (the
+ * symmetric form with a Jacobi preconditioner and a coarse correction, O(N²) per iteration).
+ * {@link #forSize(int, boolean)} is a rule for callers that need a band solver alone; a
+ * temperature solve chooses its band solver and its Newton step together (thermal.SolverChoice).
  */
 public interface RadiositySolver {
 
-    /** Above this many surfaces (or facets) the default rule switches to conjugate gradients. */
+    /** Above this many surfaces (or facets) {@link #forSize} switches to conjugate gradients. */
     int DIRECT_LIMIT = 2000;
 
     /** The strategy's name for reports, e.g. "direct LU". */
@@ -60,10 +61,43 @@ public interface RadiositySolver {
          */
         void solve(double[] b, double[] j);
 
+        /**
+         * Solves for several right-hand sides at once: {@code (I − diag(ρ) F − T F) X = B}, with B
+         * and X N×cols row-major (row i at [i·cols, (i+1)·cols)). The direct strategy does this with
+         * one factorization and one residual check of the block; the default solves column by column.
+         *
+         * @param b     right-hand sides (W/m² or per unit), N×cols; not modified unless it is x itself
+         * @param cols  number of right-hand sides
+         * @param x     receives X, N×cols; modified (may be the same array as b: solved in place)
+         */
+        default void solveBlock(double[] b, int cols, double[] x) {
+            int n = b.length / Math.max(cols, 1);
+            double[] col = new double[n];
+            double[] out = new double[n];
+            for (int c = 0; c < cols; c++) { // column c is read before it is overwritten
+                for (int i = 0; i < n; i++) {
+                    col[i] = b[i * cols + c];
+                }
+                solve(col, out);
+                for (int i = 0; i < n; i++) {
+                    x[i * cols + c] = out[i];
+                }
+            }
+        }
+
+        /**
+         * The largest relative residual {@code ‖b − AJ‖∞ / ‖b‖∞} the strategy accepts; the band
+         * network checks every solve against it with the product F·J it computes anyway.
+         */
+        double acceptedResidual();
+
         /** Iterations used by the last solve (1 for a direct solve). */
         int lastIterations();
 
-        /** Relative residual ‖b − AJ‖∞ / ‖b‖∞ of the last solve. */
+        /**
+         * Relative residual ‖b − AJ‖∞ / ‖b‖∞ of the last solve, as the strategy knows it without an
+         * extra product (0 for a direct solve, whose residual the network measures).
+         */
         double lastRelativeResidual();
     }
 

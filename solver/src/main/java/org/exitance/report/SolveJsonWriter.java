@@ -119,6 +119,15 @@ public final class SolveJsonWriter {
         so.put("lastTemperatureStep_K", s.lastTemperatureStepK());
         so.put("maxLinearIterations", s.maxLinearIterations());
         so.put("maxLinearRelativeResidual", s.maxLinearResidual());
+        if (!s.strategy().isEmpty()) {
+            so.put("strategy", s.strategy());
+            ArrayNode perBand = so.putArray("bandLinearIterations");
+            for (int k : s.bandIterations()) {
+                perBand.add(k);
+            }
+            so.put("krylovProducts", s.krylovProducts());
+            so.put("estimatedMemory_B", s.estimatedBytes());
+        }
         ArrayNode w = root.putArray("warnings");
         warnings.forEach(w::add);
         root.put("caution", Caution.SHORT);

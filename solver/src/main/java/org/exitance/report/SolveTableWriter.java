@@ -226,6 +226,8 @@ public final class SolveTableWriter {
         var s = r.solver();
         out.println("Solver: " + s.linearSolver() + "; Newton iterations " + s.newtonIterations()
                 + ", property updates " + s.propertyIterations() + ", heat residual " + Numbers.small(s.residualW())
-                + " W; linear residual " + Numbers.small(s.maxLinearResidual()));
+                + " W; linear residual " + Numbers.small(s.maxLinearResidual())
+                + (s.strategy().isEmpty() ? "" : " (" + s.strategy() + ", most band-solve iterations "
+                + java.util.Arrays.stream(s.bandIterations()).max().orElse(0) + ")"));
     }
 }

@@ -42,8 +42,15 @@ public final class CaseSolver {
 
     /** As {@link #solve(RadiationCase, BandSet)} with a refinement tolerance (fraction of max |Q|). */
     public static SolveResult solve(RadiationCase c, BandSet override, double tolerance) {
+        return solve(c, override, tolerance, null);
+    }
+
+    /** As {@link #solve(RadiationCase, BandSet, double)} with the given linear algebra (null: the default rule). */
+    public static SolveResult solve(RadiationCase c, BandSet override, double tolerance, SolverChoice choice) {
         BandSet given = givenBands(c, override);
-        return given != null ? new TemperatureSolver(c).solve(given) : AdaptiveBands.refine(c, tolerance, b -> new TemperatureSolver(c).solve(b)).result();
+        java.util.function.Function<BandSet, SolveResult> run = b -> new TemperatureSolver(c, choice,
+                org.exitance.bands.ExternalAbsorption.SOURCE_SPECTRUM).solve(b);
+        return given != null ? run.apply(given) : AdaptiveBands.refine(c, tolerance, run).result();
     }
 
     /**
@@ -59,16 +66,22 @@ public final class CaseSolver {
 
     /** As {@link #solveAll(RadiationCase, BandSet, String)} with a band refinement tolerance. */
     public static List<LoadCaseResult> solveAll(RadiationCase c, BandSet override, String only, double tolerance) {
+        return solveAll(c, override, only, tolerance, null);
+    }
+
+    /** As {@link #solveAll(RadiationCase, BandSet, String, double)} with the given linear algebra (null: default). */
+    public static List<LoadCaseResult> solveAll(RadiationCase c, BandSet override, String only, double tolerance,
+                                                SolverChoice choice) {
         if (c.loadCases().isEmpty()) {
             if (only != null) {
                 throw new IllegalArgumentException("the case has no load cases, so none is named '" + only + "'");
             }
-            return List.of(new LoadCaseResult("as given", "", solve(c, override, tolerance)));
+            return List.of(new LoadCaseResult("as given", "", solve(c, override, tolerance, choice)));
         }
         List<LoadCaseResult> out = new ArrayList<>();
         for (LoadCase lc : c.loadCases()) {
             if (only == null || only.equals(lc.name())) {
-                out.add(new LoadCaseResult(lc.name(), lc.description(), solve(lc.applyTo(c), override, tolerance)));
+                out.add(new LoadCaseResult(lc.name(), lc.description(), solve(lc.applyTo(c), override, tolerance, choice)));
             }
         }
         if (out.isEmpty()) {

@@ -1,5 +1,6 @@
 package org.exitance.thermal;
 
+import java.util.stream.IntStream;
 import org.ejml.data.DMatrixRMaj;
 import org.exitance.bands.BandLoop;
 import org.exitance.model.MemoryBudget;
@@ -7,11 +8,114 @@ import org.exitance.model.MemoryBudget;
 /**
  * The exact Jacobian of the node heat balances with band properties held fixed. Each band is
  * linear in the emissive powers, so {@code ∂R_a/∂T_b = Σ_k Σ_{i ∈ a} A_i (∂q_ik/∂E_bk)(dE_bk/dT_b)}
- * plus the derivatives of convection and links; ∂q/∂E comes from one extra band solve per
- * unknown node ({@link org.exitance.network.BandNetwork#fluxSensitivity}), dE/dT is analytic.
+ * plus the derivatives of convection and links; dE/dT is analytic (methods: the Jacobian at scale).
+ *
+ * <p>Newton uses the compact form: per band the m×m node heat sensitivities
+ * {@code S_k[a][b] = Σ_{i ∈ a} A_i ∂q_ik/∂E_bk}, from one blocked solve for all unknown nodes'
+ * columns ({@link org.exitance.network.BandNetwork#nodeHeatSensitivities}); they hold for every
+ * Newton step of a property update, and each step only rescales their columns by dE/dT. The
+ * linearisations after a solve (sensitivities) use the full form, ∂q_i/∂E_b for every surface i.
  */
 final class Jacobian {
     private Jacobian() {
+    }
+
+    /** S_k, [band][a·m + b] (m²), bands in parallel; see the class doc. */
+    static double[][] nodeHeatSensitivities(Problem p, BandLoop loop) {
+        int nb = loop.bands().size();
+        double[][] s = new double[nb][];
+        for (int k = 0; k < nb; k++) { // the blocked solve is itself split over the cores
+            s[k] = loop.network(k).nodeHeatSensitivities(p.faces);
+        }
+        return s;
+    }
+
+    /**
+     * ∂R_a/∂T_b (W/K) from the compact sensitivities.
+     *
+     * @param s   {@link #nodeHeatSensitivities}; not modified
+     * @param dE  dE_ik/dT_i, [band][surface], at the current temperatures; not modified
+     */
+    static DMatrixRMaj compact(Problem p, double[][] s, double[][] dE) {
+        int[] u = p.unknown;
+        int m = u.length;
+        DMatrixRMaj jac = new DMatrixRMaj(m, m);
+        double[] d = jac.data;
+        IntStream.range(0, m).parallel().forEach(a -> {
+            int row = a * m;
+            for (int k = 0; k < s.length; k++) {
+                double[] sk = s[k];
+                double[] dk = dE[k];
+                for (int b = 0; b < m; b++) {
+                    d[row + b] += sk[row + b] * dk[u[b]];
+                }
+            }
+        });
+        addOtherPaths(p, jac);
+        return jac;
+    }
+
+    /** Adds the convection and link derivatives of the all-paths nodes to jac (modified). */
+    static void addOtherPaths(Problem p, DMatrixRMaj jac) {
+        int[] nodeOf = nodeOf(p);
+        for (int a = 0; a < p.unknown.length; a++) {
+            if (p.allPaths[a]) {
+                for (int i : p.faces[a]) {
+                    jac.add(a, a, p.convG[i]);
+                }
+            }
+        }
+        for (int l = 0; l < p.linkG.length; l++) {
+            for (int end = 0; end < 2; end++) {
+                int x = end == 0 ? p.linkA[l] : p.linkB[l];
+                int y = end == 0 ? p.linkB[l] : p.linkA[l];
+                int a = nodeOf[x];
+                if (a >= 0 && p.allPaths[a]) {
+                    jac.add(a, a, p.linkG[l]);
+                    if (nodeOf[y] >= 0) {
+                        jac.add(a, nodeOf[y], -p.linkG[l]);
+                    }
+                }
+            }
+        }
+    }
+
+    /**
+     * The convection and link part of J·v (W) for all-paths nodes, added to out.
+     *
+     * @param v    temperature changes per node (K), not modified
+     * @param out  per node (W); modified
+     */
+    static void addOtherPaths(Problem p, int[] nodeOf, double[] v, double[] out) {
+        for (int a = 0; a < p.unknown.length; a++) {
+            if (p.allPaths[a]) {
+                for (int i : p.faces[a]) {
+                    out[a] += p.convG[i] * v[a];
+                }
+            }
+        }
+        for (int l = 0; l < p.linkG.length; l++) {
+            for (int end = 0; end < 2; end++) {
+                int x = end == 0 ? p.linkA[l] : p.linkB[l];
+                int y = end == 0 ? p.linkB[l] : p.linkA[l];
+                int a = nodeOf[x];
+                if (a >= 0 && p.allPaths[a]) {
+                    out[a] += p.linkG[l] * (v[a] - (nodeOf[y] >= 0 ? v[nodeOf[y]] : 0.0));
+                }
+            }
+        }
+    }
+
+    /** Per surface: the unknown node it is a face of, or −1 (a new array). */
+    static int[] nodeOf(Problem p) {
+        int[] nodeOf = new int[p.area.length];
+        java.util.Arrays.fill(nodeOf, -1);
+        for (int a = 0; a < p.faces.length; a++) {
+            for (int i : p.faces[a]) {
+                nodeOf[i] = a;
+            }
+        }
+        return nodeOf;
     }
 
     /**
@@ -41,7 +145,7 @@ final class Jacobian {
     }
 
     /**
-     * ∂R_a/∂T_b (W/K) of the unknown nodes.
+     * ∂R_a/∂T_b (W/K) of the unknown nodes from the full sensitivities.
      *
      * @param sens  {@link #nodeSensitivities}; not modified
      * @param dE    dE_ik/dT_i, [band][surface], at the current temperatures; not modified
@@ -59,10 +163,10 @@ final class Jacobian {
                         s += p.area[i] * sens[k][b][i] * de;
                     }
                 }
-                double other = p.allPaths[a] ? p.otherPathsDerivative(a, b) : 0.0;
-                jac.set(a, b, s + other);
+                jac.set(a, b, s);
             }
         }
+        addOtherPaths(p, jac);
         return jac;
     }
 }

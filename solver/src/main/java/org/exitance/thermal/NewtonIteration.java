@@ -1,11 +1,10 @@
 package org.exitance.thermal;
 
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
-import org.ejml.interfaces.linsol.LinearSolverDense;
 import org.exitance.bands.BandLoop;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.SolverSettings;
+import org.exitance.network.DenseLu;
 
 /**
  * Damped Newton on the unknown temperatures with band properties held fixed (Kelley, Solving
@@ -20,11 +19,13 @@ final class NewtonIteration {
     private final Problem p;
     private final SolverSettings settings;
     private final Counters counters;
+    private final SolverChoice choice;
 
-    NewtonIteration(Problem p, SolverSettings settings, Counters counters) {
+    NewtonIteration(Problem p, SolverSettings settings, Counters counters, SolverChoice choice) {
         this.p = p;
         this.settings = settings;
         this.counters = counters;
+        this.choice = choice;
     }
 
     /**
@@ -40,14 +41,23 @@ final class NewtonIteration {
     double[] solve(BandLoop loop, double[] start) {
         int[] u = p.unknown;
         int m = u.length;
-        double[][][] sens = Jacobian.nodeSensitivities(p, loop);
+        // direct: the sensitivities of every band, from one blocked solve each, serve every Newton step
+        double[][] sens = choice.jacobianFree() ? null : Jacobian.nodeHeatSensitivities(p, loop);
+        KrylovStep krylov = choice.jacobianFree() ? new KrylovStep(p, loop) : null;
         double[] t = start.clone();
         NodeBalance bal = NodeBalance.of(p, loop.solve(t), t, settings.relativeHeatTolerance());
         for (int it = 0; it < settings.maxNewtonIterations(); it++) {
             double norm = bal.scaledNorm();
-            DMatrixRMaj jac = Jacobian.of(p, sens, loop.emissivePowerDerivatives(t));
-            Posedness.requireLiveColumns(p, jac);
-            double[] dx = step(jac, bal.residualW());
+            double[] dx;
+            if (krylov != null) {
+                int before = krylov.products();
+                dx = krylov.solve(loop.emissivePowerDerivatives(t), bal);
+                counters.krylovProducts += krylov.products() - before;
+            } else {
+                DMatrixRMaj jac = Jacobian.compact(p, sens, loop.emissivePowerDerivatives(t));
+                Posedness.requireLiveColumns(p, jac);
+                dx = step(jac, bal.residualW());
+            }
             double lambda = 1.0;
             for (int a = 0; a < m; a++) {
                 double d = Math.abs(dx[a]);
@@ -93,25 +103,25 @@ final class NewtonIteration {
                 + " W)", counters.newtonIterations, maxAbs(r));
     }
 
-    /** The Newton step −J⁻¹ r by LU (a new array). */
+    /** The Newton step −J⁻¹ r by LU ({@link DenseLu}, in place on the Jacobian's array; a new array). */
     private double[] step(DMatrixRMaj jac, double[] r) {
         int m = r.length;
-        LinearSolverDense<DMatrixRMaj> lu = LinearSolverFactory_DDRM.lu(m);
-        DMatrixRMaj rhs = new DMatrixRMaj(m, 1);
-        for (int a = 0; a < m; a++) {
-            rhs.set(a, 0, -r[a]);
-        }
-        DMatrixRMaj dx = new DMatrixRMaj(m, 1);
-        if (!lu.setA(jac.copy())) {
+        DenseLu lu = DenseLu.factor(jac.data, m);
+        if (lu == null) {
             throw Posedness.singular();
         }
+        double[] rhs = new double[m];
+        for (int a = 0; a < m; a++) {
+            rhs[a] = -r[a];
+        }
+        double[] dx = new double[m];
         lu.solve(rhs, dx);
         for (int a = 0; a < m; a++) {
-            if (!Double.isFinite(dx.get(a, 0))) {
+            if (!Double.isFinite(dx[a])) {
                 throw Posedness.singular();
             }
         }
-        return dx.data.clone();
+        return dx;
     }
 
     /** A demand that needs a temperature at or below 0 K is impossible: say so. */

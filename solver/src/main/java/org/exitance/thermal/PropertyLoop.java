@@ -18,12 +18,19 @@ final class PropertyLoop {
     private final SolverSettings settings;
     private final RadiositySolver linear;
     private final ExternalAbsorption absorption;
+    private final SolverChoice choice;
 
-    PropertyLoop(Problem p, SolverSettings settings, RadiositySolver linear, ExternalAbsorption absorption) {
+    /**
+     * @param linear  the band-solve strategy
+     * @param choice  how the Newton step is found (its band-solve strategy is {@code linear})
+     */
+    PropertyLoop(Problem p, SolverSettings settings, RadiositySolver linear, ExternalAbsorption absorption,
+                 SolverChoice choice) {
         this.p = p;
         this.settings = settings;
         this.linear = linear;
         this.absorption = absorption;
+        this.choice = choice;
     }
 
     /** The band loop (properties and networks) at temperatures t (K, not modified). */
@@ -45,7 +52,7 @@ final class PropertyLoop {
             counters.propertyIterations = Math.max(counters.propertyIterations, 1);
             return t;
         }
-        NewtonIteration newton = new NewtonIteration(p, settings, counters);
+        NewtonIteration newton = new NewtonIteration(p, settings, counters, choice);
         for (int outer = 1; outer <= settings.maxPropertyIterations(); outer++) {
             counters.propertyIterations++;
             double[][] eps = BandProperties.emissivities(p.enc.surfaces(), bands, t);

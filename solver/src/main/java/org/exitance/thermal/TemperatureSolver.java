@@ -21,7 +21,9 @@ import org.exitance.result.SolveResult;
  *   <li>with several bands and unknown temperatures, a one-band gray solve first (each
  *       surface's total hemispherical emissivity at its temperature) as the starting point;</li>
  *   <li>{@link PropertyLoop}: band properties updated around {@link NewtonIteration} until the
- *       temperatures settle;</li>
+ *       temperatures settle; the linear algebra (band solves and Newton step) is a
+ *       {@link SolverChoice}, by default chosen by {@link SolverChoice#forCase} from the size, the
+ *       bands and the memory estimate ({@link MemoryEstimate});</li>
  *   <li>the band loop at the converged state ({@link BandLoop}) and {@link ResultAssembler}; a
  *       case solved on facets is reported by surface ({@link FacetAggregation}).</li>
  * </ol>
@@ -33,16 +35,34 @@ import org.exitance.result.SolveResult;
 public final class TemperatureSolver {
     private final RadiationCase radiationCase;
     private final RadiositySolver linear;
+    private final SolverChoice choice;
     private final ExternalAbsorption absorption;
 
-    /** A solver that picks the linear strategy by {@link RadiositySolver#forSize} and absorbs by source spectrum. */
+    /** A solver that picks its linear algebra by {@link SolverChoice#forCase} and absorbs by source spectrum. */
     public TemperatureSolver(RadiationCase c) {
         this(c, ExternalAbsorption.SOURCE_SPECTRUM);
     }
 
-    /** A solver with the default linear strategy and the given absorption of external irradiation. */
+    /** A solver with the default linear algebra and the given absorption of external irradiation. */
     public TemperatureSolver(RadiationCase c, ExternalAbsorption absorption) {
-        this(c, RadiositySolver.forSize(c.enclosure().size(), c.enclosure().hasWindows()), absorption);
+        this(c, (SolverChoice) null, absorption);
+    }
+
+    /**
+     * A solver with the given linear algebra (null: the default rule, {@link SolverChoice#forCase},
+     * applied when the bands are known).
+     *
+     * @throws IllegalArgumentException when the case has windows and the choice is "iterative"
+     */
+    public TemperatureSolver(RadiationCase c, SolverChoice choice, ExternalAbsorption absorption) {
+        if (choice == SolverChoice.ITERATIVE && c.enclosure().hasWindows()) {
+            throw new IllegalArgumentException("an enclosure with windows needs a direct radiosity solver"
+                    + " (--solver direct or newton-krylov)");
+        }
+        this.radiationCase = c;
+        this.linear = null;
+        this.choice = choice;
+        this.absorption = Objects.requireNonNull(absorption);
     }
 
     /** A solver with the given linear strategy, absorbing external irradiation by source spectrum. */
@@ -62,6 +82,7 @@ public final class TemperatureSolver {
         }
         this.radiationCase = c;
         this.linear = linear;
+        this.choice = SolverChoice.DIRECT;
         this.absorption = Objects.requireNonNull(absorption);
     }
 
@@ -91,7 +112,12 @@ public final class TemperatureSolver {
         Posedness.requireAnchor(enc);
         double[] t = StartingGuess.temperatures(p, radiationCase.sources());
         Counters counters = new Counters();
-        PropertyLoop properties = new PropertyLoop(p, radiationCase.settings(), linear, absorption);
+        SolverChoice how = choice != null ? choice : SolverChoice.forCase(enc.size(), p.unknown.length, bands.size(),
+                enc.hasWindows(), Runtime.getRuntime().maxMemory());
+        RadiositySolver band = linear != null ? linear : how.radiositySolver(enc.size());
+        long estimate = MemoryEstimate.bytes(enc.size(), p.unknown.length, bands.size(), how);
+        PeakHeap.reset();
+        PropertyLoop properties = new PropertyLoop(p, radiationCase.settings(), band, absorption, how);
         if (p.unknown.length > 0 && bands.size() > 1) {
             t = properties.converge(BandSet.gray("gray start").bands(), t, counters);
         }
@@ -99,8 +125,10 @@ public final class TemperatureSolver {
         BandLoop loop = properties.at(bands, t);
         BandState[] states = loop.solve(t);
         counters.addLinear(loop);
-        SolveResult r = new ResultAssembler(radiationCase, linear.name())
+        SolveResult assembled = new ResultAssembler(radiationCase, band.name())
                 .assemble(p, bandSet, loop, states, t, counters);
+        SolveResult r = assembled.toBuilder().solver(assembled.solver().withRun(how.label(), counters.bandIterations,
+                counters.krylovProducts, estimate, PeakHeap.bytes())).build();
         return new ConvergedState(p, loop, states, t, r);
     }
 

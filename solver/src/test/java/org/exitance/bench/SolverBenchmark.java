@@ -1,0 +1,188 @@
+package org.exitance.bench;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.ForkJoinPool;
+import org.exitance.bands.ExternalAbsorption;
+import org.exitance.model.RadiationCase;
+import org.exitance.network.DenseTiming;
+import org.exitance.result.SolveResult;
+import org.exitance.result.SolverReport;
+import org.exitance.thermal.MemoryEstimate;
+import org.exitance.thermal.SolverChoice;
+import org.exitance.thermal.TemperatureSolver;
+
+/**
+ * Benchmark of the temperature solve on closed-box models ({@link BoxModels}, invented data), run
+ * by hand as docs/performance.md shows; not a unit test, and its timings live only in that file.
+ *
+ * <pre>
+ *   scaling CHOICE BANDS SIZES [runs] [threads]   time, peak heap and growth exponent of a solve
+ *   dense N FILE [threads]                        export one band system (A, b) and time the dense path on it
+ * </pre>
+ * CHOICE: direct, newton-krylov, iterative or auto (the default rule). SIZES: comma-separated
+ * facet counts (each rounded to 6c²). A size whose memory estimate exceeds the heap is skipped
+ * with the estimate printed.
+ */
+public final class SolverBenchmark {
+    private SolverBenchmark() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        if (args.length < 1) {
+            System.err.println("usage: scaling CHOICE BANDS SIZES [runs] [threads] | dense N FILE [threads]");
+            System.exit(2);
+        }
+        switch (args[0]) {
+            case "scaling" -> scaling(args);
+            case "dense" -> dense(args);
+            default -> {
+                System.err.println("unknown scenario " + args[0]);
+                System.exit(2);
+            }
+        }
+    }
+
+    private static void scaling(String[] args) throws Exception {
+        SolverChoice choice = args[1].equals("auto") ? null : SolverChoice.of(args[1]);
+        int bands = Integer.parseInt(args[2]);
+        int[] sizes = Arrays.stream(args[3].split(",")).mapToInt(Integer::parseInt).toArray();
+        int runs = args.length > 4 ? Integer.parseInt(args[4]) : 3;
+        int threads = args.length > 5 ? Integer.parseInt(args[5]) : Runtime.getRuntime().availableProcessors();
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        List<double[]> points = new ArrayList<>();
+        System.out.printf(Locale.ROOT, "%-8s %-6s %-5s %-14s %-9s %-9s %-9s %-7s %-7s %-8s %s%n", "facets", "unknown",
+                "bands", "solver", "median_s", "min_s", "peak_MB", "est_MB", "newton", "products", "iterations/band");
+        for (int size : sizes) {
+            int c = BoxModels.cellsFor(size);
+            int n = 6 * c * c;
+            int m = (n + 2) / 3;
+            SolverChoice how = choice != null ? choice
+                    : SolverChoice.forCase(n, m, bands, false, Runtime.getRuntime().maxMemory());
+            long est = MemoryEstimate.bytes(n, m, bands, how);
+            if (est > Runtime.getRuntime().maxMemory()) {
+                System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s skipped: estimate %d MB > heap %d MB%n", n, m, bands,
+                        how.label(), est >> 20, Runtime.getRuntime().maxMemory() >> 20);
+                continue;
+            }
+            RadiationCase rc = BoxModels.box(size, bands);
+            double[] times = new double[runs];
+            SolveResult last = null;
+            long cpu0 = cpuNanos();
+            for (int r = 0; r < runs; r++) {
+                System.gc();
+                long t0 = System.nanoTime();
+                last = pool.submit(() -> new TemperatureSolver(rc, how, ExternalAbsorption.SOURCE_SPECTRUM)
+                        .solve(rc.bands())).get();
+                times[r] = (System.nanoTime() - t0) * 1e-9;
+            }
+            double[] sorted = times.clone();
+            Arrays.sort(sorted);
+            double median = sorted[runs / 2];
+            double cpuPerRun = (cpuNanos() - cpu0) * 1e-9 / runs;
+            SolverReport s = last.solver();
+            System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s %-9.3f %-9.3f %-9d %-7d %-7d %-8d %s  (runs %s; cpu %.1f s/run; balance %.3g W)%n",
+                    n, m, bands, s.strategy(), median, sorted[0], s.peakHeapBytes() >> 20, s.estimatedBytes() >> 20,
+                    s.newtonIterations(), s.krylovProducts(), Arrays.toString(s.bandIterations()), fmt(times),
+                    cpuPerRun, last.energyBalanceW());
+            points.add(new double[] {n, median});
+        }
+        if (points.size() >= 2) {
+            System.out.printf(Locale.ROOT, "fitted growth exponent (time ~ N^p, least squares over the sizes above): p = %.2f%n",
+                    exponent(points));
+        }
+        pool.shutdown();
+    }
+
+    /** CPU time of the whole process so far (ns): on a shared machine, the work done, not the waiting. */
+    static long cpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
+                .getOperatingSystemMXBean()).getProcessCpuTime();
+    }
+
+    /** Least-squares slope of log t against log N. */
+    static double exponent(List<double[]> pts) {
+        double sx = 0;
+        double sy = 0;
+        double sxx = 0;
+        double sxy = 0;
+        for (double[] p : pts) {
+            double x = Math.log(p[0]);
+            double y = Math.log(p[1]);
+            sx += x;
+            sy += y;
+            sxx += x * x;
+            sxy += x * y;
+        }
+        int k = pts.size();
+        return (k * sxy - sx * sy) / (k * sxx - sx * sx);
+    }
+
+    /**
+     * Writes one band system of the box, {@code A = I − diag(ρ)F} and b (little-endian doubles: N as
+     * a double, then A row-major, then b) and times the tool's dense path on it: the factorization
+     * and one solve, three times, in the given number of threads.
+     */
+    private static void dense(String[] args) throws Exception {
+        int size = Integer.parseInt(args[1]);
+        Path file = Path.of(args[2]);
+        int threads = args.length > 3 ? Integer.parseInt(args[3]) : 1;
+        int c = BoxModels.cellsFor(size);
+        int n = 6 * c * c;
+        double[] area = new double[n];
+        double[] f = BoxModels.viewFactors(c, area);
+        double[] rho = new double[n];
+        double[] b = new double[n];
+        for (int i = 0; i < n; i++) {
+            rho[i] = i % 2 == 0 ? 0.7 : 0.15; // invented
+            b[i] = (1 - rho[i]) * 5.67e-8 * Math.pow(400 + 800.0 * (i % 97) / 96, 4);
+        }
+        double[] a = new double[n * n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                a[i * n + j] = (i == j ? 1.0 : 0.0) - rho[i] * f[i * n + j];
+            }
+        }
+        write(file, n, a, b);
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        double[] times = new double[3];
+        double residual = 0;
+        for (int r = 0; r < times.length; r++) {
+            double[] copy = a.clone();
+            long t0 = System.nanoTime();
+            residual = pool.submit(() -> DenseTiming.factorAndSolve(copy, n, b, a)).get();
+            times[r] = (System.nanoTime() - t0) * 1e-9;
+        }
+        pool.shutdown();
+        double[] sorted = times.clone();
+        Arrays.sort(sorted);
+        System.out.printf(Locale.ROOT, "java dense N=%d threads=%d median_s=%.4f min_s=%.4f runs=%s residual=%.2e%n", n,
+                threads, sorted[1], sorted[0], fmt(times), residual);
+    }
+
+    private static void write(Path file, int n, double[] a, double[] b) throws IOException {
+        java.nio.ByteBuffer buf = java.nio.ByteBuffer.allocate(8 * (1 + a.length + b.length))
+                .order(java.nio.ByteOrder.LITTLE_ENDIAN);
+        buf.putDouble(n);
+        for (double v : a) {
+            buf.putDouble(v);
+        }
+        for (double v : b) {
+            buf.putDouble(v);
+        }
+        Files.write(file, buf.array());
+    }
+
+    private static String fmt(double[] t) {
+        StringBuilder sb = new StringBuilder();
+        for (double v : t) {
+            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.3f", v));
+        }
+        return sb.toString();
+    }
+}
