@@ -140,4 +140,49 @@ class TwoSidedPlateTest {
         assertThat(r.surface("s0f").temperatureK()).isCloseTo(ts, within(1e-6));
         assertThat(r.surface("plate1").netHeatW()).isCloseTo(q, within(1e-7 * q));
     }
+
+    /**
+     * A cryogenic line: long concentric tubes (inner r₁ at 77 K, jacket r₃ at 300 K) with a thin
+     * shield tube r₂ between them, per metre. Each gap is the long-concentric-cylinder exchange,
+     * q' = 2πr_i σ(T_i⁴ − T_j⁴)/(1/ε_i + (1 − ε_j)/ε_j · r_i/r_j) (Incropera et al., 6th ed.,
+     * Eq. 13.20 and its shield examples), and the shield balances the two gaps:
+     * T_s⁴ = (r₁T₁⁴/D₁ + r₂T₃⁴/D₂)/(r₁/D₁ + r₂/D₂), with D₁, D₂ the two denominators.
+     */
+    @Test
+    void aShieldTubeInACryogenicLineCarriesTheConcentricClosedFormHeat() {
+        double r1 = 0.025;
+        double r2 = 0.035;
+        double r3 = 0.05;
+        double e1 = 0.05;
+        double es = 0.03;
+        double e3 = 0.1;
+        Material inner = new Material("inner", new GrayEmissivity(e1), "");
+        Material shield = new Material("shield", new GrayEmissivity(es), "");
+        Material jacket = new Material("jacket", new GrayEmissivity(e3), "");
+        double a1 = 2 * Math.PI * r1;
+        double a2 = 2 * Math.PI * r2;
+        double a3 = 2 * Math.PI * r3;
+        List<EnclosureSurface> s = List.of(
+                new EnclosureSurface("line", inner, a1, new BoundaryCondition.FixedTemperature(77), Double.NaN),
+                face("shield_in", shield, "shield_out", true),
+                face("shield_out", shield, "shield_in", false),
+                new EnclosureSurface("jacket", jacket, a3, new BoundaryCondition.FixedTemperature(300), Double.NaN));
+        List<EnclosureSurface> sized = new ArrayList<>();
+        for (EnclosureSurface x : s) {
+            sized.add(x.name().startsWith("shield") ? new EnclosureSurface(x.name(), x.material(), a2, x.boundary(),
+                    Double.NaN, null, x.otherFace()) : x);
+        }
+        // long concentric tubes (Incropera 6th ed., Table 13.1): inner sees outer, outer sees inner r_i/r_j and itself
+        double[][] f = {{0, 1, 0, 0}, {r1 / r2, 1 - r1 / r2, 0, 0}, {0, 0, 0, 1}, {0, 0, r2 / r3, 1 - r2 / r3}};
+        RadiationCase c = new RadiationCase("cryogenic line", "", List.of(), new Enclosure(sized, f, null), null,
+                SolverSettings.DEFAULT, List.of());
+        SolveResult r = new TemperatureSolver(c).solve(BandSet.gray("gray"));
+        double d1 = 1 / e1 + (1 - es) / es * r1 / r2;
+        double d2 = 1 / es + (1 - e3) / e3 * r2 / r3;
+        double ts4 = (r1 * Math.pow(77, 4) / d1 + r2 * Math.pow(300, 4) / d2) / (r1 / d1 + r2 / d2);
+        double q = 2 * Math.PI * r1 * SIGMA * (Math.pow(77, 4) - ts4) / d1; // W per metre, negative: the line gains
+        assertThat(r.surface("shield_in").temperatureK()).isCloseTo(Math.pow(ts4, 0.25), within(1e-8));
+        assertThat(r.surface("line").netHeatW()).isCloseTo(q, within(1e-9 * Math.abs(q)));
+        assertThat(q).isNegative();
+    }
 }
