@@ -85,7 +85,7 @@ public final class SectionViewFactors {
         }
         List<String> userNames = section.surfaces().stream().map(Section.NamedElement::name).toList();
         return new SectionResult(userNames, perimeters, f, section.axialLength_m(),
-                diagnostics(f, n, perimeters, userNames));
+                ClosureDiagnostics.of(f, n, perimeters, userNames::get));
     }
 
     /** Exchange lengths X_ij = L_i F_ij (m), row-major, canonical order. */
@@ -139,35 +139,6 @@ public final class SectionViewFactors {
             rowOfShell += len[i] - s;
         }
         x[k * n + k] = len[k] - rowOfShell;
-    }
-
-    private static ClosureDiagnostics diagnostics(double[] f, int n, double[] len, List<String> names) {
-        double maxRow = 0, sumSq = 0, maxRec = 0, maxNeg = 0;
-        int worstRow = 0, wi = 0, wj = 0;
-        for (int i = 0; i < n; i++) {
-            double s = 0;
-            for (int j = 0; j < n; j++) {
-                s += f[i * n + j];
-            }
-            double e = 1 - s;
-            sumSq += e * e;
-            if (Math.abs(e) > maxRow) {
-                maxRow = Math.abs(e);
-                worstRow = i;
-            }
-            maxNeg = Math.max(maxNeg, -e);
-            for (int j = i + 1; j < n; j++) {
-                double a = len[i] * f[i * n + j], b = len[j] * f[j * n + i];
-                double m = Math.max(Math.abs(a), Math.abs(b));
-                if (m > 0 && Math.abs(a - b) / m > maxRec) {
-                    maxRec = Math.abs(a - b) / m;
-                    wi = i;
-                    wj = j;
-                }
-            }
-        }
-        return new ClosureDiagnostics(maxRow, Math.sqrt(sumSq / n), names.get(worstRow), maxRec,
-                names.get(wi) + " -> " + names.get(wj), maxNeg);
     }
 
     /** Canonical key of an element: kind, then its coordinates and side. */

@@ -24,7 +24,7 @@ public record ClosureDiagnostics(double maxRowSumError, double rmsRowSumError, S
      * @param names row names
      * @return the diagnostics
      */
-    static ClosureDiagnostics of(double[] f, int n, double[] area, java.util.function.IntFunction<String> names) {
+    public static ClosureDiagnostics of(double[] f, int n, double[] area, java.util.function.IntFunction<String> names) {
         double maxRow = -1, sumSq = 0, maxRec = 0, maxNeg = 0;
         int worstRow = 0, wi = 0, wj = 0;
         for (int i = 0; i < n; i++) {
