@@ -2,6 +2,7 @@ package org.exitance.geometry.viewfactor;
 
 import java.util.List;
 import org.exitance.geometry.Facet;
+import org.exitance.geometry.Patch;
 import org.exitance.geometry.Scene;
 import org.exitance.geometry.Surface;
 
@@ -16,7 +17,14 @@ final class FacetTable {
     final int[] vertexStart;
     final double[] xyz;
     final double[] normal;
+    /** Exact area per facet (m²): the patch's for curved facets. */
     final double[] area;
+    /** Area of the polygon (m²), equal to {@link #area} for plain facets. */
+    final double[] polygonArea;
+    /** Exact shape per facet, or null. */
+    final Patch[] patch;
+    /** True if any facet has a patch. */
+    final boolean anyPatch;
     final double[] centroid;
     final double[] radius;
     final int[] surfaceOf;
@@ -45,6 +53,9 @@ final class FacetTable {
         xyz = new double[3 * vertexStart[count]];
         normal = new double[3 * count];
         area = new double[count];
+        polygonArea = new double[count];
+        patch = new Patch[count];
+        boolean any = false;
         centroid = new double[3 * count];
         radius = new double[count];
         surfaceOf = new int[count];
@@ -57,7 +68,10 @@ final class FacetTable {
                 normal[3 * f] = facet.normal().x();
                 normal[3 * f + 1] = facet.normal().y();
                 normal[3 * f + 2] = facet.normal().z();
-                area[f] = facet.area();
+                area[f] = facet.exactArea();
+                polygonArea[f] = facet.area();
+                patch[f] = facet.patch();
+                any |= patch[f] != null;
                 centroid[3 * f] = facet.centroid().x();
                 centroid[3 * f + 1] = facet.centroid().y();
                 centroid[3 * f + 2] = facet.centroid().z();
@@ -67,10 +81,16 @@ final class FacetTable {
                 for (double c : facet.coordinates()) {
                     h = mix(h ^ Double.doubleToLongBits(c));
                 }
+                if (patch[f] != null) {
+                    for (double c : patch[f].parameters()) {
+                        h = mix(h ^ Double.doubleToLongBits(c));
+                    }
+                }
                 key[f] = h;
                 f++;
             }
         }
+        anyPatch = any;
         double[] lo = {Double.MAX_VALUE, Double.MAX_VALUE, Double.MAX_VALUE};
         double[] hi = {-Double.MAX_VALUE, -Double.MAX_VALUE, -Double.MAX_VALUE};
         for (int k = 0; k < xyz.length; k++) {

@@ -16,7 +16,7 @@ import org.exitance.geometry.Surface;
 public final class GeometryHash {
 
     /** Changes whenever the algorithm changes results. */
-    static final String FORMAT = "exitance-viewfactor-1";
+    static final String FORMAT = "exitance-viewfactor-2";
 
     private GeometryHash() {
     }
@@ -42,10 +42,17 @@ public final class GeometryHash {
                         b.putLong(Double.doubleToLongBits(c));
                     }
                     md.update(b.array());
+                    if (f.patch() != null) {
+                        ByteBuffer pb = ByteBuffer.allocate(8 * 20);
+                        for (double c : f.patch().parameters()) {
+                            pb.putLong(Double.doubleToLongBits(c));
+                        }
+                        md.update(pb.array());
+                    }
                 }
             }
             String opts = o.pairTolerance() + "|" + o.contourOrder() + "|" + o.visibilityOrder() + "|"
-                    + o.obstruction() + "|" + o.smoothing();
+                    + o.obstruction() + "|" + o.smoothing() + "|" + o.tolerance();
             md.update(opts.getBytes(StandardCharsets.UTF_8));
             StringBuilder sb = new StringBuilder();
             for (byte x : md.digest()) {

@@ -1,5 +1,6 @@
 package org.exitance.geometry.viewfactor;
 
+import org.exitance.geometry.Patch;
 import org.exitance.geometry.bvh.TriangleBvh;
 
 /**
@@ -23,6 +24,8 @@ final class PairEvaluator {
 
     static final int ZERO = 0, CLIPPED = 1, CONTOUR = 2, QUADRATURE = 3, PARTIAL = 4, HIDDEN = 5;
     static final int COUNTERS = 6;
+    /** Halving depth of curved pairs that touch (see {@link CurvedPairs}). */
+    static final int CURVED_DEPTH = 10;
 
 
     private final FacetTable t;
@@ -34,6 +37,8 @@ final class PairEvaluator {
     private final AreaQuadrature quadrature;
     private final VisibilityQuadrature visibility;
     private final SplitPairs split;
+    private final CurvedPairs curved;
+    private final SelfExchange self;
     private final double contourTolerance;
     private final Shaft shaft = new Shaft();
     private final Poly p = new Poly();
@@ -52,6 +57,8 @@ final class PairEvaluator {
         this.quadrature = new AreaQuadrature(t);
         this.contourTolerance = 0.1 * rule.tolerance();
         this.split = new SplitPairs(contour, quadrature, rule, contourOrder);
+        this.curved = new CurvedPairs(contour, rule, contourOrder, CURVED_DEPTH);
+        this.self = new SelfExchange(contour, contourOrder);
         this.visibility = occluders == null ? null : new VisibilityQuadrature(t, occluders);
     }
 
@@ -67,6 +74,9 @@ final class PairEvaluator {
             j = swap;
         }
         lastError = 0;
+        if (t.anyPatch && (t.patch[i] != null || t.patch[j] != null)) {
+            return curvedPair(i, j);
+        }
         double tol = 1e-9 * (t.radius[i] + t.radius[j]);
         int sideJ = side(i, j, tol);
         int sideI = side(j, i, tol);
@@ -123,6 +133,44 @@ final class PairEvaluator {
             counters[PARTIAL]++;
         }
         return v;
+    }
+
+    /** A pair with an exact patch on at least one side: {@link CurvedPairs}, then visibility as for facets. */
+    private double curvedPair(int i, int j) {
+        Patch a = t.patch[i], b = t.patch[j];
+        if (a != null && b != null && a.sameSurface(b) && !a.concave() && a.sign() == b.sign()) {
+            counters[ZERO]++; // a plane or a convex surface does not see itself
+            return 0;
+        }
+        p.load(t, i);
+        q.load(t, j);
+        double s = curved.exchangeArea(t, i, j, p, q);
+        lastError = curved.lastError;
+        if (s == 0) {
+            counters[ZERO]++;
+            return 0;
+        }
+        boolean blocked = false;
+        if (occluders != null && occluders.overlapsBounds(p.xyz, p.n, q.xyz, q.n)) {
+            shaft.build(p, q);
+            blocked = occluders.mayIntersect(shaft.planes, shaft.count, shaft.tolerance, i, j);
+        }
+        if (!blocked) {
+            counters[curved.lastPieces > 1 ? CONTOUR : QUADRATURE]++;
+            return s;
+        }
+        double r = Math.sqrt(sq(p.cx - q.cx) + sq(p.cy - q.cy) + sq(p.cz - q.cz));
+        double rho = r / (p.radius + q.radius);
+        long seed = FacetTable.mix(t.key[i] ^ Long.rotateLeft(t.key[j], 17));
+        double v = visibility.exchangeArea(p, q, rho < 3 ? visibilityOrder + 1 : visibilityOrder, s, seed);
+        lastError += visibility.lastStandardError;
+        counters[v == 0 ? HIDDEN : PARTIAL]++;
+        return v;
+    }
+
+    /** @return A_i F_ii (m²) of facet i: nonzero only for a patch concave toward its radiating side */
+    double selfExchangeArea(int i) {
+        return self.of(t.patch[i]);
     }
 
     private static double sq(double v) {

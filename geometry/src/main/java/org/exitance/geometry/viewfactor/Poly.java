@@ -31,7 +31,7 @@ final class Poly {
         nx = t.normal[3 * f];
         ny = t.normal[3 * f + 1];
         nz = t.normal[3 * f + 2];
-        area = t.area[f];
+        area = t.polygonArea[f];
         cx = t.centroid[3 * f];
         cy = t.centroid[3 * f + 1];
         cz = t.centroid[3 * f + 2];
@@ -116,6 +116,38 @@ final class Poly {
 
     private static double sqDist(double d) {
         return d * d;
+    }
+
+    /**
+     * Sets this polygon from packed vertices; normal by Newell's method, then area, centroid and
+     * radius. Modifies this; {@code src} is not modified.
+     *
+     * @param src packed coordinates (m), at least 3 vertices, planar and convex
+     * @param count number of vertices
+     */
+    void setVertices(double[] src, int count) {
+        n = count;
+        System.arraycopy(src, 0, xyz, 0, 3 * count);
+        double ax = 0, ay = 0, az = 0;
+        for (int k = 0; k < count; k++) {
+            int l = (k + 1) % count;
+            ax += (xyz[3 * k + 1] - xyz[3 * l + 1]) * (xyz[3 * k + 2] + xyz[3 * l + 2]);
+            ay += (xyz[3 * k + 2] - xyz[3 * l + 2]) * (xyz[3 * k] + xyz[3 * l]);
+            az += (xyz[3 * k] - xyz[3 * l]) * (xyz[3 * k + 1] + xyz[3 * l + 1]);
+        }
+        double len = Math.sqrt(ax * ax + ay * ay + az * az);
+        nx = ax / len;
+        ny = ay / len;
+        nz = az / len;
+        facet = -1;
+        clipped = true;
+        radius = 0;
+        updateMeasures();
+        double r = 0;
+        for (int k = 0; k < n; k++) {
+            r = Math.max(r, sqDist(xyz[3 * k] - cx) + sqDist(xyz[3 * k + 1] - cy) + sqDist(xyz[3 * k + 2] - cz));
+        }
+        radius = Math.sqrt(r);
     }
 
     /** Copies {@code o} into this. Modifies this. */

@@ -54,6 +54,13 @@ final class ProximityRule {
                     break;
                 }
             }
+            // the error of an order cannot grow with the distance: an order that met the
+            // tolerance nearer still meets it (the table's far rows are floored by the reference's
+            // own cancellation, so without this a tight tolerance sent far pairs to the contour)
+            if (k > 0 && order[k - 1] > 0 && (order[k] == 0 || order[k] > order[k - 1])) {
+                order[k] = order[k - 1];
+                bound[k] = Math.min(bound[k - 1], MEASURED[k][order[k]] * SAFETY);
+            }
         }
     }
 

@@ -1,11 +1,18 @@
 package org.exitance.geometry.viewfactor;
 
 /**
- * Optional enforcement of reciprocity and summation by least-squares smoothing of the facet
- * exchange areas ({@link ExchangeAreaSmoother}). Never applied unless requested.
+ * Enforcement of reciprocity and summation by least-squares smoothing of the facet exchange
+ * areas ({@link ExchangeAreaSmoother}). The result always states the raw (unsmoothed) errors and
+ * what smoothing changed.
  */
 public enum Smoothing {
-    /** Leave the computed factors as they are (default). */
+    /**
+     * Default: CLOSED when the raw facet matrix is a closed enclosure within the tolerance (every
+     * facet row sum within {@link ViewFactorOptions#tolerance()} of 1), else nothing. A matrix
+     * outside its tolerance is never smoothed into looking closed.
+     */
+    AUTO,
+    /** Leave the computed factors as they are. */
     NONE,
     /** Closed enclosure: symmetric exchange areas and every facet row summing to 1. */
     CLOSED,

@@ -86,6 +86,11 @@ public final class ViewFactorCalculator {
                         if (cancelRequested.getAsBoolean()) {
                             throw new CancellationException("view-factor computation cancelled");
                         }
+                        double self = ev.selfExchangeArea(i);
+                        if (self != 0) {
+                            f[i * n + i] = self / t.area[i];
+                            err[i] += 1e-9 * self;
+                        }
                         for (int j = i + 1; j < n; j++) {
                             double s = ev.exchangeArea(i, j);
                             if (!Double.isFinite(s) || !Double.isFinite(ev.lastError)) {
@@ -127,12 +132,49 @@ public final class ViewFactorCalculator {
         for (int i = 0; i < n; i++) {
             maxRowError = Math.max(maxRowError, rowError[i] / t.area[i]);
         }
-        SmoothingReport smoothing = ExchangeAreaSmoother.smooth(f, n, t.area, options.smoothing());
-        return assemble(scene, options, t, f, counts, maxRowError, smoothing, threads, start);
+        List<String> names = new ArrayList<>();
+        scene.surfaces().forEach(s -> names.add(s.name()));
+        ClosureDiagnostics[] raw = closures(t, f, names, scene.surfaceCount());
+        Smoothing mode = options.smoothing();
+        if (mode == Smoothing.AUTO) {
+            // closed enclosure within the tolerance: make it exactly closed; otherwise leave it
+            mode = raw[0].maxRowSumError() <= options.tolerance() ? Smoothing.CLOSED : Smoothing.NONE;
+        }
+        SmoothingReport smoothing = ExchangeAreaSmoother.smooth(f, n, t.area, mode);
+        return assemble(scene, options, t, f, counts, maxRowError, smoothing, threads, start, raw);
+    }
+
+    /** @return {facet, surface} closure diagnostics of facet matrix f (not modified) */
+    private static ClosureDiagnostics[] closures(FacetTable t, double[] f, List<String> names, int m) {
+        int n = t.count;
+        double[] sArea = new double[m];
+        for (int i = 0; i < n; i++) {
+            sArea[t.surfaceOf[i]] += t.area[i];
+        }
+        double[] flat = new double[m * m];
+        for (int i = 0; i < n; i++) {
+            int a = t.surfaceOf[i];
+            for (int j = 0; j < n; j++) {
+                flat[a * m + t.surfaceOf[j]] += t.area[i] * f[i * n + j];
+            }
+        }
+        for (int a = 0; a < m; a++) {
+            for (int b = 0; b < m; b++) {
+                flat[a * m + b] /= sArea[a];
+            }
+        }
+        int[] firstOfSurface = new int[m];
+        for (int i = n - 1; i >= 0; i--) {
+            firstOfSurface[t.surfaceOf[i]] = i;
+        }
+        ClosureDiagnostics facet = ClosureDiagnostics.of(f, n, t.area,
+                i -> names.get(t.surfaceOf[i]) + "#" + (i - firstOfSurface[t.surfaceOf[i]]));
+        return new ClosureDiagnostics[] {facet, ClosureDiagnostics.of(flat, m, sArea, names::get)};
     }
 
     private static ViewFactorResult assemble(Scene scene, ViewFactorOptions options, FacetTable t, double[] f,
-            long[] counts, double maxRowError, SmoothingReport smoothing, int threads, long start) {
+            long[] counts, double maxRowError, SmoothingReport smoothing, int threads, long start,
+            ClosureDiagnostics[] raw) {
         int n = t.count, m = scene.surfaceCount();
         double[] sArea = new double[m];
         for (int i = 0; i < n; i++) {
@@ -170,6 +212,6 @@ public final class ViewFactorCalculator {
                 counts[PairEvaluator.HIDDEN]);
         return new ViewFactorResult(names, sArea, sf, env, n, t.area.clone(), t.surfaceOf.clone(), f, surfaceClosure,
                 facetClosure, mc, maxRowError, smoothing, GeometryHash.of(scene, options), options, threads,
-                (System.nanoTime() - start) * 1e-9);
+                (System.nanoTime() - start) * 1e-9, raw[0], raw[1]);
     }
 }

@@ -30,12 +30,14 @@ public final class ViewFactorResult {
     private final ViewFactorOptions options;
     private final int threadsUsed;
     private final double seconds;
+    private final ClosureDiagnostics rawFacetClosure;
+    private final ClosureDiagnostics rawSurfaceClosure;
 
     ViewFactorResult(List<String> surfaceNames, double[] surfaceAreas, double[][] surfaceMatrix, double[] environment,
             int facetCount, double[] facetAreas, int[] facetSurface, double[] facetMatrix,
             ClosureDiagnostics surfaceClosure, ClosureDiagnostics facetClosure, MethodCounts methodCounts,
             double maxRowErrorEstimate, SmoothingReport smoothing, String geometryHash, ViewFactorOptions options,
-            int threadsUsed, double seconds) {
+            int threadsUsed, double seconds, ClosureDiagnostics rawFacetClosure, ClosureDiagnostics rawSurfaceClosure) {
         this.surfaceNames = List.copyOf(surfaceNames);
         this.surfaceAreas = surfaceAreas;
         this.surfaceMatrix = surfaceMatrix;
@@ -53,6 +55,8 @@ public final class ViewFactorResult {
         this.options = options;
         this.threadsUsed = threadsUsed;
         this.seconds = seconds;
+        this.rawFacetClosure = rawFacetClosure;
+        this.rawSurfaceClosure = rawSurfaceClosure;
     }
 
     /** @return surface names in scene order */
@@ -146,7 +150,43 @@ public final class ViewFactorResult {
         return maxRowErrorEstimate;
     }
 
-    /** @return what closure enforcement did (mode NONE if not requested) */
+    /** @return closure diagnostics of the facet matrix as computed, before any smoothing */
+    public ClosureDiagnostics rawFacetClosure() {
+        return rawFacetClosure;
+    }
+
+    /** @return closure diagnostics of the surface matrix as computed, before any smoothing */
+    public ClosureDiagnostics rawSurfaceClosure() {
+        return rawSurfaceClosure;
+    }
+
+    /** @return the requested row-sum tolerance ({@link ViewFactorOptions#tolerance()}) */
+    public double tolerance() {
+        return options.tolerance();
+    }
+
+    /**
+     * @return true if the raw matrix is a closed enclosure within the tolerance: every facet row
+     *         sum within {@link #tolerance()} of 1 and every surface row sum within a tenth of it
+     */
+    public boolean closedWithinTolerance() {
+        return rawFacetClosure.maxRowSumError() <= options.tolerance()
+                && rawSurfaceClosure.maxRowSumError() <= 0.1 * options.tolerance();
+    }
+
+    /**
+     * Whether the stated accuracy holds: for a closed enclosure, {@link #closedWithinTolerance()};
+     * otherwise (open geometry, or rows off by more than the tolerance) the estimated largest row
+     * error {@link #maxRowErrorEstimate()} must be within the tolerance. False means the matrix
+     * is outside its stated accuracy and must not be used as if it were right.
+     *
+     * @return true if the tolerance was met
+     */
+    public boolean toleranceMet() {
+        return closedWithinTolerance() || maxRowErrorEstimate <= options.tolerance();
+    }
+
+    /** @return what closure enforcement did (mode NONE if nothing was changed) */
     public SmoothingReport smoothing() {
         return smoothing;
     }

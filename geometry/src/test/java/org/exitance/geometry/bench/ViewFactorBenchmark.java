@@ -78,7 +78,7 @@ public final class ViewFactorBenchmark {
     }
 
     static double maxRowSumError(ViewFactorResult r) {
-        return r.facetClosure().maxRowSumError();
+        return r.rawFacetClosure().maxRowSumError(); // as computed, before any smoothing
     }
 
     static double median(double[] v) {
@@ -104,10 +104,12 @@ public final class ViewFactorBenchmark {
         double pairs = n * (n - 1) / 2.0;
         double med = median(times);
         System.out.printf("%s: facets %d, threads %d, median %.2f s (min %.2f, max %.2f), %.3g pairs/s/core, "
-                + "max |1-rowsum| %.2e (%s), rms %.2e, est %.2e%n  %s%n", name, n, r.threadsUsed(), med,
+                + "raw max |1-rowsum| %.2e (%s), rms %.2e, surface %.2e, est %.2e, tolerance met %b, smoothing %s "
+                + "(max change %.2e)%n  %s%n", name, n, r.threadsUsed(), med,
                 Arrays.stream(times).min().getAsDouble(), Arrays.stream(times).max().getAsDouble(),
-                pairs / med / r.threadsUsed(), maxRowSumError(r), r.facetClosure().worstRow(), r.facetClosure().rmsRowSumError(),
-                r.maxRowErrorEstimate(), r.methodCounts());
+                pairs / med / r.threadsUsed(), maxRowSumError(r), r.rawFacetClosure().worstRow(),
+                r.rawFacetClosure().rmsRowSumError(), r.rawSurfaceClosure().maxRowSumError(), r.maxRowErrorEstimate(),
+                r.toleranceMet(), r.smoothing().mode(), r.smoothing().maxChange(), r.methodCounts());
     }
 
     static void rays(int runs) {

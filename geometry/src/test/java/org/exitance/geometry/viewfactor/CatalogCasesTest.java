@@ -43,37 +43,25 @@ class CatalogCasesTest {
         // Incropera 6th ed. Table 13.2 coaxial parallel disks; (3 − √5)/2 = 0.38197 from memory
         assertThat(r.surfaceFactor(0, 1)).isCloseTo(ClosedForms.coaxialDiscs(1, 1, 1), within(1e-3));
         assertThat(r.surfaceFactor(0, 1)).isCloseTo((3 - Math.sqrt(5)) / 2, within(1e-3));
-        // unequal discs, meshed: ri = 0.5, rj = 1, spacing 0.5
-        List<Facet> small = Shapes.disc(Vec3.ZERO, Vec3.Z, 0.5, 3, 48);
-        List<Facet> big = reversed(Shapes.disc(new Vec3(0, 0, 0.5), Vec3.Z, 1, 3, 48));
+        // unequal discs from the builder (exact patches): ri = 0.5, rj = 1, spacing 0.5
+        List<Facet> small = Shapes.disc(Vec3.ZERO, Vec3.Z, 0.5, 2, 12);
+        List<Facet> big = reversed(Shapes.disc(new Vec3(0, 0, 0.5), Vec3.Z, 1, 2, 12));
         ViewFactorResult r2 = compute(Scene.builder().add("a", small).add("b", big).build());
-        assertThat(r2.surfaceFactor(0, 1)).isCloseTo(ClosedForms.coaxialDiscs(0.5, 1, 0.5), within(3e-3));
+        assertThat(r2.surfaceFactor(0, 1)).isCloseTo(ClosedForms.coaxialDiscs(0.5, 1, 0.5), within(1e-8));
         assertThat(r2.environmentFactors()[0]).isCloseTo(1 - r2.surfaceFactor(0, 1), within(1e-12));
     }
 
     @Test
-    void sphereToCoaxialDiscMatchesClosedForm() {
-        double h = 2, a = 1.5;
-        List<Facet> sphere = Shapes.sphere(Vec3.ZERO, 0.5, 24, 48, Facing.OUTWARD);
-        List<Facet> disc = reversed(Shapes.disc(new Vec3(0, 0, h), Vec3.Z, a, 6, 48));
-        ViewFactorResult r = compute(Scene.builder().add("sphere", sphere).add("disc", disc).build());
-        // sphere to coaxial disc: F = ½ [1 − 1/√(1 + (a/h)²)] (Siegel & Howell 4th ed. Appendix C / Howell's catalog, from memory)
-        double exact = 0.5 * (1 - 1 / Math.sqrt(1 + (a / h) * (a / h)));
-        assertThat(r.surfaceFactor(0, 1)).isCloseTo(exact, within(0.01 * exact));
-    }
-
-    @Test
-    void concentricPrismsApproachTheTwoDimensionalValueAndOuterSeesItself() {
-        int n = 24;
-        double r1 = 0.5, r2 = 1, len = 30;
-        List<Facet> inner = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r1, len, n, 30, Facing.OUTWARD);
-        List<Facet> outer = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r2, len, n, 30, Facing.INWARD);
+    void longConcentricCylindersApproachTheTwoDimensionalValueAndOuterSeesItself() {
+        int n = 8;
+        double r1 = 0.5, r2 = 1, len = 10;
+        List<Facet> inner = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r1, len, n, 2, Facing.OUTWARD);
+        List<Facet> outer = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r2, len, n, 2, Facing.INWARD);
         ViewFactorResult r = compute(Scene.builder().add("inner", inner).add("outer", outer).build());
         // long concentric cylinders: F_21 = r1/r2, F_22 = 1 − r1/r2 (Incropera 6th ed. Table 13.1);
-        // for the inscribed prisms the perimeter ratio equals r1/r2; open ends lose O(r/len)
-        assertThat(r.surfaceFactor(1, 0)).isCloseTo(r1 / r2, within(0.03));
-        assertThat(r.surfaceFactor(1, 1)).isCloseTo(1 - r1 / r2, within(0.03));
-        assertThat(r.surfaceFactor(1, 1)).isPositive();
+        // the open ends lose O((r2 − r1)/len)
+        assertThat(r.surfaceFactor(1, 0)).isCloseTo(r1 / r2, within(0.06));
+        assertThat(r.surfaceFactor(1, 1)).isCloseTo(1 - r1 / r2, within(0.06));
         assertThat(r.surfaceFactor(0, 0)).isZero();
         // reciprocity at surface level: A1 F12 = A2 F21
         double[] area = r.surfaceAreas();
@@ -82,14 +70,14 @@ class CatalogCasesTest {
 
     @Test
     void closedCylindricalCavityClosesAndItsWallSeesItself() {
-        List<Surface> cav = Enclosures.cylindricalCavity(Vec3.ZERO, Vec3.Z, 1, 1, 16, 4, 2);
+        List<Surface> cav = Enclosures.cylindricalCavity(Vec3.ZERO, Vec3.Z, 1, 1, 12, 2, 2);
         ViewFactorResult r = compute(Scene.of(cav));
-        assertThat(r.facetClosure().maxRowSumError()).isLessThan(1e-6);
+        // raw rows: the touching wall–base pieces limit them (docs/view-factors.md, curved shapes)
+        assertThat(r.rawFacetClosure().maxRowSumError()).isLessThan(2e-3);
         assertThat(r.surfaceFactor(0, 0)).isPositive();
         assertThat(r.methodCounts().partlyHidden() + r.methodCounts().hidden()).isZero();
-        // base to lid: coaxial discs of radius = spacing, 0.38197 for the round shape (from memory);
-        // the 16-gon differs by a few percent
-        assertThat(r.surfaceFactor(1, 2)).isCloseTo((3 - Math.sqrt(5)) / 2, within(0.03));
+        // base to lid: coaxial discs of radius = spacing, (3 − √5)/2 (from memory; checked in CurvedShapesTest)
+        assertThat(r.surfaceFactor(1, 2)).isCloseTo((3 - Math.sqrt(5)) / 2, within(1e-8));
     }
 
     @Test
