@@ -8,8 +8,9 @@ package org.exitance.geometry.viewfactor;
 public enum Smoothing {
     /**
      * Default: CLOSED when the raw facet matrix is a closed enclosure within the tolerance (every
-     * facet row sum within {@link ViewFactorOptions#tolerance()} of 1), else nothing. A matrix
-     * outside its tolerance is never smoothed into looking closed.
+     * facet row sum within {@link ViewFactorOptions#tolerance()} of 1, and some row off by more
+     * than {@link ViewFactorCalculator#AUTO_SMOOTHING_FLOOR}), else nothing. A matrix outside its
+     * tolerance is never smoothed into looking closed.
      */
     AUTO,
     /** Leave the computed factors as they are. */

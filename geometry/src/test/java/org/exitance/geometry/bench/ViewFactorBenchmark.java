@@ -18,6 +18,7 @@ import org.exitance.geometry.shape.Facing;
 import org.exitance.geometry.viewfactor.ProgressListener;
 import org.exitance.geometry.viewfactor.ViewFactorCalculator;
 import org.exitance.geometry.viewfactor.ViewFactorOptions;
+import org.exitance.geometry.viewfactor.Smoothing;
 import org.exitance.geometry.viewfactor.ViewFactorResult;
 
 /**
@@ -96,7 +97,8 @@ public final class ViewFactorBenchmark {
             resetPeaks();
             long t0 = System.nanoTime();
             r = ViewFactorCalculator.compute(scene, ViewFactorOptions.defaults().withThreads(threads).withPairTolerance(TOL)
-                    .withVisibilityOrder(Integer.getInteger("vis", 3)), ProgressListener.NONE);
+                    .withVisibilityOrder(Integer.getInteger("vis", 3))
+                    .withSmoothing(Smoothing.valueOf(System.getProperty("smooth", "AUTO"))), ProgressListener.NONE);
             times[k] = (System.nanoTime() - t0) * 1e-9;
             System.out.printf("%s run %d: %.2f s, peak heap %.0f MB%n", name, k + 1, times[k], peakHeapBytes() / 1e6);
         }
