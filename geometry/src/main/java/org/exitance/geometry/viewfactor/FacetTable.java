@@ -39,6 +39,13 @@ final class FacetTable {
     final AreaRules rules;
 
     FacetTable(Scene scene, int maxRuleOrder) {
+        this(scene, maxRuleOrder, true);
+    }
+
+    /**
+     * @param curved use the facets' exact patches (areas and shapes); false: their polygons only
+     */
+    FacetTable(Scene scene, int maxRuleOrder, boolean curved) {
         List<Facet> facets = scene.facets();
         count = facets.size();
         vertexStart = new int[count + 1];
@@ -68,9 +75,9 @@ final class FacetTable {
                 normal[3 * f] = facet.normal().x();
                 normal[3 * f + 1] = facet.normal().y();
                 normal[3 * f + 2] = facet.normal().z();
-                area[f] = facet.exactArea();
+                area[f] = curved ? facet.exactArea() : facet.area();
                 polygonArea[f] = facet.area();
-                patch[f] = facet.patch();
+                patch[f] = curved ? facet.patch() : null;
                 any |= patch[f] != null;
                 centroid[3 * f] = facet.centroid().x();
                 centroid[3 * f + 1] = facet.centroid().y();

@@ -42,7 +42,7 @@ public final class GeometryHash {
                         b.putLong(Double.doubleToLongBits(c));
                     }
                     md.update(b.array());
-                    if (f.patch() != null) {
+                    if (f.patch() != null && o.curvedPatches()) {
                         ByteBuffer pb = ByteBuffer.allocate(8 * 20);
                         for (double c : f.patch().parameters()) {
                             pb.putLong(Double.doubleToLongBits(c));
@@ -52,7 +52,7 @@ public final class GeometryHash {
                 }
             }
             String opts = o.pairTolerance() + "|" + o.contourOrder() + "|" + o.visibilityOrder() + "|"
-                    + o.obstruction() + "|" + o.smoothing() + "|" + o.tolerance();
+                    + o.obstruction() + "|" + o.smoothing() + "|" + o.tolerance() + "|" + o.curvedPatches();
             md.update(opts.getBytes(StandardCharsets.UTF_8));
             StringBuilder sb = new StringBuilder();
             for (byte x : md.digest()) {

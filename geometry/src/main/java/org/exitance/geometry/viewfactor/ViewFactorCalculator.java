@@ -57,7 +57,7 @@ public final class ViewFactorCalculator {
     public static ViewFactorResult compute(Scene scene, ViewFactorOptions options, ProgressListener progress,
             BooleanSupplier cancelRequested) {
         long start = System.nanoTime();
-        FacetTable t = new FacetTable(scene, ProximityRule.MAX_ORDER);
+        FacetTable t = new FacetTable(scene, ProximityRule.MAX_ORDER, options.curvedPatches());
         TriangleBvh occluders = options.obstruction() == Obstruction.AUTO ? Occluders.build(t) : null;
         ProximityRule rule = new ProximityRule(options.pairTolerance());
         int n = t.count;

@@ -21,9 +21,12 @@ package org.exitance.geometry.viewfactor;
  *        made exactly closed and reciprocal)
  * @param tolerance target of the facet row sums |1 − Σ_j F_ij| of a closed enclosure (default
  *        1e-5); surface row sums are expected within a tenth of it
+ * @param curvedPatches integrate curved facets on their exact {@link org.exitance.geometry.Patch}
+ *        (exact areas and shapes) instead of their inscribed polygons (default false: touching
+ *        curved pairs are resolved only to 2e-4 … 2e-3 so far, see docs/view-factors.md)
  */
 public record ViewFactorOptions(int threads, double pairTolerance, int contourOrder, int visibilityOrder,
-        Obstruction obstruction, Smoothing smoothing, double tolerance) {
+        Obstruction obstruction, Smoothing smoothing, double tolerance, boolean curvedPatches) {
 
     /** Default row-sum tolerance. */
     public static final double DEFAULT_TOLERANCE = 1e-5;
@@ -52,7 +55,7 @@ public record ViewFactorOptions(int threads, double pairTolerance, int contourOr
 
     /** @return the defaults: all cores, tolerance 1e-5 (pair 1e-7, contour order 10), visibility order 2, AUTO, AUTO */
     public static ViewFactorOptions defaults() {
-        return new ViewFactorOptions(0, 1e-7, 10, 2, Obstruction.AUTO, Smoothing.AUTO, DEFAULT_TOLERANCE);
+        return new ViewFactorOptions(0, 1e-7, 10, 2, Obstruction.AUTO, Smoothing.AUTO, DEFAULT_TOLERANCE, false);
     }
 
     /**
@@ -66,31 +69,37 @@ public record ViewFactorOptions(int threads, double pairTolerance, int contourOr
         int order = (int) Math.round(10 + 2 * Math.log10(DEFAULT_TOLERANCE / tol));
         order = Math.max(6, Math.min(GaussLegendre.MAX_POINTS - 4, order));
         return new ViewFactorOptions(threads, Math.min(1e-3, tol / 100), order, visibilityOrder, obstruction, smoothing,
-                tol);
+                tol, curvedPatches);
+    }
+
+    /** @return a copy that integrates curved facets on their exact patches (or not) */
+    public ViewFactorOptions withCurvedPatches(boolean on) {
+        return new ViewFactorOptions(threads, pairTolerance, contourOrder, visibilityOrder, obstruction, smoothing, tolerance,
+                on);
     }
 
     /** @return a copy with another thread count */
     public ViewFactorOptions withThreads(int n) {
-        return new ViewFactorOptions(n, pairTolerance, contourOrder, visibilityOrder, obstruction, smoothing, tolerance);
+        return new ViewFactorOptions(n, pairTolerance, contourOrder, visibilityOrder, obstruction, smoothing, tolerance, curvedPatches);
     }
 
     /** @return a copy with another pair tolerance (overrides the one derived from the tolerance) */
     public ViewFactorOptions withPairTolerance(double tol) {
-        return new ViewFactorOptions(threads, tol, contourOrder, visibilityOrder, obstruction, smoothing, tolerance);
+        return new ViewFactorOptions(threads, tol, contourOrder, visibilityOrder, obstruction, smoothing, tolerance, curvedPatches);
     }
 
     /** @return a copy with another visibility order */
     public ViewFactorOptions withVisibilityOrder(int order) {
-        return new ViewFactorOptions(threads, pairTolerance, contourOrder, order, obstruction, smoothing, tolerance);
+        return new ViewFactorOptions(threads, pairTolerance, contourOrder, order, obstruction, smoothing, tolerance, curvedPatches);
     }
 
     /** @return a copy with another obstruction mode */
     public ViewFactorOptions withObstruction(Obstruction o) {
-        return new ViewFactorOptions(threads, pairTolerance, contourOrder, visibilityOrder, o, smoothing, tolerance);
+        return new ViewFactorOptions(threads, pairTolerance, contourOrder, visibilityOrder, o, smoothing, tolerance, curvedPatches);
     }
 
     /** @return a copy with another smoothing mode */
     public ViewFactorOptions withSmoothing(Smoothing s) {
-        return new ViewFactorOptions(threads, pairTolerance, contourOrder, visibilityOrder, obstruction, s, tolerance);
+        return new ViewFactorOptions(threads, pairTolerance, contourOrder, visibilityOrder, obstruction, s, tolerance, curvedPatches);
     }
 }

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
 class CatalogCasesTest {
 
     static ViewFactorResult compute(Scene s) {
-        return ViewFactorCalculator.compute(s, ViewFactorOptions.defaults(), ProgressListener.NONE);
+        return ViewFactorCalculator.compute(s, ViewFactorOptions.defaults().withCurvedPatches(true), ProgressListener.NONE);
     }
 
     static List<Facet> reversed(List<Facet> f) {
