@@ -81,10 +81,8 @@ final class MeasuredEmissivityReader {
                 "emissivity");
         double[] w = t.wavelengthsUm();
         double[] e = new double[w.length];
-        List<JsonCursor> cells = n.field("emissivity").elements();
         for (int i = 0; i < w.length; i++) {
-            double en = t.at(w[i], 300);
-            e[i] = convert(cells.get(Math.min(i, cells.size() - 1)), en, c);
+            e[i] = convert(n.field("emissivity"), t.at(w[i], 300), c);
         }
         return new TabulatedEmissivity(w, e);
     }

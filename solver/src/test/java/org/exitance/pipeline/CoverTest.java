@@ -20,7 +20,7 @@ import org.junit.jupiter.params.provider.ValueSource;
  * layer, the heat through a series of gray infinite parallel sheets is
  * {@code q = σ(T_w⁴ − T_env⁴) / [1/ε_w + 1/ε_l − 1 + (N − 1)(2/ε_l − 1) + 1/ε_o]}: the gap from the
  * wall to the first layer, N − 1 gaps between layers, and the outer face to black surroundings
- * (Incropera et al., 6th ed., Eqs. 13.24 and 13.26; Siegel &amp; Howell, 5th ed., §6.3).
+ * (Incropera et al., 6th ed., Table 13.3 and the shield series form, from memory; Siegel &amp; Howell, 5th ed., §6.3).
  */
 class CoverTest {
     private static final double SIGMA = 5.670374419e-8; // CODATA 2018

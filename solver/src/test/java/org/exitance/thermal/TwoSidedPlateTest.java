@@ -24,7 +24,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 /**
  * Two-sided opaque plates (one node, two faces, each with its own coating) and radiation shields
  * made of them, against the closed forms for infinite parallel plates (Incropera et al.,
- * Fundamentals of Heat and Mass Transfer, 6th ed., Eqs. 13.24 and 13.26 with N shields;
+ * Fundamentals of Heat and Mass Transfer, 6th ed., Table 13.3 (infinite parallel planes) and its radiation-shield series form, from memory;
  * Siegel &amp; Howell, Thermal Radiation Heat Transfer, 5th ed., §6.3, radiation shields).
  */
 class TwoSidedPlateTest {
@@ -86,7 +86,7 @@ class TwoSidedPlateTest {
         assertThat(r.windows()).isEmpty();
     }
 
-    /** N identical gray shields: q = σ(T₁⁴ − T₂⁴)/[1/ε₁ + 1/ε₂ − 1 + N(2/ε_s − 1)] (Incropera 6th ed., Eq. 13.26 generalised). */
+    /** N identical gray shields: q = σ(T₁⁴ − T₂⁴)/[1/ε₁ + 1/ε₂ − 1 + N(2/ε_s − 1)] (Incropera 6th ed., radiation-shield series form, from memory). */
     @ParameterizedTest(name = "N = {0}")
     @ValueSource(ints = {1, 2, 5})
     void identicalGrayShieldsCutTheHeatAsTheClosedFormSays(int n) {
@@ -145,7 +145,7 @@ class TwoSidedPlateTest {
      * A cryogenic line: long concentric tubes (inner r₁ at 77 K, jacket r₃ at 300 K) with a thin
      * shield tube r₂ between them, per metre. Each gap is the long-concentric-cylinder exchange,
      * q' = 2πr_i σ(T_i⁴ − T_j⁴)/(1/ε_i + (1 − ε_j)/ε_j · r_i/r_j) (Incropera et al., 6th ed.,
-     * Eq. 13.20 and its shield examples), and the shield balances the two gaps:
+     * Table 13.3, long concentric cylinders, and its shield examples; from memory), and the shield balances the two gaps:
      * T_s⁴ = (r₁T₁⁴/D₁ + r₂T₃⁴/D₂)/(r₁/D₁ + r₂/D₂), with D₁, D₂ the two denominators.
      */
     @Test
