@@ -251,6 +251,57 @@ public final class TriangleBvh {
         return false;
     }
 
+    /**
+     * The owners of every triangle that may intersect the convex region bounded by the planes
+     * (same test as {@link #mayIntersect}), each owner once, in ascending order.
+     *
+     * @param planes packed (nx, ny, nz, d); outside means n·x − d &gt; 0; not modified
+     * @param planeCount number of planes
+     * @param tol distance tolerance (m)
+     * @param skipA owner to ignore
+     * @param skipB another owner to ignore
+     * @param out receives the owners (modified); its length limits how many are returned
+     * @return the number of owners written, or −1 if there were more than {@code out.length}
+     */
+    public int collect(double[] planes, int planeCount, double tol, int skipA, int skipB, int[] out) {
+        int found = 0;
+        if (owner.length == 0) {
+            return 0;
+        }
+        int[] stack = new int[64];
+        int sp = 0;
+        stack[sp++] = 0;
+        while (sp > 0) {
+            int node = stack[--sp];
+            if (boxOutside(node, planes, planeCount, tol)) {
+                continue;
+            }
+            if (count[node] > 0) {
+                for (int t = first[node], end = first[node] + count[node]; t < end; t++) {
+                    int o = owner[t];
+                    if (o == skipA || o == skipB || triangleOutside(9 * t, planes, planeCount, tol)) {
+                        continue;
+                    }
+                    boolean seen = false;
+                    for (int k = 0; k < found && !seen; k++) {
+                        seen = out[k] == o;
+                    }
+                    if (!seen) {
+                        if (found == out.length) {
+                            return -1;
+                        }
+                        out[found++] = o;
+                    }
+                }
+            } else {
+                stack[sp++] = first[node];
+                stack[sp++] = node + 1;
+            }
+        }
+        java.util.Arrays.sort(out, 0, found);
+        return found;
+    }
+
     private boolean boxOutside(int node, double[] pl, int n, double tol) {
         int b = 6 * node;
         for (int k = 0; k < n; k++) {

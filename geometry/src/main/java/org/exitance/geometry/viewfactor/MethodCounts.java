@@ -7,10 +7,13 @@ package org.exitance.geometry.viewfactor;
  * @param clipped pairs clipped to each other's front half-space (also counted in another field)
  * @param contour unobstructed pairs by the contour integral
  * @param quadrature unobstructed pairs by area quadrature
- * @param partlyHidden pairs by visibility-weighted quadrature with some rays visible
- * @param hidden pairs whose every ray was blocked
+ * @param partlyHidden pairs with an occluder in their hull and a visible part
+ * @param hidden pairs with an occluder in their hull and nothing visible
+ * @param raySampled of the last two, the pairs sampled by rays because shadow projection
+ *        declined (too many occluders in the hull); also counted in one of them
  */
-public record MethodCounts(long zero, long clipped, long contour, long quadrature, long partlyHidden, long hidden) {
+public record MethodCounts(long zero, long clipped, long contour, long quadrature, long partlyHidden, long hidden,
+        long raySampled) {
 
     /** @return total pairs evaluated (clipped excluded, as it overlaps) */
     public long total() {

@@ -18,6 +18,11 @@ final class Occluders {
 
     /** @return the BVH over occluder facets' fan triangles, or null when there are none */
     static TriangleBvh build(FacetTable t) {
+        return build(t, candidates(t));
+    }
+
+    /** @return per facet: may it block a line of sight (vertices strictly on both sides of its plane) */
+    static boolean[] candidates(FacetTable t) {
         double tol = 1e-9 * t.sceneSize;
         int nv = t.vertexStart[t.count];
         boolean[] occ = new boolean[t.count];
@@ -34,8 +39,19 @@ final class Occluders {
                     below = true;
                 }
             }
-            if (above && below) {
-                occ[f] = true;
+            occ[f] = above && below;
+        }
+        return occ;
+    }
+
+    /**
+     * @param occ per facet: is it an occluder (not modified)
+     * @return the BVH over those facets' fan triangles, or null when there are none
+     */
+    static TriangleBvh build(FacetTable t, boolean[] occ) {
+        int triangles = 0;
+        for (int f = 0; f < t.count; f++) {
+            if (occ[f]) {
                 triangles += t.vertexCount(f) - 2;
             }
         }

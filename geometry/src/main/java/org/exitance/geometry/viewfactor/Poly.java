@@ -71,6 +71,26 @@ final class Poly {
      * one plane). Modifies this; {@code scratch} (length ≥ 3·MAX_VERTICES) is overwritten.
      */
     void clip(double mx, double my, double mz, double d, double[] scratch) {
+        clipVertices(mx, my, mz, d, scratch);
+        updateMeasures();
+    }
+
+    /**
+     * As {@link #clip}, but updates only the area, not the centroid and radius (which keep
+     * their old values): for the many cuts of shadow projection. Modifies this.
+     */
+    void clipAreaOnly(double mx, double my, double mz, double d, double[] scratch) {
+        clipVertices(mx, my, mz, d, scratch);
+        double a = 0;
+        for (int k = 1; k + 1 < n; k++) {
+            double ux = xyz[3 * k] - xyz[0], uy = xyz[3 * k + 1] - xyz[1], uz = xyz[3 * k + 2] - xyz[2];
+            double vx = xyz[3 * k + 3] - xyz[0], vy = xyz[3 * k + 4] - xyz[1], vz = xyz[3 * k + 5] - xyz[2];
+            a += (uy * vz - uz * vy) * nx + (uz * vx - ux * vz) * ny + (ux * vy - uy * vx) * nz;
+        }
+        area = 0.5 * a;
+    }
+
+    private void clipVertices(double mx, double my, double mz, double d, double[] scratch) {
         int out = 0;
         for (int k = 0; k < n; k++) {
             int l = (k + 1) % n;
@@ -111,7 +131,6 @@ final class Poly {
         }
         n = kept;
         clipped = true;
-        updateMeasures();
     }
 
     private static double sqDist(double d) {

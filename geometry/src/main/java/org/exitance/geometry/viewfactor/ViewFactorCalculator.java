@@ -55,7 +55,10 @@ public final class ViewFactorCalculator {
             BooleanSupplier cancelRequested) {
         long start = System.nanoTime();
         FacetTable t = new FacetTable(scene, ProximityRule.MAX_ORDER);
-        TriangleBvh occluders = options.obstruction() == Obstruction.AUTO ? Occluders.build(t) : null;
+        boolean[] candidates = options.obstruction() == Obstruction.AUTO ? Occluders.candidates(t) : null;
+        TriangleBvh occluders = candidates == null ? null : Occluders.build(t, candidates);
+        CoplanarOccluders planes = occluders == null ? null : new CoplanarOccluders(t, candidates);
+        SilhouetteEdges edges = planes == null ? null : new SilhouetteEdges(t, candidates, planes);
         ProximityRule rule = new ProximityRule(options.pairTolerance());
         int n = t.count;
         double[] f = new double[Math.multiplyExact(n, n)];
@@ -77,7 +80,7 @@ public final class ViewFactorCalculator {
         List<Future<?>> futures = new ArrayList<>();
         for (int w = 0; w < threads; w++) {
             futures.add(pool.submit(() -> {
-                PairEvaluator ev = new PairEvaluator(t, occluders, rule, options.contourOrder(),
+                PairEvaluator ev = new PairEvaluator(t, occluders, planes, edges, rule, options.contourOrder(),
                         options.visibilityOrder());
                 for (int c = nextChunk.getAndIncrement(); c < chunks; c = nextChunk.getAndIncrement()) {
                     java.util.Arrays.fill(ev.counters, 0);
@@ -167,7 +170,7 @@ public final class ViewFactorCalculator {
                 i -> names.get(t.surfaceOf[i]) + "#" + (i - firstOfSurface[t.surfaceOf[i]]));
         MethodCounts mc = new MethodCounts(counts[PairEvaluator.ZERO], counts[PairEvaluator.CLIPPED],
                 counts[PairEvaluator.CONTOUR], counts[PairEvaluator.QUADRATURE], counts[PairEvaluator.PARTIAL],
-                counts[PairEvaluator.HIDDEN]);
+                counts[PairEvaluator.HIDDEN], counts[PairEvaluator.RAYS]);
         return new ViewFactorResult(names, sArea, sf, env, n, t.area.clone(), t.surfaceOf.clone(), f, surfaceClosure,
                 facetClosure, mc, maxRowError, smoothing, GeometryHash.of(scene, options), options, threads,
                 (System.nanoTime() - start) * 1e-9);

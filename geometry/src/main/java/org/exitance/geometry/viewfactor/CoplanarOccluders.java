@@ -1,0 +1,198 @@
+package org.exitance.geometry.viewfactor;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.locationtech.jts.algorithm.ConvexHull;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.geom.prep.PreparedGeometry;
+import org.locationtech.jts.geom.prep.PreparedGeometryFactory;
+import org.locationtech.jts.operation.union.UnaryUnionOp;
+
+/**
+ * A proof that a pair is entirely hidden: occluder facets that lie in one plane are merged into
+ * one region (their union, by the JTS Topology Suite); if that plane separates the two polygons
+ * of a pair and the region covers the cross-section of the pair's convex hull with the plane,
+ * every segment from one polygon to the other passes through the region, so the pair sees
+ * nothing of each other. The cross-section of the hull of P ∪ Q with a plane that separates P
+ * and Q is the convex hull of the points where the segments between their vertices cross it.
+ *
+ * <p>The merged regions are built once and shared; each worker thread uses its own
+ * {@link Prepared} view (prepared geometries for fast covering tests).
+ */
+final class CoplanarOccluders {
+
+    private final FacetTable t;
+    /** Group of each facet, or −1 for facets that are not occluders. */
+    private final int[] groupOf;
+    /** Per group: unit normal and offset (n·x = d), and a 2-D basis u, v of the plane. */
+    private final double[][] frame;
+    private final Geometry[] region;
+    private final GeometryFactory factory = new GeometryFactory();
+
+    /**
+     * @param t the facets
+     * @param occluder which facets are occluders (not modified)
+     */
+    CoplanarOccluders(FacetTable t, boolean[] occluder) {
+        this.t = t;
+        groupOf = new int[t.count];
+        java.util.Arrays.fill(groupOf, -1);
+        Map<List<Long>, Integer> ids = new HashMap<>();
+        List<double[]> frames = new ArrayList<>();
+        List<List<Polygon>> members = new ArrayList<>();
+        double lengthStep = 1e-9 * t.sceneSize;
+        for (int f = 0; f < t.count; f++) {
+            if (!occluder[f]) {
+                continue;
+            }
+            double nx = t.normal[3 * f], ny = t.normal[3 * f + 1], nz = t.normal[3 * f + 2];
+            // unoriented plane: the first non-zero component positive
+            double sign = nx > 1e-12 || (Math.abs(nx) <= 1e-12 && (ny > 1e-12 || (Math.abs(ny) <= 1e-12 && nz > 0)))
+                    ? 1 : -1;
+            nx *= sign;
+            ny *= sign;
+            nz *= sign;
+            double d = nx * t.centroid[3 * f] + ny * t.centroid[3 * f + 1] + nz * t.centroid[3 * f + 2];
+            List<Long> key = List.of(Math.round(nx * 1e9), Math.round(ny * 1e9), Math.round(nz * 1e9),
+                    Math.round(d / lengthStep));
+            Integer id = ids.get(key);
+            if (id == null) {
+                id = frames.size();
+                ids.put(key, id);
+                frames.add(frameOf(nx, ny, nz, d));
+                members.add(new ArrayList<>());
+            }
+            groupOf[f] = id;
+            members.get(id).add(polygon(f, frames.get(id)));
+        }
+        frame = frames.toArray(new double[0][]);
+        region = new Geometry[frame.length];
+        for (int g = 0; g < region.length; g++) {
+            region[g] = UnaryUnionOp.union(members.get(g));
+        }
+    }
+
+    private static double[] frameOf(double nx, double ny, double nz, double d) {
+        // u: a unit vector perpendicular to n; v = n × u
+        double ax = Math.abs(nx) < 0.9 ? 1 : 0, ay = ax == 1 ? 0 : 1;
+        double ux = ay * nz, uy = -ax * nz, uz = ax * ny - ay * nx;
+        double len = Math.sqrt(ux * ux + uy * uy + uz * uz);
+        ux /= len;
+        uy /= len;
+        uz /= len;
+        double vx = ny * uz - nz * uy, vy = nz * ux - nx * uz, vz = nx * uy - ny * ux;
+        return new double[] {nx, ny, nz, d, ux, uy, uz, vx, vy, vz};
+    }
+
+    private Polygon polygon(int f, double[] fr) {
+        int v0 = t.vertexStart[f], n = t.vertexStart[f + 1] - v0;
+        Coordinate[] c = new Coordinate[n + 1];
+        for (int k = 0; k < n; k++) {
+            c[k] = project(fr, t.xyz[3 * (v0 + k)], t.xyz[3 * (v0 + k) + 1], t.xyz[3 * (v0 + k) + 2]);
+        }
+        c[n] = c[0];
+        return factory.createPolygon(c);
+    }
+
+    private static Coordinate project(double[] fr, double x, double y, double z) {
+        return new Coordinate(fr[4] * x + fr[5] * y + fr[6] * z, fr[7] * x + fr[8] * y + fr[9] * z);
+    }
+
+    /** @return the coplanar group of facet f, or −1 if it is not an occluder */
+    int group(int f) {
+        return groupOf[f];
+    }
+
+    /** @return unit normal and offset (n·x = d) of group g, in a new array */
+    double[] plane(int g) {
+        return java.util.Arrays.copyOf(frame[g], 4);
+    }
+
+    /** @return the number of groups */
+    int groups() {
+        return frame.length;
+    }
+
+    /** @return a view for one thread */
+    Prepared prepared() {
+        return new Prepared();
+    }
+
+    /** One thread's view: prepared regions, built on first use. Not thread-safe. */
+    final class Prepared {
+
+        private final PreparedGeometry[] prepared = new PreparedGeometry[region.length];
+        private final int[] seen = new int[region.length];
+        private int stamp;
+        private final Coordinate[] points = new Coordinate[Poly.MAX_VERTICES * Poly.MAX_VERTICES];
+
+        /**
+         * @param p one polygon (not modified)
+         * @param q the other (not modified)
+         * @param occ occluder facets in the pair's hull (not modified)
+         * @param count entries of {@code occ} used
+         * @return true if one merged region provably hides q from p entirely
+         */
+        boolean hides(Poly p, Poly q, int[] occ, int count) {
+            stamp++;
+            for (int k = 0; k < count; k++) {
+                int g = groupOf[occ[k]];
+                if (g < 0 || seen[g] == stamp) {
+                    continue;
+                }
+                seen[g] = stamp;
+                if (covers(g, p, q)) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        private boolean covers(int g, Poly p, Poly q) {
+            double[] fr = frame[g];
+            double tol = 1e-9 * t.sceneSize;
+            int sp = side(p, fr, tol), sq = side(q, fr, tol);
+            if (sp == 0 || sq == 0 || sp == sq || p.n * q.n > points.length) {
+                return false;
+            }
+            int m = 0;
+            for (int a = 0; a < p.n; a++) {
+                double ax = p.xyz[3 * a], ay = p.xyz[3 * a + 1], az = p.xyz[3 * a + 2];
+                double da = fr[0] * ax + fr[1] * ay + fr[2] * az - fr[3];
+                for (int b = 0; b < q.n; b++) {
+                    double bx = q.xyz[3 * b], by = q.xyz[3 * b + 1], bz = q.xyz[3 * b + 2];
+                    double db = fr[0] * bx + fr[1] * by + fr[2] * bz - fr[3];
+                    double s = da / (da - db);
+                    points[m++] = project(fr, ax + s * (bx - ax), ay + s * (by - ay), az + s * (bz - az));
+                }
+            }
+            Geometry hull = new ConvexHull(java.util.Arrays.copyOf(points, m), factory).getConvexHull();
+            if (prepared[g] == null) {
+                prepared[g] = PreparedGeometryFactory.prepare(region[g]);
+            }
+            return prepared[g].covers(hull);
+        }
+
+        /** @return +1 all vertices beyond tol above the plane, −1 all below, 0 otherwise */
+        private int side(Poly poly, double[] fr, double tol) {
+            boolean above = false, below = false;
+            for (int k = 0; k < poly.n; k++) {
+                double s = fr[0] * poly.xyz[3 * k] + fr[1] * poly.xyz[3 * k + 1] + fr[2] * poly.xyz[3 * k + 2] - fr[3];
+                if (s > tol) {
+                    above = true;
+                } else {
+                    below |= s < -tol;
+                    if (s >= -tol) {
+                        return 0;
+                    }
+                }
+            }
+            return above && below ? 0 : (above ? 1 : -1);
+        }
+    }
+}

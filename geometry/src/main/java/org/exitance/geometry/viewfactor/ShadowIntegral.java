@@ -1,0 +1,293 @@
+package org.exitance.geometry.viewfactor;
+
+import org.exitance.geometry.bvh.TriangleBvh;
+
+/**
+ * Partly hidden pairs by shadow projection: the exchange area
+ *
+ * <pre>  A_p F_pq = ∫_p F_{dx→V(x)} dA_x </pre>
+ *
+ * where V(x) is the part of q seen from the point x (definition of the view factor with
+ * obstruction, Siegel &amp; Howell, 4th ed., eq. 4.13 with the visibility function). For each
+ * point x the receiver integral is exact: V(x) is q with the shadow of every occluder cut away,
+ * and the factor from the differential element at x to each convex piece of V(x) is the
+ * closed form for a polygon (Siegel &amp; Howell, 4th ed., §4.3, the contour form for a
+ * differential area: F = (1/2π) Σ_k γ_k n_x·(a_k × a_{k+1}) / |a_k × a_{k+1}|, a_k the vectors
+ * from x to the vertices, γ_k the angles between them). Only the emitter integral is numerical.
+ *
+ * <p>The part of q seen from a point is found by {@link VisiblePart}.
+ *
+ * <p>Emitter integral, adaptive. The integrand is smooth except across event lines
+ * ({@link EventLines}), where a shadow edge passes a vertex and it has a kink. The emitter is
+ * kept as up to {@value #MAX_LEAVES} pieces; the piece with the largest error estimate is refined
+ * next: split along the event line that halves it most evenly if one crosses it, otherwise
+ * integrated with a rule two orders higher (up to {@value #MAX_ORDER}; the integrand is analytic
+ * there, so raising the order converges fastest), and split across its long axis only after
+ * that. On each piece:
+ * <ul>
+ *   <li>no occluder in the hull of the piece and q: its exact unobstructed value;</li>
+ *   <li>a merged occluder face covers the hull's cross-section ({@link CoplanarOccluders}):
+ *       exactly 0;</li>
+ *   <li>otherwise Gauss rules of orders 2 and 3 ({@link AreaRules}); their difference is the
+ *       error estimate where no event line crosses the piece (the integrand is analytic there);
+ *       where one does, at least {@value #KINK_SHARE} of the piece's integral (more if the
+ *       sampled visible fraction varies more) is counted as possible error, so such pieces are
+ *       split along their events first.</li>
+ * </ul>
+ * The smaller of the visible and the hidden integral is integrated and the other taken from the
+ * exact unobstructed value, so a pair that is almost entirely visible (or hidden) carries only
+ * the error of its small part. Splitting stops when the estimates add up to the tolerance or the
+ * pieces run out; the sum of the estimates is reported.
+ *
+ * <p>Limits: at most {@value VisiblePart#MAX_PIECES} visible pieces per point and the occluder count of
+ * the caller; beyond that {@link #exchangeArea} returns NaN and the caller falls back to ray
+ * sampling. Mutable scratch; one instance per thread.
+ */
+final class ShadowIntegral {
+
+    /** Largest number of pieces of the emitter (leaves of the bisection). */
+    static final int MAX_LEAVES = 32;
+    /** First order of the emitter rule; the rule one order lower gives the error estimate. */
+    static final int ORDER = 3;
+    /** Highest order used on a leaf that no event line crosses (then it is split). */
+    static final int MAX_ORDER = 9;
+    /**
+     * Smallest share of a leaf's integral counted as possible error while an event line crosses
+     * the leaf (also when every sample saw the same visible fraction).
+     */
+    static final double KINK_SHARE = 1.0 / 16;
+
+    /** Computes A_p' F_p'q of a piece p' of the emitter without obstruction (m²). */
+    interface Unobstructed {
+        double exchangeArea(Poly emitterPiece, Poly receiver);
+    }
+
+    private final FacetTable t;
+    private final Poly[] leaves = new Poly[MAX_LEAVES];
+    private final double[] visible = new double[MAX_LEAVES];
+    private final double[] hidden = new double[MAX_LEAVES];
+    private final double[] error = new double[MAX_LEAVES];
+    private final double[] value = new double[MAX_LEAVES];
+    private final int[][] leafOccluders;
+    private final int[] leafCount = new int[MAX_LEAVES];
+    private final boolean[] hasEvent = new boolean[MAX_LEAVES];
+    private final int[] order = new int[MAX_LEAVES];
+    private final double[][] leafEvent = new double[MAX_LEAVES][4];
+    private final EventLines events;
+    private final Poly halfA = new Poly();
+    private final Poly halfB = new Poly();
+    private final Shaft shaft = new Shaft();
+    private final TriangleBvh bvh;
+    private final CoplanarOccluders.Prepared planes;
+    private final java.util.function.ObjIntConsumer<int[]> sortByKey;
+    private Unobstructed unobstructed;
+    private final double[] scratch = new double[3 * Poly.MAX_VERTICES];
+    private final double[] rule = new double[Poly.RULE_SCRATCH];
+    private final double[] axis = new double[3];
+    private final int[] occluders;
+    private final VisiblePart part;
+    private int occluderCount;
+    private boolean overflow;
+    /** Error estimate of the last call (m²). */
+    double lastError;
+    /** Emitter pieces (leaves of the bisection) of the last call. */
+    int lastLeaves;
+    /** Leaves proved hidden by {@link CoplanarOccluders} (running count). */
+    long certifiedHidden;
+
+    /**
+     * @param t the facets
+     * @param bvh the occluders' triangles
+     * @param maxOccluders most occluder facets in one hull (more: {@link #exchangeArea} fails)
+     * @param sortByKey puts facet indices in an order that does not depend on the scene's order
+     */
+    ShadowIntegral(FacetTable t, TriangleBvh bvh, CoplanarOccluders.Prepared planes, EventLines events,
+            int maxOccluders, java.util.function.ObjIntConsumer<int[]> sortByKey) {
+        this.t = t;
+        this.events = events;
+        this.planes = planes;
+        this.bvh = bvh;
+        this.occluders = new int[maxOccluders];
+        this.leafOccluders = new int[MAX_LEAVES][maxOccluders];
+        this.sortByKey = sortByKey;
+        this.part = new VisiblePart(t);
+        for (int k = 0; k < leaves.length; k++) {
+            leaves[k] = new Poly();
+        }
+    }
+
+    /**
+     * @param p emitter (not modified)
+     * @param q receiver, entirely in front of p's plane and p in front of q's (not modified)
+     * @param occluderFacets facets that may block a segment from p to q (not modified)
+     * @param count number of entries of {@code occluderFacets} used
+     * @param exact A_p F_pq without obstruction (m²)
+     * @param unobstructedOfPiece the same for a piece of p
+     * @param tolerance target absolute error (m²)
+     * @return A_p F_pq with obstruction (m²), or NaN if a point's visible part had more than
+     *         {@value VisiblePart#MAX_PIECES} pieces (then use another method)
+     */
+    double exchangeArea(Poly p, Poly q, double exact, Unobstructed unobstructedOfPiece, double tolerance) {
+        overflow = false;
+        unobstructed = unobstructedOfPiece;
+        leaves[0].copyFrom(p);
+        order[0] = ORDER;
+        int n = 1;
+        evaluate(0, q, exact);
+        while (!overflow) {
+            double total = 0, worst = -1;
+            int k = -1;
+            for (int c = 0; c < n; c++) {
+                total += error[c];
+                if (error[c] > worst) {
+                    worst = error[c];
+                    k = c;
+                }
+            }
+            if (total <= tolerance) {
+                break;
+            }
+            if (!hasEvent[k] && order[k] + 2 <= MAX_ORDER) {
+                // smooth on this leaf: a higher order converges fastest
+                order[k] += 2;
+                evaluate(k, q, n == 1 ? exact : Double.NaN);
+                continue;
+            }
+            if (n + 1 > MAX_LEAVES) {
+                break;
+            }
+            Poly leaf = leaves[k], other = leaves[n];
+            other.copyFrom(leaf);
+            if (hasEvent[k]) {
+                double[] e = leafEvent[k];
+                leaf.clip(e[0], e[1], e[2], e[3], scratch);
+                other.clip(-e[0], -e[1], -e[2], -e[3], scratch);
+            } else {
+                split(leaf, other);
+            }
+            order[k] = ORDER;
+            order[n] = ORDER;
+            evaluate(k, q, Double.NaN);
+            evaluate(n, q, Double.NaN);
+            n++;
+        }
+        if (overflow) {
+            return Double.NaN;
+        }
+        double s = 0, err = 0;
+        for (int c = 0; c < n; c++) {
+            err += error[c];
+            s += value[c];
+        }
+        lastError = err;
+        lastLeaves = n;
+        return s;
+    }
+
+    /** Bisects {@code a} across its long axis: a keeps one half, b (a copy of a) the other. */
+    private void split(Poly a, Poly b) {
+        a.longAxis(axis);
+        double d = axis[0] * a.cx + axis[1] * a.cy + axis[2] * a.cz;
+        a.clip(axis[0], axis[1], axis[2], d, scratch);
+        b.clip(-axis[0], -axis[1], -axis[2], -d, scratch);
+    }
+
+    /**
+     * Sets the value and error estimate of leaf c. No occluder in the hull of the leaf and q:
+     * exact unobstructed value. Otherwise the order-3 rule on the leaf and on its two halves;
+     * the halves' sum is the value and its difference from the leaf's rule the error (for the
+     * smaller of the visible and the hidden part; the other comes from the exact unobstructed
+     * value). Where the sampled visible fraction is 0 (or 1) at every interior point but not at
+     * some vertex, half its range times the leaf's integral is added, so that a leaf whose rule
+     * points all miss a silhouette is split.
+     */
+    private void evaluate(int c, Poly q, double exact) {
+        Poly p = leaves[c];
+        shaft.build(p, q);
+        int count = bvh.collect(shaft.planes, shaft.count, shaft.tolerance, p.facet, q.facet, occluders);
+        if (count < 0) {
+            overflow = true;
+            return;
+        }
+        sortByKey.accept(occluders, count);
+        occluderCount = count;
+        System.arraycopy(occluders, 0, leafOccluders[c], 0, count);
+        leafCount[c] = count;
+        if (count == 0) {
+            value[c] = Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact;
+            error[c] = 0;
+            hasEvent[c] = false;
+            return;
+        }
+        if (planes.hides(p, q, occluders, count)) {
+            value[c] = 0;
+            error[c] = 0;
+            hasEvent[c] = false;
+            certifiedHidden++;
+            return;
+        }
+        minFraction = 1;
+        maxFraction = 0;
+        double[] low = integrals(p, q, order[c] - 1);
+        double vis2 = low[0], hid2 = low[1];
+        double[] high = integrals(p, q, order[c]);
+        double vis = high[0], hid = high[1];
+        hasEvent[c] = events.best(p, q, occluders, count, leafEvent[c]) > 0;
+        double penalty = 0;
+        if (hasEvent[c]) {
+            for (int k = 0; k < p.n; k++) {
+                // vertices, moved a thousandth of the way to the centroid (a vertex may lie on q's edge)
+                double x = p.xyz[3 * k] + 1e-3 * (p.cx - p.xyz[3 * k]);
+                double y = p.xyz[3 * k + 1] + 1e-3 * (p.cy - p.xyz[3 * k + 1]);
+                double z = p.xyz[3 * k + 2] + 1e-3 * (p.cz - p.xyz[3 * k + 2]);
+                sample(x, y, z, p, q);
+            }
+            // the integrand has a kink inside: the rules' difference does not bound the error
+            penalty = Math.max(maxFraction - minFraction, KINK_SHARE) * (vis + hid);
+        }
+        double rule;
+        if (hid < vis) {
+            double unob = Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact;
+            value[c] = Math.max(0, unob - hid);
+            rule = Math.abs(hid2 - hid);
+        } else {
+            value[c] = vis;
+            rule = Math.abs(vis2 - vis);
+        }
+        error[c] = rule + penalty;
+    }
+
+    /** @return the visible fraction at a point; updates the leaf's range of fractions */
+    private double sample(double x, double y, double z, Poly p, Poly q) {
+        double total = PointFactor.toPolygon(x, y, z, p.nx, p.ny, p.nz, q);
+        double seen = part.factor(x, y, z, p, q, occluders, occluderCount);
+        if (Double.isNaN(seen)) {
+            overflow = true;
+            seen = 0;
+        }
+        double f = total > 0 ? Math.min(1, seen / total) : 1;
+        minFraction = Math.min(minFraction, f);
+        maxFraction = Math.max(maxFraction, f);
+        lastTotal = total;
+        return f;
+    }
+
+    private double minFraction, maxFraction, lastTotal;
+    private final double[] result = new double[2];
+
+    /** @return {∫ F_{dx→V}, ∫ F_{dx→q∖V}} over p with the order-m Gauss rule (m²); shared array */
+    private double[] integrals(Poly p, Poly q, int m) {
+        int np = AreaRules.build(p, m, rule, 0);
+        double vis = 0, all = 0;
+        for (int a = 0; a < np && !overflow; a++) {
+            double w = rule[4 * a + 3];
+            double f = sample(rule[4 * a], rule[4 * a + 1], rule[4 * a + 2], p, q);
+            all += w * lastTotal;
+            vis += w * lastTotal * f;
+        }
+        result[0] = vis;
+        result[1] = Math.max(0, all - vis);
+        return result;
+    }
+
+}

@@ -1,0 +1,88 @@
+package org.exitance.geometry.viewfactor;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Which edges and vertices of the occluder facets can bound a shadow. An edge shared by two
+ * occluder facets in one plane facing the same way (an inner edge of a meshed face) never does:
+ * the merged face has no edge there. (The front and back of a thin plate share their outline,
+ * but face opposite ways: their edges are real.) A vertex can be a corner of a shadow only if both its edges can bound one and
+ * they are not collinear (a mesh node along a straight edge is not a corner). Only these enter
+ * the event lines of {@link EventLines}; leaving out the others only saves splits, it does not
+ * change a value. Built once, then read-only.
+ */
+final class SilhouetteEdges {
+
+    /** realEdge[v]: the edge from global vertex v to the next vertex of its facet can bound a shadow. */
+    final boolean[] realEdge;
+    /** realVertex[v]: global vertex v can be a shadow's corner. */
+    final boolean[] realVertex;
+
+    /**
+     * @param t the facets
+     * @param occluder which facets are occluders (not modified)
+     * @param planes their coplanar groups
+     */
+    SilhouetteEdges(FacetTable t, boolean[] occluder, CoplanarOccluders planes) {
+        int nv = t.vertexStart[t.count];
+        realEdge = new boolean[nv];
+        realVertex = new boolean[nv];
+        double step = 1e-9 * t.sceneSize;
+        Map<List<Long>, Integer> uses = new HashMap<>();
+        for (int pass = 0; pass < 2; pass++) {
+            for (int f = 0; f < t.count; f++) {
+                if (!occluder[f]) {
+                    continue;
+                }
+                int v0 = t.vertexStart[f], n = t.vertexStart[f + 1] - v0;
+                for (int k = 0; k < n; k++) {
+                    List<Long> key = key(t, 2L * planes.group(f) + (facesPositive(t, planes, f) ? 1 : 0), v0 + k,
+                            v0 + (k + 1) % n, step);
+                    if (pass == 0) {
+                        uses.merge(key, 1, Integer::sum);
+                    } else {
+                        realEdge[v0 + k] = uses.get(key) == 1;
+                    }
+                }
+            }
+        }
+        for (int f = 0; f < t.count; f++) {
+            if (!occluder[f]) {
+                continue;
+            }
+            int v0 = t.vertexStart[f], n = t.vertexStart[f + 1] - v0;
+            for (int k = 0; k < n; k++) {
+                int prev = v0 + (k + n - 1) % n, here = v0 + k, next = v0 + (k + 1) % n;
+                realVertex[here] = realEdge[prev] && realEdge[here] && !collinear(t, prev, here, next);
+            }
+        }
+    }
+
+    /** @return true if facet f faces the positive side of its group's plane */
+    private static boolean facesPositive(FacetTable t, CoplanarOccluders planes, int f) {
+        double[] pl = planes.plane(planes.group(f));
+        return pl[0] * t.normal[3 * f] + pl[1] * t.normal[3 * f + 1] + pl[2] * t.normal[3 * f + 2] > 0;
+    }
+
+    private static List<Long> key(FacetTable t, long group, int a, int b, double step) {
+        long[] pa = quantised(t, a, step), pb = quantised(t, b, step);
+        boolean swap = pa[0] > pb[0] || (pa[0] == pb[0] && (pa[1] > pb[1] || (pa[1] == pb[1] && pa[2] > pb[2])));
+        long[] lo = swap ? pb : pa, hi = swap ? pa : pb;
+        return List.of(group, lo[0], lo[1], lo[2], hi[0], hi[1], hi[2]);
+    }
+
+    private static long[] quantised(FacetTable t, int v, double step) {
+        return new long[] {Math.round(t.xyz[3 * v] / step), Math.round(t.xyz[3 * v + 1] / step),
+            Math.round(t.xyz[3 * v + 2] / step)};
+    }
+
+    private static boolean collinear(FacetTable t, int a, int b, int c) {
+        double ux = t.xyz[3 * b] - t.xyz[3 * a], uy = t.xyz[3 * b + 1] - t.xyz[3 * a + 1], uz = t.xyz[3 * b + 2] - t.xyz[3 * a + 2];
+        double vx = t.xyz[3 * c] - t.xyz[3 * b], vy = t.xyz[3 * c + 1] - t.xyz[3 * b + 1], vz = t.xyz[3 * c + 2] - t.xyz[3 * b + 2];
+        double cx = uy * vz - uz * vy, cy = uz * vx - ux * vz, cz = ux * vy - uy * vx;
+        double cross = Math.sqrt(cx * cx + cy * cy + cz * cz);
+        return cross <= 1e-9 * Math.sqrt((ux * ux + uy * uy + uz * uz) * (vx * vx + vy * vy + vz * vz));
+    }
+}
