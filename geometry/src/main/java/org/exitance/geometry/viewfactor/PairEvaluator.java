@@ -64,7 +64,7 @@ final class PairEvaluator {
         this.split = new SplitPairs(contour, quadrature, rule, contourOrder);
         this.visibility = occluders == null ? null : new VisibilityQuadrature(t, occluders);
         this.shadow = occluders == null ? null : new ShadowIntegral(t, occluders, planes.prepared(),
-                new EventLines(t, edges, planes), MAX_OCCLUDERS, this::sortByKey);
+                new EventLines(t, edges, planes), edges.closed, MAX_OCCLUDERS, this::sortByKey);
         this.visibilityTolerance = Math.min(1e-2, 100 * rule.tolerance());
     }
 

@@ -98,11 +98,12 @@ final class ShadowIntegral {
     /**
      * @param t the facets
      * @param bvh the occluders' triangles
+     * @param closedSolids per facet: part of a closed solid (not modified; {@link SilhouetteEdges#closed})
      * @param maxOccluders most occluder facets in one hull (more: {@link #exchangeArea} fails)
      * @param sortByKey puts facet indices in an order that does not depend on the scene's order
      */
     ShadowIntegral(FacetTable t, TriangleBvh bvh, CoplanarOccluders.Prepared planes, EventLines events,
-            int maxOccluders, java.util.function.ObjIntConsumer<int[]> sortByKey) {
+            boolean[] closedSolids, int maxOccluders, java.util.function.ObjIntConsumer<int[]> sortByKey) {
         this.t = t;
         this.events = events;
         this.planes = planes;
@@ -110,7 +111,7 @@ final class ShadowIntegral {
         this.occluders = new int[maxOccluders];
         this.leafOccluders = new int[MAX_LEAVES][maxOccluders];
         this.sortByKey = sortByKey;
-        this.part = new VisiblePart(t);
+        this.part = new VisiblePart(t, closedSolids);
         for (int k = 0; k < leaves.length; k++) {
             leaves[k] = new Poly();
         }

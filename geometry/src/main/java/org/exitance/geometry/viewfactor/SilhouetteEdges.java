@@ -19,6 +19,15 @@ final class SilhouetteEdges {
     final boolean[] realEdge;
     /** realVertex[v]: global vertex v can be a shadow's corner. */
     final boolean[] realVertex;
+    /**
+     * closed[f]: occluder facet f belongs to a closed, consistently oriented surface (every
+     * edge of every facet of its connected piece is shared, in opposite directions, with exactly
+     * one other facet). A segment between two points outside such a solid that crosses one of
+     * its facets from behind has entered it before through a facet it crossed from the front,
+     * so facets facing away from the segment's start can be skipped. A thin two-sided plate
+     * (front and back facets on one outline) counts as closed.
+     */
+    final boolean[] closed;
 
     /**
      * @param t the facets
@@ -48,6 +57,7 @@ final class SilhouetteEdges {
                 }
             }
         }
+        closed = closedSolids(t, occluder, step);
         for (int f = 0; f < t.count; f++) {
             if (!occluder[f]) {
                 continue;
@@ -58,6 +68,66 @@ final class SilhouetteEdges {
                 realVertex[here] = realEdge[prev] && realEdge[here] && !collinear(t, prev, here, next);
             }
         }
+    }
+
+    private static boolean[] closedSolids(FacetTable t, boolean[] occluder, double step) {
+        Map<List<Long>, int[]> directed = new HashMap<>(); // directed edge → {facet, count}
+        for (int f = 0; f < t.count; f++) {
+            if (!occluder[f]) {
+                continue;
+            }
+            int v0 = t.vertexStart[f], n = t.vertexStart[f + 1] - v0;
+            for (int k = 0; k < n; k++) {
+                int facet = f;
+                int[] e = directed.computeIfAbsent(directedKey(t, v0 + k, v0 + (k + 1) % n, step), x -> new int[] {facet, 0});
+                e[1]++;
+            }
+        }
+        // union-find over facets joined by an edge used once each way
+        int[] parent = new int[t.count];
+        boolean[] open = new boolean[t.count];
+        for (int f = 0; f < t.count; f++) {
+            parent[f] = f;
+        }
+        for (int f = 0; f < t.count; f++) {
+            if (!occluder[f]) {
+                continue;
+            }
+            int v0 = t.vertexStart[f], n = t.vertexStart[f + 1] - v0;
+            for (int k = 0; k < n; k++) {
+                int[] here = directed.get(directedKey(t, v0 + k, v0 + (k + 1) % n, step));
+                int[] back = directed.get(directedKey(t, v0 + (k + 1) % n, v0 + k, step));
+                if (here[1] != 1 || back == null || back[1] != 1) {
+                    open[f] = true;
+                } else {
+                    parent[find(parent, f)] = find(parent, back[0]);
+                }
+            }
+        }
+        boolean[] openRoot = new boolean[t.count];
+        for (int f = 0; f < t.count; f++) {
+            if (occluder[f] && open[f]) {
+                openRoot[find(parent, f)] = true;
+            }
+        }
+        boolean[] result = new boolean[t.count];
+        for (int f = 0; f < t.count; f++) {
+            result[f] = occluder[f] && !openRoot[find(parent, f)];
+        }
+        return result;
+    }
+
+    private static int find(int[] parent, int f) {
+        while (parent[f] != f) {
+            parent[f] = parent[parent[f]];
+            f = parent[f];
+        }
+        return f;
+    }
+
+    private static List<Long> directedKey(FacetTable t, int a, int b, double step) {
+        long[] pa = quantised(t, a, step), pb = quantised(t, b, step);
+        return List.of(pa[0], pa[1], pa[2], pb[0], pb[1], pb[2]);
     }
 
     /** @return true if facet f faces the positive side of its group's plane */

@@ -30,8 +30,16 @@ final class VisiblePart {
     private int[] occluders;
     private boolean overflow;
 
-    VisiblePart(FacetTable t) {
+    private final boolean[] closed;
+
+    /**
+     * @param t the facets
+     * @param closed per facet: part of a closed solid, so it blocks nothing when it faces away
+     *        from the point (not modified; see {@link SilhouetteEdges#closed})
+     */
+    VisiblePart(FacetTable t, boolean[] closed) {
         this.t = t;
+        this.closed = closed;
         for (int k = 0; k < pieces.length; k++) {
             pieces[k] = new Poly();
         }
@@ -65,6 +73,10 @@ final class VisiblePart {
         double minArea = 1e-14 * q.area;
         for (int k = 0; k < occluderCount && count > 0; k++) {
             int f = occluders[k];
+            if (closed[f] && t.normal[3 * f] * (x - t.centroid[3 * f]) + t.normal[3 * f + 1] * (y - t.centroid[3 * f + 1])
+                    + t.normal[3 * f + 2] * (z - t.centroid[3 * f + 2]) <= 0) {
+                continue; // faces away from the point: a front facet of the same solid blocks first
+            }
             int inside = classify(f, q.nx, q.ny, q.nz, qd, n);
             if (inside < 0) {
                 continue; // entirely behind q's plane or outside a side of the pyramid
