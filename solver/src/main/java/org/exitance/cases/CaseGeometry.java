@@ -12,9 +12,26 @@ import org.exitance.geometry.viewfactor.ViewFactorOptions;
  * @param options       how to compute view factors
  * @param notes         what mesh import repaired or noticed, one line each
  * @param solveOnFacets whether the case is solved facet by facet ({@code "resolution": "facets"})
+ * @param tolerance     target of the facet rows of the view factors: the estimated error of every
+ *                      row, and for a closed geometry its deviation from 1, must stay within it
+ *                      ({@code options.tolerance}, default {@value #DEFAULT_TOLERANCE})
  */
-public record CaseGeometry(Scene scene, ViewFactorOptions options, List<String> notes, boolean solveOnFacets) {
+public record CaseGeometry(Scene scene, ViewFactorOptions options, List<String> notes, boolean solveOnFacets,
+        double tolerance) {
+
+    /** Default view-factor tolerance. */
+    public static final double DEFAULT_TOLERANCE = 1e-5;
+
     public CaseGeometry {
         notes = List.copyOf(notes);
+    }
+
+    /**
+     * @param tol another view-factor tolerance (the command line's {@code --vf-tolerance})
+     * @return a copy with it, the pair tolerance tightened to at most a hundredth of it
+     */
+    public CaseGeometry withTolerance(double tol) {
+        return new CaseGeometry(scene, options.withPairTolerance(Math.min(options.pairTolerance(), Math.max(1e-12, tol / 100))),
+                notes, solveOnFacets, tol);
     }
 }

@@ -63,7 +63,11 @@ final class GeometryReader {
                 default -> throw r.error("must be \"surfaces\" or \"facets\", got \"" + r.text() + "\"");
             };
         }
-        return new CaseGeometry(scene, options, notes, onFacets);
+        CaseGeometry cg = new CaseGeometry(scene, options, notes, onFacets, CaseGeometry.DEFAULT_TOLERANCE);
+        if (g.has("options") && g.field("options").has("tolerance")) {
+            cg = cg.withTolerance(g.field("options").field("tolerance").positiveWithin(Limits.VIEW_FACTOR_TOLERANCE));
+        }
+        return cg;
     }
 
     private static final String[] SHAPES = {"rectangle", "polygon", "disc", "annulus", "cylinder", "cone", "sphere",
@@ -243,7 +247,7 @@ final class GeometryReader {
     }
 
     private static ViewFactorOptions options(JsonCursor o) throws CaseException {
-        o.allowOnly("threads", "pairTolerance", "obstruction", "closure", "visibilityOrder", "resolution");
+        o.allowOnly("threads", "tolerance", "pairTolerance", "obstruction", "closure", "visibilityOrder", "resolution");
         ViewFactorOptions v = ViewFactorOptions.defaults();
         if (o.has("threads")) {
             v = v.withThreads(o.field("threads").wholeWithin(Limits.THREADS));

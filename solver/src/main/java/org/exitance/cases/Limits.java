@@ -84,6 +84,8 @@ public final class Limits {
     public static final Range MATRIX_TOLERANCE = new Range("view-factor tolerance", 1e-15, 1, "");
     /** The relative accuracy asked of each facet pair's view factor. */
     public static final Range PAIR_TOLERANCE = new Range("pair tolerance", 1e-12, 0.5, "");
+    /** Target of the facet rows of a geometry's view factors. */
+    public static final Range VIEW_FACTOR_TOLERANCE = new Range("view-factor tolerance", 1e-10, 0.1, "");
     /** Newton iterations per property update. */
     public static final Range NEWTON_ITERATIONS = new Range("Newton iterations", 1, 10_000, "");
     /** Outer updates of temperature-dependent properties. */
@@ -111,7 +113,7 @@ public final class Limits {
             AREA_M2, COORDINATE_M, LENGTH_M, RADIUS_OR_ZERO_M, DIRECTION_LENGTH, ANGLE_DEG, MESH_SCALE_M,
             PLANET_RADIUS_M, ALTITUDE_M, WAVELENGTH_UM, CONDUCTANCE_W_K, CONVECTION_W_M2K, IRRADIANCE_W_M2,
             SPECTRAL_IRRADIANCE_W_M2_UM, HEAT_W, FLUX_W_M2, FRACTION, TEMPERATURE_TOLERANCE_K,
-            RELATIVE_HEAT_TOLERANCE, MATRIX_TOLERANCE, PAIR_TOLERANCE, NEWTON_ITERATIONS, PROPERTY_ITERATIONS,
+            RELATIVE_HEAT_TOLERANCE, MATRIX_TOLERANCE, PAIR_TOLERANCE, VIEW_FACTOR_TOLERANCE, NEWTON_ITERATIONS, PROPERTY_ITERATIONS,
             VISIBILITY_ORDER, THREADS, DIVISIONS, FACETS, BAND_EDGES, TABLE_POINTS, FILE_BYTES, COVER_LAYERS);
 
     private Limits() {

@@ -42,6 +42,9 @@ final class AuditCommand implements Callable<Integer> {
     private double thresholdPct;
 
     @Mixin
+    private SharedOptions.VfTolerance vfTolerance;
+
+    @Mixin
     private SharedOptions.Json json;
 
     @Mixin
@@ -71,7 +74,7 @@ final class AuditCommand implements Callable<Integer> {
         BandSet override = bandEdges.bands();
         double tolerance = bandTolerance.fraction();
         OutputTarget.check(output.file(), force);
-        PreparedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile, vfTolerance.request());
         RadiationCase base = c.model();
         List<String> names = base.loadCases().stream().map(LoadCase::name).toList();
         if (loadCase != null && !names.contains(loadCase)) {
@@ -114,6 +117,6 @@ final class AuditCommand implements Callable<Integer> {
         } else {
             OutputTarget.write(output.file(), force, stdout, ps -> AuditTableWriter.write(base.title(), audits, ps));
         }
-        return ExitCodes.OK;
+        return Runs.exitCode(c, spec.commandLine().getErr());
     }
 }

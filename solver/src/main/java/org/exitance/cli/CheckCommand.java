@@ -30,9 +30,12 @@ final class CheckCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
     private Path caseFile;
 
+    @picocli.CommandLine.Mixin
+    private SharedOptions.VfTolerance vfTolerance;
+
     @Override
     public Integer call() throws Exception {
-        PreparedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile, vfTolerance.request());
         Runs.preflight(c);
         PrintWriter out = spec.commandLine().getOut();
         Enclosure e = c.model().enclosure();
@@ -99,6 +102,6 @@ final class CheckCommand implements Callable<Integer> {
             out.println("  warning: " + w);
         }
         out.flush();
-        return ExitCodes.OK;
+        return Runs.exitCode(c, spec.commandLine().getErr());
     }
 }

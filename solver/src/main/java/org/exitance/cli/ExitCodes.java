@@ -8,13 +8,16 @@ public final class ExitCodes {
     public static final int INTERNAL = 1;
     /** Bad input: unreadable or invalid case, bad option, ill-posed problem. */
     public static final int BAD_INPUT = 2;
-    /** A solve did not converge; no result is reported. */
+    /**
+     * A solve did not converge (no result is reported), or the view factors miss the case's
+     * view-factor tolerance (the results are printed with that warning).
+     */
     public static final int NO_CONVERGENCE = 3;
     /** {@code verify}: at least one validation check failed. */
     public static final int CHECK_FAILED = 4;
 
     static final String HELP = "Exit codes: 0 success; 2 bad input (message names file and JSON path);"
-            + " 3 no convergence; 4 a validation check failed (verify); 1 internal error.";
+            + " 3 no convergence, or view-factor tolerance not met; 4 a validation check failed (verify); 1 internal error.";
 
     private ExitCodes() {
     }

@@ -36,6 +36,19 @@ final class Runs {
         return c;
     }
 
+    /**
+     * The exit code of a command that printed its results: 0, or 3 with the shortfall on
+     * standard error when the view factors miss the case's view-factor tolerance.
+     */
+    static int exitCode(PreparedCase c, java.io.PrintWriter err) {
+        if (c.shortfall() == null) {
+            return ExitCodes.OK;
+        }
+        err.println("exitance: " + c.file() + ": " + c.shortfall());
+        err.flush();
+        return ExitCodes.NO_CONVERGENCE;
+    }
+
     /** Checks what can be known without solving: that the problem is posed at all. */
     static void preflight(PreparedCase c) {
         try {

@@ -49,6 +49,9 @@ final class SensitivityCommand implements Callable<Integer> {
     private String loadCase;
 
     @Mixin
+    private SharedOptions.VfTolerance vfTolerance;
+
+    @Mixin
     private SharedOptions.BandEdges bandEdges;
 
     @Mixin
@@ -62,7 +65,7 @@ final class SensitivityCommand implements Callable<Integer> {
         if (top < 1) {
             throw new UserError("--top must be at least 1", ExitCodes.BAD_INPUT);
         }
-        PreparedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile, vfTolerance.request());
         RadiationCase model = pick(c);
         int i = model.enclosure().indexOf(surface);
         if (i < 0) {
@@ -85,7 +88,7 @@ final class SensitivityCommand implements Callable<Integer> {
         } else {
             SensitivityWriter.table(study, s, ranking, top, out);
         }
-        return ExitCodes.OK;
+        return Runs.exitCode(c, spec.commandLine().getErr());
     }
 
     private RadiationCase pick(PreparedCase c) {

@@ -120,6 +120,27 @@ final class SharedOptions {
         }
     }
 
+    /** {@code --vf-tolerance T}: the view-factor tolerance, replacing the case's. */
+    static final class VfTolerance {
+        @Option(names = "--vf-tolerance", paramLabel = "T", descriptionKey = "vf-tolerance",
+                description = "Target of the facet rows of a geometry's view factors (estimated error, and closure"
+                        + " of a closed geometry); replaces geometry.options.tolerance (default 1e-5). Exit 3 if not met.")
+        private Double value;
+
+        /** @return the tolerance, or null when not given */
+        Double value() {
+            if (value != null && !(value >= 1e-10 && value <= 0.1)) {
+                throw new UserError("--vf-tolerance must be between 1e-10 and 0.1, got " + value, ExitCodes.BAD_INPUT);
+            }
+            return value;
+        }
+
+        /** @return the cached, quiet request with this override */
+        org.exitance.pipeline.ViewFactorStage.Request request() {
+            return org.exitance.pipeline.ViewFactorStage.Request.DEFAULT.withTolerance(value());
+        }
+    }
+
     /** {@code --band-tolerance PERCENT}: when adaptive band refinement stops. */
     static final class BandTolerance {
         @Option(names = "--band-tolerance", paramLabel = "PERCENT", defaultValue = "0.1", descriptionKey = "band-tolerance",

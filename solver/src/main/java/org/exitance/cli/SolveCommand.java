@@ -36,6 +36,9 @@ final class SolveCommand implements Callable<Integer> {
     private Path caseFile;
 
     @Mixin
+    private SharedOptions.VfTolerance vfTolerance;
+
+    @Mixin
     private SharedOptions.Json json;
 
     @Mixin
@@ -77,7 +80,7 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         BandSet override = bandEdges.bands(gray);
         OutputTarget.check(output.file(), force);
-        PreparedCase c = Runs.load(caseFile);
+        PreparedCase c = Runs.load(caseFile, vfTolerance.request());
         org.exitance.thermal.SolverChoice choice;
         try {
             choice = solver == null ? null : org.exitance.thermal.SolverChoice.of(solver);
@@ -107,7 +110,9 @@ final class SolveCommand implements Callable<Integer> {
             String text = SolveJsonWriter.MAPPER.writeValueAsString(node);
             OutputTarget.write(output.file(), force, stdout, ps -> ps.println(text));
             if (!quiet) {
-                c.warnings().forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
+                // the view-factor shortfall, if any, is the one line of exit code 3 (Runs.exitCode)
+                c.warnings().stream().filter(w -> !w.equals(c.shortfall()))
+                        .forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
             }
         } else if (variants) {
             OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
@@ -116,7 +121,7 @@ final class SolveCommand implements Callable<Integer> {
             OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
                     c.warnings(), AuditTableWriter.summaryLines(audits), ps));
         }
-        return ExitCodes.OK;
+        return Runs.exitCode(c, spec.commandLine().getErr());
     }
 
     /** The gray-body audit of every solved (load) case, with the bands the solve used. */

@@ -37,6 +37,9 @@ final class ViewFactorsCommand implements Callable<Integer> {
     private Path caseFile;
 
     @Mixin
+    private SharedOptions.VfTolerance vfTolerance;
+
+    @Mixin
     private SharedOptions.Json json;
 
     @Option(names = "--csv", paramLabel = "FILE", description = "Also write the surface matrix as CSV to FILE.")
@@ -57,7 +60,7 @@ final class ViewFactorsCommand implements Callable<Integer> {
         Progress progress = Progress.onStderr(!quiet, spec.commandLine().getErr());
         PreparedCase c;
         try {
-            c = Runs.load(caseFile, new ViewFactorStage.Request(!noCache, progress, progress::cancelled));
+            c = Runs.load(caseFile, new ViewFactorStage.Request(!noCache, progress, progress::cancelled, vfTolerance.value()));
         } finally {
             progress.done();
         }
@@ -77,7 +80,7 @@ final class ViewFactorsCommand implements Callable<Integer> {
             writeTable(v, spec.commandLine().getOut());
         }
         stdout.flush();
-        return ExitCodes.OK;
+        return Runs.exitCode(c, spec.commandLine().getErr());
     }
 
     private static void writeTable(ComputedViewFactors v, PrintWriter out) {
@@ -112,7 +115,8 @@ final class ViewFactorsCommand implements Callable<Integer> {
         out.println("Closure (facet rows): largest |1 − Σ F| " + Numbers.small(v.maxRowSumDeviation()) + " (row "
                 + v.worstRow() + "); largest excess above 1 " + Numbers.small(v.maxRowSumExcess())
                 + "; largest reciprocity error " + Numbers.small(v.maxReciprocityError()));
-        out.println("Sampling error estimate (partly hidden pairs): largest row " + Numbers.small(v.maxRowErrorEstimate()));
+        out.println("Error estimate: largest facet row " + Numbers.small(v.maxRowErrorEstimate())
+                + " (sum of its pairs' estimates)");
         out.println("Methods: " + v.methodSummary());
         out.println("Closure enforcement: " + v.smoothing());
         out.println("Geometry hash: " + v.geometryHash());

@@ -45,33 +45,38 @@ public final class CasePipeline {
 
     /** Prepares a case already read: view factors, facet expansion, source incidence, the model. */
     public static PreparedCase prepare(CaseDescription d, ViewFactorStage.Request request) throws CaseException {
-        CaseGeometry g = d.geometry();
+        CaseGeometry g = d.geometry() != null && request.tolerance() != null
+                ? d.geometry().withTolerance(request.tolerance()) : d.geometry();
         List<String> warnings = new ArrayList<>(d.warnings());
         boolean open = d.environment() != null;
         if (d.section() != null) {
             double[][] f = ConsistentViewFactors.forSolve(SectionStage.viewFactors(d, warnings), d.surfaces(), open,
                     d.file(), "$.section", warnings);
             return new PreparedCase(d, surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null)), warnings,
-                    null);
+                    null, null);
         }
         if (g == null) {
             double[][] f = ConsistentViewFactors.forSolve(d.viewFactors(), d.surfaces(), open, d.file(),
                     "$.viewFactors.matrix", warnings);
             RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null));
-            return new PreparedCase(d, model, warnings, null);
+            return new PreparedCase(d, model, warnings, null, null);
         }
         ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets());
+        String shortfall = ViewFactorAccuracy.shortfall(computed, open, g.tolerance());
+        if (shortfall != null) {
+            warnings.add(shortfall);
+        }
         double[][] f = GeometryViewFactors.inCaseOrder(computed, d.surfaces(), open, d.file(), warnings);
         if (!g.solveOnFacets()) {
             f = ConsistentViewFactors.forSolve(f, d.surfaces(), open, d.file(), "$.geometry", warnings);
             RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), g.scene(), null));
-            return new PreparedCase(d, model, warnings, computed);
+            return new PreparedCase(d, model, warnings, computed, shortfall);
         }
         FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces(), open, d.file(), warnings);
         Enclosure enclosure = enclosure(d, facets.surfaces(), facets.matrix());  // shares the facet matrix
         List<ExternalSource> sources = FacetExpansion.spreadOverFacets(
                 SourceIncidence.place(d.sources(), g.scene(), facets.sceneOrder()), facets.groups());
-        return new PreparedCase(d, model(d, enclosure, sources, facets), warnings, computed);
+        return new PreparedCase(d, model(d, enclosure, sources, facets), warnings, computed, shortfall);
     }
 
     /**

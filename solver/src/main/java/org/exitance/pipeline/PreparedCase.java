@@ -14,9 +14,11 @@ import org.exitance.model.RadiationCase;
  * @param warnings    non-fatal findings of reading and of the view-factor stage, one line each
  * @param viewFactors view factors computed from the case's geometry (or its cache), or null when
  *                    the case gives a matrix
+ * @param shortfall   why the view factors miss the case's view-factor tolerance, one line, or
+ *                    null when they meet it (or the case gives a matrix)
  */
 public record PreparedCase(CaseDescription description, RadiationCase model, List<String> warnings,
-                           ComputedViewFactors viewFactors) {
+                           ComputedViewFactors viewFactors, String shortfall) {
     public PreparedCase {
         warnings = List.copyOf(warnings);
     }

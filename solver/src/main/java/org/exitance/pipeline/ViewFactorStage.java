@@ -38,10 +38,21 @@ public final class ViewFactorStage {
      * @param useCache  read and write the cache
      * @param progress  progress listener (fraction of facet pairs done)
      * @param cancel    polled between facet rows; true stops the computation
+     * @param tolerance view-factor tolerance that replaces the case's, or null to keep it
      */
-    public record Request(boolean useCache, ProgressListener progress, BooleanSupplier cancel) {
+    public record Request(boolean useCache, ProgressListener progress, BooleanSupplier cancel, Double tolerance) {
         /** Cache on, no progress, no cancellation. */
-        public static final Request DEFAULT = new Request(true, ProgressListener.NONE, () -> false);
+        public static final Request DEFAULT = new Request(true, ProgressListener.NONE, () -> false, null);
+
+        /** Without a tolerance override. */
+        public Request(boolean useCache, ProgressListener progress, BooleanSupplier cancel) {
+            this(useCache, progress, cancel, null);
+        }
+
+        /** @return a copy with this tolerance override (null: none) */
+        public Request withTolerance(Double tol) {
+            return new Request(useCache, progress, cancel, tol);
+        }
     }
 
     private ViewFactorStage() {

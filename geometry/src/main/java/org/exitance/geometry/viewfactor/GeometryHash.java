@@ -16,7 +16,7 @@ import org.exitance.geometry.Surface;
 public final class GeometryHash {
 
     /** Changes whenever the algorithm changes results. */
-    static final String FORMAT = "exitance-viewfactor-1";
+    static final String FORMAT = "exitance-viewfactor-2"; // 2: shadow projection for partly hidden pairs
 
     private GeometryHash() {
     }

@@ -46,7 +46,7 @@ import org.exitance.geometry.bvh.TriangleBvh;
 final class ShadowIntegral {
 
     /** Largest number of pieces of the emitter (leaves of the bisection). */
-    static final int MAX_LEAVES = 32;
+    static final int MAX_LEAVES = 128;
     /** First order of the emitter rule; the rule one order lower gives the error estimate. */
     static final int ORDER = 3;
     /** Highest order used on a leaf that no event line crosses (then it is split). */
