@@ -75,15 +75,15 @@ final class ViewFactorsCommand implements Callable<Integer> {
             OutputTarget.write(csv, force, stdout, ps -> writeCsv(v, ps));
         }
         if (json.on()) {
-            stdout.println(SolveJsonWriter.MAPPER.writeValueAsString(toJson(v, caseFile)));
+            stdout.println(SolveJsonWriter.MAPPER.writeValueAsString(toJson(v, caseFile, c)));
         } else {
-            writeTable(v, spec.commandLine().getOut());
+            writeTable(v, c, spec.commandLine().getOut());
         }
         stdout.flush();
         return Runs.exitCode(c, spec.commandLine().getErr());
     }
 
-    private static void writeTable(ComputedViewFactors v, PrintWriter out) {
+    private static void writeTable(ComputedViewFactors v, PreparedCase c, PrintWriter out) {
         out.println("View factors F[row → column] of " + v.surfaceNames().size() + " surfaces from " + v.facetCount()
                 + " facets" + (v.fromCache() ? " (from the cache)" : String.format(Locale.ROOT, " (%.2f s)", v.seconds())));
         List<String> head = new ArrayList<>();
@@ -117,6 +117,8 @@ final class ViewFactorsCommand implements Callable<Integer> {
                 + "; largest reciprocity error " + Numbers.small(v.maxReciprocityError()));
         out.println("Error estimate: largest facet row " + Numbers.small(v.maxRowErrorEstimate())
                 + " (sum of its pairs' estimates)");
+        out.println("Tolerance " + Numbers.small(tolerance(c)) + " on facet rows: "
+                + (c.shortfall() == null ? "met" : "NOT met (" + c.shortfall() + ")"));
         out.println("Methods: " + v.methodSummary());
         out.println("Closure enforcement: " + v.smoothing());
         out.println("Geometry hash: " + v.geometryHash());
@@ -137,7 +139,12 @@ final class ViewFactorsCommand implements Callable<Integer> {
         }
     }
 
-    private static ObjectNode toJson(ComputedViewFactors v, Path caseFile) {
+    /** @return the view-factor tolerance the case was computed to (the option's, else the case's) */
+    private static double tolerance(PreparedCase c) {
+        return c.viewFactorTolerance();
+    }
+
+    private static ObjectNode toJson(ComputedViewFactors v, Path caseFile, PreparedCase c) {
         ObjectNode root = SolveJsonWriter.MAPPER.createObjectNode();
         root.put("case", caseFile.toString());
         ArrayNode names = root.putArray("surfaces");
@@ -161,6 +168,8 @@ final class ViewFactorsCommand implements Callable<Integer> {
         d.put("worstRow", v.worstRow());
         d.put("maxReciprocityError", v.maxReciprocityError());
         d.put("maxRowErrorEstimate", v.maxRowErrorEstimate());
+        d.put("tolerance", tolerance(c));
+        d.put("toleranceMet", c.shortfall() == null);
         d.put("methods", v.methodSummary());
         d.put("closureEnforcement", v.smoothing());
         d.put("geometryHash", v.geometryHash());

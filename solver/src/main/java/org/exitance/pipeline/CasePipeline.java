@@ -53,13 +53,13 @@ public final class CasePipeline {
             double[][] f = ConsistentViewFactors.forSolve(SectionStage.viewFactors(d, warnings), d.surfaces(), open,
                     d.file(), "$.section", warnings);
             return new PreparedCase(d, surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null)), warnings,
-                    null, null);
+                    null, null, Double.NaN);
         }
         if (g == null) {
             double[][] f = ConsistentViewFactors.forSolve(d.viewFactors(), d.surfaces(), open, d.file(),
                     "$.viewFactors.matrix", warnings);
             RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null));
-            return new PreparedCase(d, model, warnings, null, null);
+            return new PreparedCase(d, model, warnings, null, null, Double.NaN);
         }
         ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets());
         String shortfall = ViewFactorAccuracy.shortfall(computed, open, g.tolerance());
@@ -70,13 +70,14 @@ public final class CasePipeline {
         if (!g.solveOnFacets()) {
             f = ConsistentViewFactors.forSolve(f, d.surfaces(), open, d.file(), "$.geometry", warnings);
             RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), g.scene(), null));
-            return new PreparedCase(d, model, warnings, computed, shortfall);
+            return new PreparedCase(d, model, warnings, computed, shortfall, g.tolerance());
         }
         FacetExpansion.Result facets = FacetExpansion.expand(computed, d.surfaces(), open, d.file(), warnings);
         Enclosure enclosure = enclosure(d, facets.surfaces(), facets.matrix());  // shares the facet matrix
         List<ExternalSource> sources = FacetExpansion.spreadOverFacets(
                 SourceIncidence.place(d.sources(), g.scene(), facets.sceneOrder()), facets.groups());
-        return new PreparedCase(d, model(d, enclosure, sources, facets), warnings, computed, shortfall);
+        return new PreparedCase(d, model(d, enclosure, sources, facets), warnings, computed, shortfall,
+                g.tolerance());
     }
 
     /**

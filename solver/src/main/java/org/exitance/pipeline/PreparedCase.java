@@ -16,9 +16,11 @@ import org.exitance.model.RadiationCase;
  *                    the case gives a matrix
  * @param shortfall   why the view factors miss the case's view-factor tolerance, one line, or
  *                    null when they meet it (or the case gives a matrix)
+ * @param viewFactorTolerance the view-factor tolerance the geometry was computed to (NaN without
+ *                    a geometry)
  */
 public record PreparedCase(CaseDescription description, RadiationCase model, List<String> warnings,
-                           ComputedViewFactors viewFactors, String shortfall) {
+                           ComputedViewFactors viewFactors, String shortfall, double viewFactorTolerance) {
     public PreparedCase {
         warnings = List.copyOf(warnings);
     }

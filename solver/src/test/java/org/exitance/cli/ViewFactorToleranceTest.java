@@ -41,6 +41,7 @@ class ViewFactorToleranceTest {
         CliRun r = CliRun.of("view-factors", "--no-cache", c.toString());
         assertThat(r.exitCode()).as(r.err()).isZero();
         assertThat(r.err()).doesNotContain("tolerance");
+        assertThat(r.out()).contains("Tolerance 1.00e-05 on facet rows: met");
     }
 
     @Test
@@ -49,7 +50,7 @@ class ViewFactorToleranceTest {
         Files.writeString(c, caseText(12, "")); // 288 occluder facets: more than shadow projection takes
         CliRun vf = CliRun.of("view-factors", "--no-cache", c.toString());
         assertThat(vf.exitCode()).isEqualTo(3);
-        assertThat(vf.out()).contains("floor", "roof", "Error estimate");
+        assertThat(vf.out()).contains("floor", "roof", "Error estimate", "on facet rows: NOT met");
         assertThat(vf.err()).contains("fine-baffle.json", "view-factor tolerance 1.00e-05 not met").hasLineCount(1);
         CliRun solve = CliRun.of("solve", c.toString());
         assertThat(solve.exitCode()).isEqualTo(3);

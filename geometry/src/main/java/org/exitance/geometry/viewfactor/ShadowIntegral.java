@@ -64,19 +64,14 @@ final class ShadowIntegral {
 
     private final FacetTable t;
     private final Poly[] leaves = new Poly[MAX_LEAVES];
-    private final double[] visible = new double[MAX_LEAVES];
-    private final double[] hidden = new double[MAX_LEAVES];
     private final double[] error = new double[MAX_LEAVES];
     private final double[] value = new double[MAX_LEAVES];
-    private final int[][] leafOccluders;
-    private final int[] leafCount = new int[MAX_LEAVES];
     private final boolean[] hasEvent = new boolean[MAX_LEAVES];
     private final int[] order = new int[MAX_LEAVES];
     private final double[][] leafEvent = new double[MAX_LEAVES][4];
     private final EventLines events;
-    private final Poly halfA = new Poly();
-    private final Poly halfB = new Poly();
     private final Shaft shaft = new Shaft();
+    private final Poly backup = new Poly();
     private final TriangleBvh bvh;
     private final CoplanarOccluders.Prepared planes;
     private final java.util.function.ObjIntConsumer<int[]> sortByKey;
@@ -109,7 +104,6 @@ final class ShadowIntegral {
         this.planes = planes;
         this.bvh = bvh;
         this.occluders = new int[maxOccluders];
-        this.leafOccluders = new int[MAX_LEAVES][maxOccluders];
         this.sortByKey = sortByKey;
         this.part = new VisiblePart(t, closedSolids);
         for (int k = 0; k < leaves.length; k++) {
@@ -120,8 +114,6 @@ final class ShadowIntegral {
     /**
      * @param p emitter (not modified)
      * @param q receiver, entirely in front of p's plane and p in front of q's (not modified)
-     * @param occluderFacets facets that may block a segment from p to q (not modified)
-     * @param count number of entries of {@code occluderFacets} used
      * @param exact A_p F_pq without obstruction (m²)
      * @param unobstructedOfPiece the same for a piece of p
      * @param tolerance target absolute error (m²)
@@ -159,12 +151,19 @@ final class ShadowIntegral {
             }
             Poly leaf = leaves[k], other = leaves[n];
             other.copyFrom(leaf);
+            backup.copyFrom(leaf);
             if (hasEvent[k]) {
                 double[] e = leafEvent[k];
                 leaf.clip(e[0], e[1], e[2], e[3], scratch);
                 other.clip(-e[0], -e[1], -e[2], -e[3], scratch);
             } else {
                 split(leaf, other);
+            }
+            if (leaf.n < 3 || other.n < 3) {
+                // the cut left nothing on one side (rounding): undo it, refine otherwise next time
+                leaf.copyFrom(backup);
+                hasEvent[k] = false;
+                continue;
             }
             order[k] = ORDER;
             order[n] = ORDER;
@@ -194,13 +193,10 @@ final class ShadowIntegral {
     }
 
     /**
-     * Sets the value and error estimate of leaf c. No occluder in the hull of the leaf and q:
-     * exact unobstructed value. Otherwise the order-3 rule on the leaf and on its two halves;
-     * the halves' sum is the value and its difference from the leaf's rule the error (for the
-     * smaller of the visible and the hidden part; the other comes from the exact unobstructed
-     * value). Where the sampled visible fraction is 0 (or 1) at every interior point but not at
-     * some vertex, half its range times the leaf's integral is added, so that a leaf whose rule
-     * points all miss a silhouette is split.
+     * Sets the value and error estimate of leaf c (at its current order): exact when no occluder
+     * is in the hull of the leaf and q, 0 when a merged face proves it hidden, otherwise the
+     * Gauss rule of the leaf's order, with the rule one order lower for the estimate and the
+     * event-line penalty described in the class comment. Also finds the leaf's best event line.
      */
     private void evaluate(int c, Poly q, double exact) {
         Poly p = leaves[c];
@@ -212,8 +208,6 @@ final class ShadowIntegral {
         }
         sortByKey.accept(occluders, count);
         occluderCount = count;
-        System.arraycopy(occluders, 0, leafOccluders[c], 0, count);
-        leafCount[c] = count;
         if (count == 0) {
             value[c] = Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact;
             error[c] = 0;
