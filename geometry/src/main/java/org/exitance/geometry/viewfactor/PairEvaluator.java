@@ -53,7 +53,7 @@ final class PairEvaluator {
     double lastError;
 
     PairEvaluator(FacetTable t, TriangleBvh occluders, CoplanarOccluders planes, SilhouetteEdges edges,
-            ProximityRule rule, int contourOrder, int visibilityOrder) {
+            ConvexOccluders convex, ProximityRule rule, int contourOrder, int visibilityOrder) {
         this.t = t;
         this.occluders = occluders;
         this.rule = rule;
@@ -63,7 +63,7 @@ final class PairEvaluator {
         this.contourTolerance = 0.1 * rule.tolerance();
         this.split = new SplitPairs(contour, quadrature, rule, contourOrder);
         this.visibility = occluders == null ? null : new VisibilityQuadrature(t, occluders);
-        this.shadow = occluders == null ? null : new ShadowIntegral(t, occluders, planes.prepared(),
+        this.shadow = occluders == null ? null : new ShadowIntegral(t, occluders, planes.prepared(), convex.view(),
                 new EventLines(t, edges, planes), edges.closed, MAX_OCCLUDERS, this::sortByKey);
         this.visibilityTolerance = Math.min(1e-2, 100 * rule.tolerance());
     }

@@ -22,12 +22,12 @@ import org.exitance.geometry.bvh.TriangleBvh;
  * kept as up to {@value #MAX_LEAVES} pieces; the piece with the largest error estimate is refined
  * next: split along the event line that halves it most evenly if one crosses it, otherwise
  * integrated with a rule two orders higher (up to {@value #MAX_ORDER}; the integrand is analytic
- * there, so raising the order converges fastest), and split across its long axis only after
- * that. On each piece:
+ * there, so raising the order converges fastest; the new rule against the previous one is then
+ * the estimate), and split across its long axis only after that. On each piece:
  * <ul>
  *   <li>no occluder in the hull of the piece and q: its exact unobstructed value;</li>
- *   <li>a merged occluder face covers the hull's cross-section ({@link CoplanarOccluders}):
- *       exactly 0;</li>
+ *   <li>a convex closed occluder ({@link ConvexOccluders}) or a merged occluder face
+ *       ({@link CoplanarOccluders}) covers a cross-section of the hull: exactly 0;</li>
  *   <li>otherwise Gauss rules of orders 2 and 3 ({@link AreaRules}); their difference is the
  *       error estimate where no event line crosses the piece (the integrand is analytic there);
  *       where one does, at least {@value #KINK_SHARE} of the piece's integral (more if the
@@ -66,6 +66,10 @@ final class ShadowIntegral {
     private final Poly[] leaves = new Poly[MAX_LEAVES];
     private final double[] error = new double[MAX_LEAVES];
     private final double[] value = new double[MAX_LEAVES];
+    private final double[] ruleVisible = new double[MAX_LEAVES];
+    private final double[] ruleHidden = new double[MAX_LEAVES];
+    private final int[][] leafOccluders;
+    private final int[] leafOccluderCount = new int[MAX_LEAVES];
     private final boolean[] hasEvent = new boolean[MAX_LEAVES];
     private final int[] order = new int[MAX_LEAVES];
     private final double[][] leafEvent = new double[MAX_LEAVES][4];
@@ -74,6 +78,7 @@ final class ShadowIntegral {
     private final Poly backup = new Poly();
     private final TriangleBvh bvh;
     private final CoplanarOccluders.Prepared planes;
+    private final ConvexOccluders.View convex;
     private final java.util.function.ObjIntConsumer<int[]> sortByKey;
     private Unobstructed unobstructed;
     private final double[] scratch = new double[3 * Poly.MAX_VERTICES];
@@ -93,17 +98,22 @@ final class ShadowIntegral {
     /**
      * @param t the facets
      * @param bvh the occluders' triangles
+     * @param planes merged coplanar occluder faces (proofs of hidden pieces)
+     * @param convex convex closed occluders (proofs of hidden pieces)
+     * @param events event lines of the emitter
      * @param closedSolids per facet: part of a closed solid (not modified; {@link SilhouetteEdges#closed})
      * @param maxOccluders most occluder facets in one hull (more: {@link #exchangeArea} fails)
      * @param sortByKey puts facet indices in an order that does not depend on the scene's order
      */
-    ShadowIntegral(FacetTable t, TriangleBvh bvh, CoplanarOccluders.Prepared planes, EventLines events,
-            boolean[] closedSolids, int maxOccluders, java.util.function.ObjIntConsumer<int[]> sortByKey) {
+    ShadowIntegral(FacetTable t, TriangleBvh bvh, CoplanarOccluders.Prepared planes, ConvexOccluders.View convex,
+            EventLines events, boolean[] closedSolids, int maxOccluders, java.util.function.ObjIntConsumer<int[]> sortByKey) {
         this.t = t;
+        this.convex = convex;
         this.events = events;
         this.planes = planes;
         this.bvh = bvh;
         this.occluders = new int[maxOccluders];
+        this.leafOccluders = new int[MAX_LEAVES][maxOccluders];
         this.sortByKey = sortByKey;
         this.part = new VisiblePart(t, closedSolids);
         for (int k = 0; k < leaves.length; k++) {
@@ -142,8 +152,7 @@ final class ShadowIntegral {
             }
             if (!hasEvent[k] && order[k] + 2 <= MAX_ORDER) {
                 // smooth on this leaf: a higher order converges fastest
-                order[k] += 2;
-                evaluate(k, q, n == 1 ? exact : Double.NaN);
+                raise(k, q, n == 1 ? exact : Double.NaN);
                 continue;
             }
             if (n + 1 > MAX_LEAVES) {
@@ -208,13 +217,15 @@ final class ShadowIntegral {
         }
         sortByKey.accept(occluders, count);
         occluderCount = count;
+        System.arraycopy(occluders, 0, leafOccluders[c], 0, count);
+        leafOccluderCount[c] = count;
         if (count == 0) {
             value[c] = Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact;
             error[c] = 0;
             hasEvent[c] = false;
             return;
         }
-        if (planes.hides(p, q, occluders, count)) {
+        if (convex.hides(p, q, occluders, count) || planes.hides(p, q, occluders, count)) {
             value[c] = 0;
             error[c] = 0;
             hasEvent[c] = false;
@@ -240,9 +251,29 @@ final class ShadowIntegral {
             // the integrand has a kink inside: the rules' difference does not bound the error
             penalty = Math.max(maxFraction - minFraction, KINK_SHARE) * (vis + hid);
         }
+        settle(c, q, exact, vis, hid, vis2, hid2, penalty);
+    }
+
+    /**
+     * Raises the order of leaf c (no event line crosses it) by two; the new rule against the
+     * previous one gives the estimate. The leaf's occluders are those found when it was made.
+     */
+    private void raise(int c, Poly q, double exact) {
+        order[c] += 2;
+        occluderCount = leafOccluderCount[c];
+        System.arraycopy(leafOccluders[c], 0, occluders, 0, occluderCount);
+        double prevVis = ruleVisible[c], prevHid = ruleHidden[c];
+        double[] high = integrals(leaves[c], q, order[c]);
+        settle(c, q, exact, high[0], high[1], prevVis, prevHid, 0);
+    }
+
+    /** Sets value and error of leaf c from its rule (vis, hid) and a lower rule (vis2, hid2). */
+    private void settle(int c, Poly q, double exact, double vis, double hid, double vis2, double hid2, double penalty) {
+        ruleVisible[c] = vis;
+        ruleHidden[c] = hid;
         double rule;
         if (hid < vis) {
-            double unob = Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact;
+            double unob = Double.isNaN(exact) ? unobstructed.exchangeArea(leaves[c], q) : exact;
             value[c] = Math.max(0, unob - hid);
             rule = Math.abs(hid2 - hid);
         } else {

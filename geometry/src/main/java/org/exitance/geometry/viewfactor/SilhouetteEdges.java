@@ -28,6 +28,8 @@ final class SilhouetteEdges {
      * (front and back facets on one outline) counts as closed.
      */
     final boolean[] closed;
+    /** solid[f]: the closed solid (an id shared by its facets) of facet f, or −1. */
+    final int[] solid;
 
     /**
      * @param t the facets
@@ -57,7 +59,11 @@ final class SilhouetteEdges {
                 }
             }
         }
-        closed = closedSolids(t, occluder, step);
+        solid = closedSolids(t, occluder, step);
+        closed = new boolean[t.count];
+        for (int f = 0; f < t.count; f++) {
+            closed[f] = solid[f] >= 0;
+        }
         for (int f = 0; f < t.count; f++) {
             if (!occluder[f]) {
                 continue;
@@ -70,7 +76,8 @@ final class SilhouetteEdges {
         }
     }
 
-    private static boolean[] closedSolids(FacetTable t, boolean[] occluder, double step) {
+    /** @return per facet, the id of its closed solid (the lowest facet index in it), or −1 */
+    private static int[] closedSolids(FacetTable t, boolean[] occluder, double step) {
         Map<List<Long>, int[]> directed = new HashMap<>(); // directed edge → {facet, count}
         for (int f = 0; f < t.count; f++) {
             if (!occluder[f]) {
@@ -110,9 +117,15 @@ final class SilhouetteEdges {
                 openRoot[find(parent, f)] = true;
             }
         }
-        boolean[] result = new boolean[t.count];
+        int[] result = new int[t.count];
+        int[] lowest = new int[t.count];
+        java.util.Arrays.fill(lowest, -1);
         for (int f = 0; f < t.count; f++) {
-            result[f] = occluder[f] && !openRoot[find(parent, f)];
+            int r = find(parent, f);
+            if (lowest[r] < 0) {
+                lowest[r] = f;
+            }
+            result[f] = occluder[f] && !openRoot[r] ? lowest[r] : -1;
         }
         return result;
     }

@@ -59,6 +59,7 @@ public final class ViewFactorCalculator {
         TriangleBvh occluders = candidates == null ? null : Occluders.build(t, candidates);
         CoplanarOccluders planes = occluders == null ? null : new CoplanarOccluders(t, candidates);
         SilhouetteEdges edges = planes == null ? null : new SilhouetteEdges(t, candidates, planes);
+        ConvexOccluders convex = edges == null ? null : new ConvexOccluders(t, edges);
         ProximityRule rule = new ProximityRule(options.pairTolerance());
         int n = t.count;
         double[] f = new double[Math.multiplyExact(n, n)];
@@ -80,7 +81,7 @@ public final class ViewFactorCalculator {
         List<Future<?>> futures = new ArrayList<>();
         for (int w = 0; w < threads; w++) {
             futures.add(pool.submit(() -> {
-                PairEvaluator ev = new PairEvaluator(t, occluders, planes, edges, rule, options.contourOrder(),
+                PairEvaluator ev = new PairEvaluator(t, occluders, planes, edges, convex, rule, options.contourOrder(),
                         options.visibilityOrder());
                 for (int c = nextChunk.getAndIncrement(); c < chunks; c = nextChunk.getAndIncrement()) {
                     java.util.Arrays.fill(ev.counters, 0);
