@@ -30,10 +30,14 @@ public final class MaterialFileReader {
      * @param title     its title ("" if none)
      * @param notes     its notes ("" if none)
      * @param materials its materials, in file order
+     * @param warnings  findings that do not stop the survey, one line each: a window whose measured
+     *                  α + ρ + τ misses 1 by more than its measurement tolerance (an error in a case)
      */
-    public record MaterialFile(Path file, boolean isCase, String title, String notes, List<Material> materials) {
+    public record MaterialFile(Path file, boolean isCase, String title, String notes, List<Material> materials,
+                               List<String> warnings) {
         public MaterialFile {
             materials = List.copyOf(materials);
+            warnings = List.copyOf(warnings);
         }
 
         /**
@@ -62,13 +66,14 @@ public final class MaterialFileReader {
         JsonNode root = CaseJson.parse(file);
         if (root.isObject() && root.has("surfaces")) {
             CaseDescription c = CaseReader.read(file);
-            return new MaterialFile(file, true, c.title(), c.notes(), c.materials());
+            return new MaterialFile(file, true, c.title(), c.notes(), c.materials(), List.of());
         }
         JsonCursor cursor = JsonCursor.root(root, file).allowOnly("title", "notes", "materials");
         String title = cursor.has("title") ? cursor.field("title").text() : "";
         String notes = cursor.has("notes") ? cursor.field("notes").text() : "";
+        List<String> warnings = new ArrayList<>();
         Map<String, Material> materials = MaterialReader.readAll(cursor.field("materials"),
-                file.toAbsolutePath().getParent());
-        return new MaterialFile(file, false, title, notes, new ArrayList<>(materials.values()));
+                file.toAbsolutePath().getParent(), warnings);
+        return new MaterialFile(file, false, title, notes, new ArrayList<>(materials.values()), warnings);
     }
 }

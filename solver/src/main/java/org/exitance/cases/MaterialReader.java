@@ -22,6 +22,15 @@ final class MaterialReader {
     }
 
     static Map<String, Material> readAll(JsonCursor materials, Path caseDir) throws CaseException {
+        return readAll(materials, caseDir, null);
+    }
+
+    /**
+     * @param warnings where a window whose measured α + ρ + τ misses 1 by more than its measurement
+     *                 tolerance is recorded (modified: lines are added), or null to make that an error
+     */
+    static Map<String, Material> readAll(JsonCursor materials, Path caseDir, List<String> warnings)
+            throws CaseException {
         Map<String, Material> out = new LinkedHashMap<>();
         List<Map.Entry<String, JsonCursor>> entries = materials.entries();
         if (entries.isEmpty()) {
@@ -32,18 +41,20 @@ final class MaterialReader {
             if (name.isBlank()) {
                 throw e.getValue().error("material name must not be empty");
             }
-            out.put(name, read(name, e.getValue(), caseDir));
+            out.put(name, read(name, e.getValue(), caseDir, warnings));
         }
         return out;
     }
 
-    private static Material read(String name, JsonCursor m, Path caseDir) throws CaseException {
-        Material base = readProperties(name, m, caseDir);
+    private static Material read(String name, JsonCursor m, Path caseDir, List<String> warnings)
+            throws CaseException {
+        Material base = readProperties(name, m, caseDir, warnings);
         return m.has("emissivityUncertainty")
                 ? base.withEmissivityUncertainty(m.field("emissivityUncertainty").fraction()) : base;
     }
 
-    private static Material readProperties(String name, JsonCursor m, Path caseDir) throws CaseException {
+    private static Material readProperties(String name, JsonCursor m, Path caseDir, List<String> warnings)
+            throws CaseException {
         m.allowOnly(allowedKeys());
         String description = m.has("description") ? m.field("description").text() : "";
         boolean window = m.has("transmissivity") || m.has("spectralTransmissivity") || m.has("reflectivity")
@@ -53,7 +64,11 @@ final class MaterialReader {
                     + " (opaqueReflectivity, normalEmissivity, directionalEmissivity) are for opaque materials");
         }
         if (window) {
-            return SemiTransparentProperties.read(name, m, caseDir, description);
+            return SemiTransparentProperties.read(name, m, caseDir, description, warnings);
+        }
+        if (m.has("measurementTolerance")) {
+            throw m.field("measurementTolerance").error("applies to a window that gives all three of emissivity,"
+                    + " reflectivity and transmissivity");
         }
         if (MeasuredEmissivityReader.applies(m)) {
             return new Material(name, MeasuredEmissivityReader.read(m), description);
@@ -73,19 +88,32 @@ final class MaterialReader {
 
     private static String[] allowedKeys() {
         List<String> keys = new java.util.ArrayList<>(List.of("emissivity", "spectralEmissivity", "transmissivity",
-                "spectralTransmissivity", "reflectivity", "spectralReflectivity", "emissivityUncertainty", "description"));
+                "spectralTransmissivity", "reflectivity", "spectralReflectivity", "emissivityUncertainty", "measurementTolerance",
+                "description"));
         keys.addAll(MeasuredEmissivityReader.KEYS);
         return keys.toArray(String[]::new);
     }
 
     static SpectralEmissivity spectral(JsonCursor s, Path caseDir) throws CaseException {
-        s.allowOnly("wavelength_um", "bandEdges_um", "emissivity", "byTemperature", "csv");
+        return spectral(s, caseDir, "emissivity");
+    }
+
+    /**
+     * A spectral property whose values sit under {@code valueKey} ("emissivity", "transmissivity",
+     * "reflectivity"): a table or steps in λ, one such table per temperature ({@code byTemperature}),
+     * or a CSV file (with an optional {@code temperature_K} column).
+     */
+    static SpectralEmissivity spectral(JsonCursor s, Path caseDir, String valueKey) throws CaseException {
+        s.allowOnly("wavelength_um", "bandEdges_um", valueKey, "byTemperature", "csv");
         String which = s.exactlyOneOf("wavelength_um", "bandEdges_um", "byTemperature", "csv");
         switch (which) {
             case "wavelength_um":
             case "bandEdges_um":
-                return table(s);
+                return table(s, valueKey);
             case "byTemperature": {
+                if (s.has(valueKey)) {
+                    throw s.field(valueKey).error("goes inside each table of byTemperature");
+                }
                 JsonCursor arr = s.field("byTemperature");
                 List<JsonCursor> el = arr.elements();
                 if (el.isEmpty()) {
@@ -95,21 +123,21 @@ final class MaterialReader {
                 TabulatedEmissivity[] tables = new TabulatedEmissivity[el.size()];
                 for (int i = 0; i < t.length; i++) {
                     JsonCursor one = el.get(i).allowOnly("temperature_K", "temperature_C", "wavelength_um",
-                            "bandEdges_um", "emissivity");
+                            "bandEdges_um", valueKey);
                     one.exactlyOneOf("wavelength_um", "bandEdges_um");
                     t[i] = TemperatureField.read(one, "temperature")
                             .orElseThrow(() -> one.error("missing required key 'temperature_K' (or 'temperature_C')"));
                     if (i > 0 && !(t[i] > t[i - 1])) {
                         throw one.error("temperatures must increase: " + t[i] + " K after " + t[i - 1] + " K");
                     }
-                    tables[i] = table(one);
+                    tables[i] = table(one, valueKey);
                 }
                 return tables.length == 1 ? tables[0] : new TemperatureTabulatedEmissivity(t, tables);
             }
             default: {
                 JsonCursor ref = s.field("csv");
                 Path csv = caseDir.resolve(ref.nonEmptyText()).normalize();
-                List<PropertyCsvReader.Table> tables = PropertyCsvReader.read(csv, ref);
+                List<PropertyCsvReader.Table> tables = PropertyCsvReader.read(csv, ref, valueKey);
                 if (tables.size() == 1) {
                     PropertyCsvReader.Table t = tables.get(0);
                     return new TabulatedEmissivity(t.wavelengthUm(), t.emissivity());

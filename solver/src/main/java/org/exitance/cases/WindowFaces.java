@@ -12,6 +12,13 @@ import org.exitance.model.EnclosureSurface;
  * Errors name the file and the JSON path of the offending surface.
  */
 final class WindowFaces {
+    /**
+     * Largest relative difference of the two faces' areas that counts as equal: the areas of a
+     * two-sided geometry part's faces ({@code NAME.front}, {@code NAME.back}) are sums over the same
+     * facets in opposite vertex order and may differ in the last digits.
+     */
+    static final double AREA_ROUNDING = 1e-9;
+
     /** The keys of a boundary condition (as in {@code CaseReader}). */
     private static final String[] CONDITION_KEYS = {"temperature_K", "temperature_C", "netHeat_W", "netFlux_W_m2",
         "dissipation_W", "adiabatic"};
@@ -31,7 +38,8 @@ final class WindowFaces {
 
     /**
      * @param cursors  the surface objects, in order
-     * @param surfaces the surfaces read from them, same order
+     * @param surfaces the surfaces read from them, same order (modified: the second face of a node
+     *                 whose areas agree to {@link #AREA_ROUNDING} takes the first face's area exactly)
      */
     static void check(List<JsonCursor> cursors, List<EnclosureSurface> surfaces) throws CaseException {
         for (int i = 0; i < surfaces.size(); i++) {
@@ -67,9 +75,14 @@ final class WindowFaces {
                         + "' must use the same material, got '" + s.material().name() + "' and '"
                         + o.material().name() + "'");
             }
-            if (o.areaM2() != s.areaM2()) {
+            if (Math.abs(o.areaM2() - s.areaM2()) > AREA_ROUNDING * Math.max(o.areaM2(), s.areaM2())) {
                 throw c.error("faces '" + s.name() + "' and '" + o.name() + "' of one node must have the same area, got "
                         + CaseReader.fmt(s.areaM2()) + " m² and " + CaseReader.fmt(o.areaM2()) + " m²");
+            }
+            if (i < j && o.areaM2() != s.areaM2()) {
+                o = new EnclosureSurface(o.name(), o.material(), s.areaM2(), o.boundary(), o.initialTemperatureK(),
+                        o.convection(), o.otherFace());
+                surfaces.set(j, o);
             }
             boolean here = !(s.boundary() instanceof BoundaryCondition.OnOtherFace);
             boolean there = !(o.boundary() instanceof BoundaryCondition.OnOtherFace);

@@ -83,6 +83,7 @@ final class CheckCommand implements Callable<Integer> {
                     : s.boundary().label() + " (" + (s.isWindowFace() ? "window" : "two-sided") + " face; other face '"
                     + s.otherFace() + "')"));
         }
+        printNodesWithTwoFaces(out, e);
         if (c.description().section() != null) {
             var sec = c.description().section();
             out.println("  section: 2-D, " + sec.section().size() + " parts of " + sec.areasM2().size() + " surfaces, "
@@ -103,5 +104,24 @@ final class CheckCommand implements Callable<Integer> {
         }
         out.flush();
         return Runs.exitCode(c, spec.commandLine().getErr());
+    }
+
+    /** One line each for the two-sided plates and the windows: their face pairs, by the face with the condition. */
+    private static void printNodesWithTwoFaces(PrintWriter out, Enclosure e) {
+        StringBuilder plates = new StringBuilder();
+        StringBuilder windows = new StringBuilder();
+        for (EnclosureSurface s : e.surfaces()) {
+            if (s.otherFace() == null || s.boundary() instanceof org.exitance.model.BoundaryCondition.OnOtherFace) {
+                continue;
+            }
+            StringBuilder b = s.isWindowFace() ? windows : plates;
+            b.append(b.length() == 0 ? "" : ", ").append(s.name()).append(" + ").append(s.otherFace());
+        }
+        if (plates.length() > 0) {
+            out.println("  two-sided plates (one node, two faces): " + plates);
+        }
+        if (windows.length() > 0) {
+            out.println("  windows (one node, two faces): " + windows);
+        }
     }
 }

@@ -118,12 +118,17 @@ final class MaterialCommand implements Callable<Integer> {
             writePlot(materials.get(0), temperatures, sources, stdout);
         }
         if (json.on()) {
-            String text = SolveJsonWriter.MAPPER.writeValueAsString(
-                    MaterialJsonWriter.toJson(file.toString(), mf.isCase(), mf.title(), surveys));
+            com.fasterxml.jackson.databind.node.ObjectNode doc =
+                    MaterialJsonWriter.toJson(file.toString(), mf.isCase(), mf.title(), surveys);
+            mf.warnings().forEach(doc.putArray("warnings")::add);
+            String text = SolveJsonWriter.MAPPER.writeValueAsString(doc);
             OutputTarget.write(output.file(), force, stdout, ps -> ps.println(text));
         } else {
             String label = file + (mf.isCase() ? " (case)" : " (material file)");
-            OutputTarget.write(output.file(), force, stdout, ps -> MaterialTableWriter.write(label, mf.title(), surveys, ps));
+            OutputTarget.write(output.file(), force, stdout, ps -> {
+                MaterialTableWriter.write(label, mf.title(), surveys, ps);
+                mf.warnings().forEach(w -> ps.println("Warning: " + w));
+            });
         }
         return ExitCodes.OK;
     }

@@ -53,8 +53,9 @@ public record MaterialSurvey(Material material, List<IrradiationSource> sources,
         return material.emissivity().isGray();
     }
 
-    /** True when ε depends on temperature. */
+    /** True when ε (or a window's τ) depends on temperature. */
     public boolean temperatureDependent() {
-        return material.emissivity().dependsOnTemperature();
+        return material.emissivity().dependsOnTemperature()
+                || material.transmissivity() != null && material.transmissivity().dependsOnTemperature();
     }
 }

@@ -21,7 +21,8 @@ import org.exitance.spectral.source.SourceSpectrum;
  * @param emissivity   ε(λ): one curve, or one per temperature when ε depends on temperature
  * @param planck       one normalized Planck curve per plotted surface temperature
  * @param sources      one normalized curve per source
- * @param transmissivity  τ(λ) of a window (one curve), empty for an opaque material
+ * @param transmissivity  τ(λ) of a window: one curve, or one per temperature when τ depends on
+ *                        temperature; empty for an opaque material
  */
 public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity, List<Curve> planck,
                              List<Curve> sources, List<Curve> transmissivity) {
@@ -127,7 +128,13 @@ public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity,
         if (material.transmissivity() != null) {
             SpectralEmissivity tr = material.transmissivity();
             double[] g = grid(from, to, tr.breakpointsUm());
-            tau.add(new Curve("τ(λ) " + material.name(), Double.NaN, g, emissivity(tr, temperaturesK[0], g)));
+            if (tr.dependsOnTemperature()) {
+                for (double t : temperaturesK) {
+                    tau.add(new Curve("τ(λ) at " + BlackbodySource.kelvin(t) + " K", t, g, emissivity(tr, t, g)));
+                }
+            } else {
+                tau.add(new Curve("τ(λ) " + material.name(), Double.NaN, g, emissivity(tr, temperaturesK[0], g)));
+            }
         }
         return new SpectralCurves(from, to, eps, planck, src, tau);
     }

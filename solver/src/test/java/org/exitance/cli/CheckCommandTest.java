@@ -39,6 +39,17 @@ class CheckCommandTest {
     }
 
     @Test
+    void checkListsTwoSidedPlatesAndWindowsByTheirFacePairs() {
+        CliRun plate = CliRun.of("check", RepoCases.root().resolve("cases/demo/vacuum-furnace-shield-pack.json").toString());
+        assertThat(plate.exitCode()).as(plate.toString()).isZero();
+        assertThat(plate.out()).contains("two-sided plates (one node, two faces): hot_zone_inner + hot_zone_outer")
+                .doesNotContain("windows (one node");
+        CliRun window = CliRun.of("check", RepoCases.root().resolve("cases/demo/furnace-sight-window.json").toString());
+        assertThat(window.out()).contains("windows (one node, two faces): window_inner + window_outer")
+                .doesNotContain("two-sided plates");
+    }
+
+    @Test
     void checkWithoutACaseIsBadInput() {
         CliRun run = CliRun.of("check");
         assertThat(run.exitCode()).isEqualTo(2);
