@@ -32,6 +32,10 @@ final class CoplanarOccluders {
     /** Per group: unit normal and offset (n·x = d), and a 2-D basis u, v of the plane. */
     private final double[][] frame;
     private final Geometry[] region;
+    /** Per group: the convex outline of the merged face (packed xyz), or null. */
+    private final double[][] merged;
+    /** Per group: which way its facets face (see {@link #facing}). */
+    private final int[] facing;
     private final GeometryFactory factory = new GeometryFactory();
 
     /**
@@ -72,9 +76,75 @@ final class CoplanarOccluders {
         }
         frame = frames.toArray(new double[0][]);
         region = new Geometry[frame.length];
+        merged = new double[frame.length][];
         for (int g = 0; g < region.length; g++) {
             region[g] = UnaryUnionOp.union(members.get(g));
+            merged[g] = convexOutline(region[g], frame[g], 1e-9 * t.sceneSize);
         }
+        facing = new int[frame.length];
+        for (int f = 0; f < t.count; f++) {
+            int g = groupOf[f];
+            if (g < 0) {
+                continue;
+            }
+            double[] fr = frame[g];
+            int side = fr[0] * t.normal[3 * f] + fr[1] * t.normal[3 * f + 1] + fr[2] * t.normal[3 * f + 2] > 0 ? 1 : -1;
+            facing[g] = facing[g] == 0 ? side : (facing[g] == side ? side : 2);
+        }
+    }
+
+    /**
+     * The outline of a merged face as packed 3-D vertices, counter-clockwise about the group's
+     * normal, when it is one convex polygon without holes of at most 120 corners (collinear
+     * vertices dropped); else null.
+     */
+    private static double[] convexOutline(Geometry g, double[] fr, double tol) {
+        if (g.getNumGeometries() != 1 || !(g.getGeometryN(0) instanceof Polygon poly) || poly.getNumInteriorRing() > 0) {
+            return null;
+        }
+        double hull = poly.convexHull().getArea();
+        if (!(hull > 0) || hull - poly.getArea() > 1e-9 * hull) {
+            return null;
+        }
+        Coordinate[] c = poly.getExteriorRing().getCoordinates(); // closed ring
+        int n = c.length - 1;
+        boolean ccw = org.locationtech.jts.algorithm.Orientation.isCCW(c);
+        List<double[]> kept = new ArrayList<>();
+        for (int k = 0; k < n; k++) {
+            Coordinate prev = c[(k + n - 1) % n], here = c[k], next = c[(k + 1) % n];
+            double cross = (here.x - prev.x) * (next.y - here.y) - (here.y - prev.y) * (next.x - here.x);
+            double scale = Math.hypot(here.x - prev.x, here.y - prev.y) * Math.hypot(next.x - here.x, next.y - here.y);
+            if (Math.abs(cross) > 1e-12 * scale && scale > tol * tol) {
+                kept.add(new double[] {here.x, here.y});
+            }
+        }
+        if (kept.size() < 3 || kept.size() > 120) {
+            return null;
+        }
+        if (!ccw) {
+            java.util.Collections.reverse(kept);
+        }
+        double[] out = new double[3 * kept.size()];
+        for (int k = 0; k < kept.size(); k++) {
+            double u = kept.get(k)[0], v = kept.get(k)[1];
+            for (int a = 0; a < 3; a++) {
+                out[3 * k + a] = fr[3] * fr[a] + u * fr[4 + a] + v * fr[7 + a];
+            }
+        }
+        return out;
+    }
+
+    /** @return the convex outline of facet f's merged face (packed xyz, shared: not to be modified), or null */
+    double[] outline(int f) {
+        return groupOf[f] < 0 ? null : merged[groupOf[f]];
+    }
+
+    /**
+     * @return +1 or −1 when every facet of group g faces the positive (negative) side of its
+     *         plane, 2 when they face both ways
+     */
+    int facing(int g) {
+        return facing[g];
     }
 
     private static double[] frameOf(double nx, double ny, double nz, double d) {
@@ -127,6 +197,11 @@ final class CoplanarOccluders {
     final class Prepared {
 
         private final PreparedGeometry[] prepared = new PreparedGeometry[region.length];
+
+        /** @return the shared merged faces this view belongs to */
+        CoplanarOccluders owner() {
+            return CoplanarOccluders.this;
+        }
         private final int[] seen = new int[region.length];
         private int stamp;
         private final Coordinate[] points = new Coordinate[Poly.MAX_VERTICES * Poly.MAX_VERTICES];

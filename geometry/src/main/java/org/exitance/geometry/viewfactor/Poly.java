@@ -40,6 +40,23 @@ final class Poly {
         clipped = false;
     }
 
+    /**
+     * Loads a polygon given by packed vertices (counter-clockwise about the normal).
+     *
+     * @param v packed xyz (not modified)
+     * @param count vertices
+     */
+    void set(double[] v, int count, double unx, double uny, double unz) {
+        n = count;
+        System.arraycopy(v, 0, xyz, 0, 3 * count);
+        nx = unx;
+        ny = uny;
+        nz = unz;
+        facet = -1;
+        clipped = true;
+        updateMeasures();
+    }
+
     /** Recomputes area, centroid and radius from the vertices (normal kept). Modifies this. */
     void updateMeasures() {
         double a = 0, sx = 0, sy = 0, sz = 0;

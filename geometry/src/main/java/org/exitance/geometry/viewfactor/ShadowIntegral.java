@@ -115,7 +115,7 @@ final class ShadowIntegral {
         this.occluders = new int[maxOccluders];
         this.leafOccluders = new int[MAX_LEAVES][maxOccluders];
         this.sortByKey = sortByKey;
-        this.part = new VisiblePart(t, closedSolids);
+        this.part = new VisiblePart(t, closedSolids, planes.owner());
         for (int k = 0; k < leaves.length; k++) {
             leaves[k] = new Poly();
         }

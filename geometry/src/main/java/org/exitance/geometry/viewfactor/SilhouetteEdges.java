@@ -30,6 +30,11 @@ final class SilhouetteEdges {
     final boolean[] closed;
     /** solid[f]: the closed solid (an id shared by its facets) of facet f, or −1. */
     final int[] solid;
+    /**
+     * neighbour[v]: the facet on the other side of the edge from global vertex v to the next
+     * vertex of its facet (the one holding the same edge in the opposite direction), or −1.
+     */
+    final int[] neighbour;
 
     /**
      * @param t the facets
@@ -59,7 +64,9 @@ final class SilhouetteEdges {
                 }
             }
         }
-        solid = closedSolids(t, occluder, step);
+        neighbour = new int[nv];
+        java.util.Arrays.fill(neighbour, -1);
+        solid = closedSolids(t, occluder, step, neighbour);
         closed = new boolean[t.count];
         for (int f = 0; f < t.count; f++) {
             closed[f] = solid[f] >= 0;
@@ -77,7 +84,7 @@ final class SilhouetteEdges {
     }
 
     /** @return per facet, the id of its closed solid (the lowest facet index in it), or −1 */
-    private static int[] closedSolids(FacetTable t, boolean[] occluder, double step) {
+    private static int[] closedSolids(FacetTable t, boolean[] occluder, double step, int[] neighbour) {
         Map<List<Long>, int[]> directed = new HashMap<>(); // directed edge → {facet, count}
         for (int f = 0; f < t.count; f++) {
             if (!occluder[f]) {
@@ -104,6 +111,9 @@ final class SilhouetteEdges {
             for (int k = 0; k < n; k++) {
                 int[] here = directed.get(directedKey(t, v0 + k, v0 + (k + 1) % n, step));
                 int[] back = directed.get(directedKey(t, v0 + (k + 1) % n, v0 + k, step));
+                if (back != null && back[1] == 1 && here[1] == 1) {
+                    neighbour[v0 + k] = back[0];
+                }
                 if (here[1] != 1 || back == null || back[1] != 1) {
                     open[f] = true;
                 } else {

@@ -36,10 +36,26 @@ final class VisiblePart {
      * @param t the facets
      * @param closed per facet: part of a closed solid, so it blocks nothing when it faces away
      *        from the point (not modified; see {@link SilhouetteEdges#closed})
+     * @param groups merged coplanar occluder faces: a convex one is cut as one polygon
      */
-    VisiblePart(FacetTable t, boolean[] closed) {
+    private final CoplanarOccluders groups;
+    private final int[] seenGroup;
+    /** Per merged face: every facet of it belongs to a closed solid. */
+    private final boolean[] groupClosed;
+    private int stamp;
+
+    VisiblePart(FacetTable t, boolean[] closed, CoplanarOccluders groups) {
         this.t = t;
         this.closed = closed;
+        this.groups = groups;
+        this.seenGroup = new int[groups.groups()];
+        this.groupClosed = new boolean[groups.groups()];
+        java.util.Arrays.fill(groupClosed, true);
+        for (int f = 0; f < t.count; f++) {
+            if (groups.group(f) >= 0 && !closed[f]) {
+                groupClosed[groups.group(f)] = false;
+            }
+        }
         for (int k = 0; k < pieces.length; k++) {
             pieces[k] = new Poly();
         }
@@ -66,6 +82,7 @@ final class VisiblePart {
 
     /** @return F from the element at (x, y, z) with p's normal to the part of q seen from there */
     private double visibleFactor(double x, double y, double z, Poly p, Poly q) {
+        stamp++;
         int n = buildPyramid(x, y, z, q);
         double qd = q.nx * q.cx + q.ny * q.cy + q.nz * q.cz;
         pieces[0].copyFrom(q);
@@ -73,15 +90,31 @@ final class VisiblePart {
         double minArea = 1e-14 * q.area;
         for (int k = 0; k < occluderCount && count > 0; k++) {
             int f = occluders[k];
-            if (closed[f] && t.normal[3 * f] * (x - t.centroid[3 * f]) + t.normal[3 * f + 1] * (y - t.centroid[3 * f + 1])
-                    + t.normal[3 * f + 2] * (z - t.centroid[3 * f + 2]) <= 0) {
-                continue; // faces away from the point: a front facet of the same solid blocks first
+            int g = groups.group(f);
+            double[] outline = groups.outline(f);
+            if (outline != null) {
+                // the whole merged face, once: one cone instead of one per facet
+                if (seenGroup[g] == stamp) {
+                    continue;
+                }
+                seenGroup[g] = stamp;
+                double[] pl = groups.plane(g);
+                int facing = groups.facing(g);
+                if (groupClosed[g] && facing != 2 && facing * (pl[0] * x + pl[1] * y + pl[2] * z - pl[3]) <= 0) {
+                    continue; // a closed solid's face turned away from the point
+                }
+                occ.set(outline, outline.length / 3, pl[0], pl[1], pl[2]);
+            } else {
+                if (closed[f] && t.normal[3 * f] * (x - t.centroid[3 * f]) + t.normal[3 * f + 1] * (y - t.centroid[3 * f + 1])
+                        + t.normal[3 * f + 2] * (z - t.centroid[3 * f + 2]) <= 0) {
+                    continue; // faces away from the point: a front facet of the same solid blocks first
+                }
+                occ.load(t, f);
             }
-            int inside = classify(f, q.nx, q.ny, q.nz, qd, n);
+            int inside = classify(occ, q.nx, q.ny, q.nz, qd, n);
             if (inside < 0) {
                 continue; // entirely behind q's plane or outside a side of the pyramid
             }
-            occ.load(t, f);
             if (inside == 0) {
                 occ.clipAreaOnly(q.nx, q.ny, q.nz, qd, scratch); // the side facing x
                 for (int e = 0; e < n && occ.n >= 3; e++) {
@@ -177,8 +210,7 @@ final class VisiblePart {
      * planes in {@link #pyramid}): −1 entirely outside one plane (on it counts as outside),
      * 1 entirely inside all, 0 otherwise.
      */
-    private int classify(int f, double qx, double qy, double qz, double qd, int n) {
-        int v0 = t.vertexStart[f], v1 = t.vertexStart[f + 1];
+    private int classify(Poly o, double qx, double qy, double qz, double qd, int n) {
         boolean allInside = true;
         for (int e = -1; e < n; e++) {
             double mx, my, mz, d;
@@ -194,8 +226,8 @@ final class VisiblePart {
                 d = pyramid[4 * e + 3];
             }
             boolean anyIn = false, anyOut = false;
-            for (int v = v0; v < v1; v++) {
-                double sd = mx * t.xyz[3 * v] + my * t.xyz[3 * v + 1] + mz * t.xyz[3 * v + 2] - d;
+            for (int v = 0; v < o.n; v++) {
+                double sd = mx * o.xyz[3 * v] + my * o.xyz[3 * v + 1] + mz * o.xyz[3 * v + 2] - d;
                 if (sd > 0) {
                     anyIn = true;
                 } else {
