@@ -196,7 +196,8 @@ final class MaterialCommand implements Callable<Integer> {
             sub = (sub.isEmpty() ? "" : sub + " — ") + "Planck curves for " + shown.length + " of the "
                     + temperatures.length + " temperatures";
         }
-        String title = "Material " + m.name() + ": spectral emissivity, reflectivity" + (m.semiTransparent() ? ", transmissivity" : "") + " and Planck curves";
+        String title = "Material " + m.name() + ": spectral emissivity, reflectivity"
+                + (m.semiTransparent() ? ", transmissivity" : "") + " and Planck curves";
         String subtitle = sub;
         OutputTarget.write(plot, force, stdout, ps -> {
             try {
