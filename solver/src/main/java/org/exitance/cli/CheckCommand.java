@@ -91,7 +91,9 @@ final class CheckCommand implements Callable<Integer> {
         }
         c.description().covers().forEach((surface, cover) -> out.println("  covered: " + surface + " under "
                 + (cover.effective() ? "a pack of effective emittance " + Numbers.ratio(cover.effectiveEmittance())
-                : cover.layers() + " layer" + (cover.layers() == 1 ? "" : "s") + " of " + cover.layerMaterial().name())
+                : cover.layers() + " layer" + (cover.layers() == 1 ? "" : "s") + " of " + (cover.sharedLayerMaterial()
+                ? cover.layerMaterial(1).name() : String.join(", ", cover.layerMaterials().stream().map(m -> m.name()).toList())
+                + " (inner to outer)"))
                 + ", outer face '" + org.exitance.model.Cover.outerFace(surface) + "' (" + cover.outerMaterial().name()
                 + ")"));
         ExpectedValues expected = ExpectedReader.read(c.description());
