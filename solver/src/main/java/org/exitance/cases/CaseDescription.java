@@ -37,13 +37,17 @@ import org.exitance.model.SolverSettings;
  * @param warnings    non-fatal findings of reading (mesh repairs, small matrix errors), one line each
  * @param covers      insulation blankets and shield packs by covered surface name (empty for none)
  * @param section     the 2-D cross-section of an infinitely long case, or null
+ * @param measurementTolerances  for each window whose ε, ρ and τ are all given, by material name:
+ *                    the stated or default measurement tolerance (empty for none)
  */
 public record CaseDescription(Path file, String title, String notes, List<Material> materials,
                               List<EnclosureSurface> surfaces, Environment environment, List<ConductiveLink> links,
                               double[][] viewFactors, CaseGeometry geometry, BandSet bands, SolverSettings settings,
                               List<CaseSource> sources, List<LoadCase> loadCases, JsonCursor expected,
-                              List<String> warnings, Map<String, Cover> covers, CaseSection section) {
+                              List<String> warnings, Map<String, Cover> covers, CaseSection section,
+                              Map<String, MeasurementTolerance> measurementTolerances) {
     public CaseDescription {
+        measurementTolerances = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(measurementTolerances));
         covers = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(covers));
         materials = List.copyOf(materials);
         surfaces = List.copyOf(surfaces);

@@ -80,7 +80,8 @@ public final class CaseReader {
         Map<String, Cover> covers = CoverReader.read(root.field("surfaces"), surfaces, materials,
                 geometry != null && geometry.solveOnFacets());
         return new CaseDescription(file, title, notes, new ArrayList<>(materials.values()), surfaces, env, links,
-                matrix, geometry, bands, settings, sources, loadCases, expected, warnings, covers, section);
+                matrix, geometry, bands, settings, sources, loadCases, expected, warnings, covers, section,
+                MaterialReader.measurementTolerances(root.field("materials")));
     }
 
     /** A case solved facet by facet: no conductive links and no windows (both join whole surfaces). */

@@ -1,5 +1,6 @@
 package org.exitance.cases;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -9,8 +10,9 @@ import org.exitance.model.Material;
 
 /**
  * Reads the {@code coveredBy} object of surfaces (docs/case-format.md, "Insulation and shield
- * packs"): {@code {"layers": N, "layerMaterial": "film", "outerMaterial": "outer_film"}} or
- * {@code {"effectiveEmittance": 0.02, "outerMaterial": "outer_film"}}.
+ * packs"): {@code {"layers": N, "layerMaterial": "film", "outerMaterial": "outer_film"}}, one
+ * material per layer from the surface outward {@code {"layerMaterials": ["moly", "moly", "steel"],
+ * "outerMaterial": "steel"}}, or {@code {"effectiveEmittance": 0.02, "outerMaterial": "outer_film"}}.
  */
 final class CoverReader {
     private CoverReader() {
@@ -26,7 +28,7 @@ final class CoverReader {
             if (!s.has("coveredBy")) {
                 continue;
             }
-            JsonCursor c = s.field("coveredBy").allowOnly("layers", "layerMaterial", "outerMaterial",
+            JsonCursor c = s.field("coveredBy").allowOnly("layers", "layerMaterial", "layerMaterials", "outerMaterial",
                     "effectiveEmittance", "description");
             EnclosureSurface surface = surfaces.get(i);
             if (surface.isWindowFace()) {
@@ -37,7 +39,7 @@ final class CoverReader {
                         + " \"surfaces\"");
             }
             Material outer = material(c.field("outerMaterial"), materials);
-            String form = c.exactlyOneOf("layers", "effectiveEmittance");
+            String form = c.exactlyOneOf("layers", "layerMaterials", "effectiveEmittance");
             Cover cover;
             if (form.equals("layers")) {
                 JsonCursor n = c.field("layers");
@@ -45,7 +47,13 @@ final class CoverReader {
                 if (!Limits.COVER_LAYERS.contains(layers)) {
                     throw n.error("must be " + Limits.COVER_LAYERS.describe() + ", got " + layers);
                 }
-                cover = new Cover(layers, material(c.field("layerMaterial"), materials), outer, Double.NaN);
+                cover = new Cover(layers, material(c.field("layerMaterial"), materials), outer);
+            } else if (form.equals("layerMaterials")) {
+                if (c.has("layerMaterial")) {
+                    throw c.field("layerMaterial").error("give one shared material with \"layers\", or one per layer"
+                            + " in \"layerMaterials\", not both");
+                }
+                cover = new Cover(layerList(c.field("layerMaterials"), materials), outer, Double.NaN);
             } else {
                 if (c.has("layerMaterial")) {
                     throw c.field("layerMaterial").error("goes with \"layers\"; an effective emittance stands for the"
@@ -56,7 +64,7 @@ final class CoverReader {
                 if (!(v > 0)) {
                     throw e.error("must be above 0, got " + v);
                 }
-                cover = new Cover(0, null, outer, v);
+                cover = Cover.effective(v, outer);
             }
             String outerName = Cover.outerFace(surface.name());
             if (surfaces.stream().anyMatch(x -> x.name().startsWith(surface.name() + "."))) {
@@ -64,6 +72,19 @@ final class CoverReader {
                         + "' and the layers between); rename the other surface");
             }
             out.put(surface.name(), cover);
+        }
+        return out;
+    }
+
+    /** One opaque material per layer, from the covered surface outward; 1 to the layer limit of them. */
+    private static List<Material> layerList(JsonCursor arr, Map<String, Material> materials) throws CaseException {
+        List<JsonCursor> names = arr.elementsWithin(Limits.COVER_LAYERS);
+        if (names.isEmpty()) {
+            throw arr.error("must list one material per layer, from the covered surface outward; got none");
+        }
+        List<Material> out = new ArrayList<>(names.size());
+        for (JsonCursor n : names) {
+            out.add(material(n, materials));
         }
         return out;
     }

@@ -86,6 +86,10 @@ final class GeometryReader {
             case "box" -> out = box(s, facets, sides);
             case "cylindricalCavity" -> out = cavity(s, facets, sides);
             case "mesh" -> {
+                if (sides == 2 && s.has("twoSidedGroups")) {
+                    throw s.field("twoSidedGroups").error("the whole part is already two-sided (\"twoSided\": true);"
+                            + " give one or the other");
+                }
                 out = MeshPartReader.read(s, caseDir, notes);
                 facets[0] = GeometryNumbers.addFacets(s, facets[0],
                         (double) sides * out.stream().mapToInt(x -> x.facets().size()).sum());

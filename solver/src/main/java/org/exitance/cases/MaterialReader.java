@@ -46,6 +46,21 @@ final class MaterialReader {
         return out;
     }
 
+    /**
+     * The measurement tolerances of the windows whose ε, ρ and τ are all given, by material name in
+     * file order; call after {@link #readAll} has accepted the materials.
+     */
+    static Map<String, MeasurementTolerance> measurementTolerances(JsonCursor materials) throws CaseException {
+        Map<String, MeasurementTolerance> out = new LinkedHashMap<>();
+        for (Map.Entry<String, JsonCursor> e : materials.entries()) {
+            MeasurementTolerance t = SemiTransparentProperties.tolerance(e.getValue());
+            if (t != null) {
+                out.put(e.getKey(), t);
+            }
+        }
+        return out;
+    }
+
     private static Material read(String name, JsonCursor m, Path caseDir, List<String> warnings)
             throws CaseException {
         Material base = readProperties(name, m, caseDir, warnings);

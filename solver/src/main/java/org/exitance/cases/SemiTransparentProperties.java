@@ -125,6 +125,21 @@ final class SemiTransparentProperties {
         return new Material(name, emissivity, passes ? transmissivity : null, description);
     }
 
+    /**
+     * The measurement tolerance of a material read by {@link #read} (so its keys are valid): the
+     * stated or default one when ε, ρ and τ are all given, else null.
+     */
+    static MeasurementTolerance tolerance(JsonCursor m) throws CaseException {
+        boolean all = (m.has("emissivity") || m.has("spectralEmissivity"))
+                && (m.has("transmissivity") || m.has("spectralTransmissivity"))
+                && (m.has("reflectivity") || m.has("spectralReflectivity"));
+        if (!all) {
+            return null;
+        }
+        return m.has("measurementTolerance") ? new MeasurementTolerance(m.field("measurementTolerance").fraction(), true)
+                : new MeasurementTolerance(DEFAULT_MEASUREMENT_TOLERANCE, false);
+    }
+
     private static boolean all(SpectralEmissivity[] p, java.util.function.Predicate<SpectralEmissivity> test) {
         for (SpectralEmissivity x : p) {
             if (x != null && !test.test(x)) {

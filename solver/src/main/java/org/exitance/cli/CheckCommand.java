@@ -91,9 +91,12 @@ final class CheckCommand implements Callable<Integer> {
         }
         c.description().covers().forEach((surface, cover) -> out.println("  covered: " + surface + " under "
                 + (cover.effective() ? "a pack of effective emittance " + Numbers.ratio(cover.effectiveEmittance())
-                : cover.layers() + " layer" + (cover.layers() == 1 ? "" : "s") + " of " + cover.layerMaterial().name())
+                : cover.layers() + " layer" + (cover.layers() == 1 ? "" : "s") + " of " + (cover.sharedLayerMaterial()
+                ? cover.layerMaterial(1).name() : String.join(", ", cover.layerMaterials().stream().map(m -> m.name()).toList())
+                + " (inner to outer)"))
                 + ", outer face '" + org.exitance.model.Cover.outerFace(surface) + "' (" + cover.outerMaterial().name()
                 + ")"));
+        printMaterialFacts(out, c);
         ExpectedValues expected = ExpectedReader.read(c.description());
         if (expected != null) {
             out.println("  validation case: " + expected.values().size() + " expected values from "
@@ -104,6 +107,36 @@ final class CheckCommand implements Callable<Integer> {
         }
         out.flush();
         return Runs.exitCode(c, spec.commandLine().getErr());
+    }
+
+    /**
+     * The materials whose ρ or τ changes with temperature (ρ = 1 − ε − τ, so also an opaque
+     * material whose ε does), and the windows checked against a measurement tolerance.
+     */
+    private static void printMaterialFacts(PrintWriter out, PreparedCase c) {
+        List<String> byT = new java.util.ArrayList<>();
+        for (org.exitance.model.Material m : c.model().materials()) {
+            var d = org.exitance.properties.TemperatureDependence.of(m);
+            List<String> which = new java.util.ArrayList<>();
+            if (d.transmissivity()) {
+                which.add("τ");
+            }
+            if (d.reflectivity()) {
+                which.add(m.semiTransparent() ? "ρ" : "ρ = 1 − ε");
+            }
+            if (!which.isEmpty()) {
+                byT.add(m.name() + " (" + String.join(", ", which) + ")");
+            }
+        }
+        if (!byT.isEmpty()) {
+            out.println("  temperature-dependent τ or ρ: " + String.join("; ", byT));
+        }
+        List<String> tol = new java.util.ArrayList<>();
+        c.description().measurementTolerances().forEach((name, t) -> tol.add(name + " "
+                + Numbers.ratio(t.value()) + (t.stated() ? " (measurementTolerance)" : " (default)")));
+        if (!tol.isEmpty()) {
+            out.println("  measured ε, ρ and τ, accepted within |α + ρ + τ − 1| ≤: " + String.join("; ", tol));
+        }
     }
 
     /** One line each for the two-sided plates and the windows: their face pairs, by the face with the condition. */

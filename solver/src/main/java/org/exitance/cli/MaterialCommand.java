@@ -33,7 +33,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /**
  * {@code exitance material FILE}: total emissivity ε(T) over a temperature range, total
  * absorptivity α for blackbody sources and a tabulated source spectrum, and α/ε; as a table,
- * JSON, and a PNG plot of ε(λ) with normalized Planck curves. Definitions: Siegel &amp; Howell,
+ * JSON, and a PNG plot of ε(λ), ρ(λ) and a window's τ(λ) with normalized Planck curves. Definitions: Siegel &amp; Howell,
  * Thermal Radiation Heat Transfer, 7th ed., Ch. 3; Incropera et al., 6th ed., Secs. 12.4–12.7.
  */
 @Command(name = "material", mixinStandardHelpOptions = true,
@@ -42,7 +42,7 @@ import picocli.CommandLine.Model.CommandSpec;
                 "FILE is a case (all its materials, or one with --name) or a material file"
                 + " {\"materials\": {...}} (see docs/case-format.md). Without a source option the source is a"
                 + " 5772 K blackbody (the sun, common practice).",
-                "The plot (--plot FILE.png) shows ε(λ) with normalized Planck curves on a log wavelength axis;"
+                "The plot (--plot FILE.png) shows ε(λ), ρ(λ) and a window's τ(λ) with normalized Planck curves on a log wavelength axis;"
                 + " PNG only (SVG would need a library this build does not include)."},
         footer = {"", "Example: exitance material cases/materials/white-paint.json --from-K 250 --to-K 400"
                 + " --step-K 50 --plot white-paint.png", "", ExitCodes.HELP})
@@ -87,7 +87,7 @@ final class MaterialCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Output output;
 
-    @Option(names = "--plot", paramLabel = "FILE.png", description = "Also draw ε(λ) and Planck curves into a PNG file.")
+    @Option(names = "--plot", paramLabel = "FILE.png", description = "Also draw ε(λ), ρ(λ), τ(λ) and Planck curves into a PNG file.")
     private Path plot;
 
     @Mixin
@@ -196,7 +196,8 @@ final class MaterialCommand implements Callable<Integer> {
             sub = (sub.isEmpty() ? "" : sub + " — ") + "Planck curves for " + shown.length + " of the "
                     + temperatures.length + " temperatures";
         }
-        String title = "Material " + m.name() + ": spectral emissivity and Planck curves";
+        String title = "Material " + m.name() + ": spectral emissivity, reflectivity"
+                + (m.semiTransparent() ? ", transmissivity" : "") + " and Planck curves";
         String subtitle = sub;
         OutputTarget.write(plot, force, stdout, ps -> {
             try {

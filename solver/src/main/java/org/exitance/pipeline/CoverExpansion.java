@@ -14,7 +14,7 @@ import org.exitance.spectral.GrayEmissivity;
 /**
  * Expands covered surfaces into their packs (model/Cover). A surface S keeps its name, material
  * and condition, and now faces only the first layer. Layer k is a two-sided opaque node with faces
- * {@code S.layer<k>.in} and {@code S.layer<k>.out} (S may be one face of a two-sided plate: the
+ * {@code S.layer<k>.in} and {@code S.layer<k>.out}, both of layer k's material (S may be one face of a two-sided plate: the
  * hot-zone wall of a vacuum furnace, covered on its outer face); the last layer's outer face is
  * {@code S.outer}, which takes S's place in the enclosure (its row and column of F) and the
  * external irradiation aimed at S. Every gap between consecutive sheets is a pair of infinite
@@ -72,8 +72,8 @@ final class CoverExpansion {
                 String in = c.effective() ? s.name() + ".cover.in" : s.name() + ".layer" + k + ".in";
                 String o = k == sheets ? Cover.outerFace(s.name()) : s.name() + ".layer" + k + ".out";
                 Material inner = c.effective() ? new Material(s.name() + " effective emittance",
-                        new GrayEmissivity(c.effectiveEmittance()), "") : c.layerMaterial();
-                Material outerMaterial = k == sheets ? c.outerMaterial() : c.layerMaterial();
+                        new GrayEmissivity(c.effectiveEmittance()), "") : c.layerMaterial(k);
+                Material outerMaterial = k == sheets ? c.outerMaterial() : c.layerMaterial(k);
                 out.add(new EnclosureSurface(in, inner, a, new BoundaryCondition.Adiabatic(), Double.NaN, null, o));
                 origin.add(-1);
                 gaps.add(new int[] {previous, out.size() - 1});

@@ -23,9 +23,13 @@ import org.exitance.spectral.source.SourceSpectrum;
  * @param sources      one normalized curve per source
  * @param transmissivity  τ(λ) of a window: one curve, or one per temperature when τ depends on
  *                        temperature; empty for an opaque material
+ * @param reflectivity    ρ(λ) = 1 − ε(λ) − τ(λ) (energy conservation with α = ε, Kirchhoff; for
+ *                        an opaque material ρ = 1 − ε): one curve, or one per temperature when ε or τ
+ *                        depends on temperature. A window's given ρ is stored this way, exactly
+ *                        (the reader keeps ε, ρ and τ on one grid where each is bilinear)
  */
 public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity, List<Curve> planck,
-                             List<Curve> sources, List<Curve> transmissivity) {
+                             List<Curve> sources, List<Curve> transmissivity, List<Curve> reflectivity) {
 
     /** Points per decade of wavelength on the sampling grid. */
     public static final int POINTS_PER_DECADE = 200;
@@ -55,13 +59,9 @@ public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity,
         }
     }
 
-    /** Curves of an opaque material. */
-    public SpectralCurves(double fromUm, double toUm, List<Curve> emissivity, List<Curve> planck, List<Curve> sources) {
-        this(fromUm, toUm, emissivity, planck, sources, List.of());
-    }
-
     public SpectralCurves {
         transmissivity = List.copyOf(transmissivity);
+        reflectivity = List.copyOf(reflectivity);
         emissivity = List.copyOf(emissivity);
         planck = List.copyOf(planck);
         sources = List.copyOf(sources);
@@ -136,7 +136,31 @@ public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity,
                 tau.add(new Curve("τ(λ) " + material.name(), Double.NaN, g, emissivity(tr, temperaturesK[0], g)));
             }
         }
-        return new SpectralCurves(from, to, eps, planck, src, tau);
+        return new SpectralCurves(from, to, eps, planck, src, tau, reflectivity(material, temperaturesK, from, to));
+    }
+
+    /** ρ(λ) = 1 − ε(λ) − τ(λ) on a grid holding the breakpoints of both, per temperature when either depends on it. */
+    private static List<Curve> reflectivity(Material material, double[] temperaturesK, double from, double to) {
+        SpectralEmissivity e = material.emissivity();
+        SpectralEmissivity tr = material.transmissivity();
+        double[] breaks = e.breakpointsUm();
+        if (tr != null) {
+            double[] b = tr.breakpointsUm();
+            breaks = Arrays.copyOf(breaks, breaks.length + b.length);
+            System.arraycopy(b, 0, breaks, breaks.length - b.length, b.length);
+        }
+        double[] g = grid(from, to, breaks);
+        boolean byT = e.dependsOnTemperature() || tr != null && tr.dependsOnTemperature();
+        List<Curve> rho = new ArrayList<>();
+        for (double t : byT ? temperaturesK : new double[] {temperaturesK[0]}) {
+            double[] y = emissivity(e, t, g);
+            for (int i = 0; i < y.length; i++) {
+                y[i] = 1 - y[i] - (tr == null ? 0 : tr.at(g[i], t));
+            }
+            String label = byT ? "ρ(λ) at " + BlackbodySource.kelvin(t) + " K" : "ρ(λ) " + material.name();
+            rho.add(new Curve(label, byT ? t : Double.NaN, g, y));
+        }
+        return rho;
     }
 
     /**
@@ -190,6 +214,6 @@ public record SpectralCurves(double fromUm, double toUm, List<Curve> emissivity,
         }
         g = Arrays.copyOf(g, k);
         Arrays.sort(g);
-        return g;
+        return Arrays.stream(g).distinct().toArray();
     }
 }

@@ -33,9 +33,12 @@ public record SurveyRow(double temperatureK, double totalEmissivity, double[] ab
         return !Double.isNaN(totalTransmissivity);
     }
 
-    /** For a window: total reflectivity ρ(T) = 1 − ε(T) − τ(T) for a blackbody at the surface's temperature. */
+    /**
+     * Total reflectivity for a blackbody at the surface's temperature: ρ(T) = 1 − ε(T) − τ(T) for a
+     * window, 1 − ε(T) for an opaque material (α = ε, Kirchhoff; α + ρ + τ = 1).
+     */
     public double totalReflectivity() {
-        return 1 - totalEmissivity - totalTransmissivity;
+        return 1 - totalEmissivity - (window() ? totalTransmissivity : 0);
     }
 
     @Override

@@ -48,8 +48,8 @@ public final class MaterialJsonWriter {
                 ro.put("totalEmissivity", r.totalEmissivity());
                 if (r.window()) {
                     ro.put("totalTransmissivity", r.totalTransmissivity());
-                    ro.put("totalReflectivity", r.totalReflectivity());
                 }
+                ro.put("totalReflectivity", r.totalReflectivity());
                 ArrayNode ab = ro.putArray("absorptivity");
                 for (int k = 0; k < m.sources().size(); k++) {
                     ObjectNode a = ab.addObject();

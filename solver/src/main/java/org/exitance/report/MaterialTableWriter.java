@@ -13,7 +13,7 @@ import org.exitance.spectral.source.SourceSpectrum;
 
 /**
  * Writes material property surveys as readable text: per material a table of surface
- * temperature, total emissivity, and α and α/ε for every source. Reads the surveys; computes
+ * temperature, total emissivity, total reflectivity (and a window's transmissivity), and α and α/ε for every source. Reads the surveys; computes
  * no physics.
  */
 public final class MaterialTableWriter {
@@ -71,8 +71,9 @@ public final class MaterialTableWriter {
         boolean window = !m.rows().isEmpty() && m.rows().get(0).window();
         List<String> headers = new ArrayList<>(List.of("T K", "ε"));
         if (window) {
-            headers.addAll(List.of("τ", "ρ"));
+            headers.add("τ");
         }
+        headers.add("ρ");
         for (IrradiationSource s : m.sources()) {
             headers.add("α " + column(s));
             headers.add("α/ε " + column(s));
@@ -88,8 +89,8 @@ public final class MaterialTableWriter {
                     Numbers.ratio(r.totalEmissivity())));
             if (window) {
                 cells.add(Numbers.ratio(r.totalTransmissivity()));
-                cells.add(Numbers.ratio(r.totalReflectivity()));
             }
+            cells.add(Numbers.ratio(r.totalReflectivity()));
             for (int k = 0; k < m.sources().size(); k++) {
                 cells.add(Numbers.ratio(r.absorptivity(k)));
                 cells.add(quotient(r.alphaOverEpsilon(k)));
@@ -100,7 +101,9 @@ public final class MaterialTableWriter {
             t.row(cells);
         }
         t.render(2).forEach(out::println);
-        if (window) {
+        if (!window) {
+            out.println("  (ρ: total reflectivity for a blackbody at T, ρ = 1 − ε for an opaque material)");
+        } else {
             out.println("  (τ, ρ: total transmissivity and reflectivity for a blackbody at T, ρ = 1 − ε − τ; τ for a"
                     + " source: the share of its radiation that passes)");
         }

@@ -25,7 +25,7 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
- * Draws ε(λ) of a material with normalized Planck curves E_bλ/E_bλ,max of the chosen
+ * Draws ε(λ), ρ(λ) and (for a window) τ(λ) of a material with normalized Planck curves E_bλ/E_bλ,max of the chosen
  * temperatures and of the sources, on a logarithmic wavelength axis, as a PNG image
  * (JFreeChart 1.5.6). Only PNG: JFreeChart writes SVG only with the separate JFreeSVG library,
  * which this build does not include. Draws the given curves; computes no physics.
@@ -43,6 +43,8 @@ public final class SpectrumPlot {
     private static final Color EMISSIVITY = new Color(20, 20, 20);
     /** Transmissivity: a blue that stays distinct in grey print by its long-dash pattern. */
     private static final Color TRANSMISSIVITY = new Color(0, 90, 170);
+    /** Reflectivity: a brown told apart in grey print by its round dots. */
+    private static final Color REFLECTIVITY = new Color(140, 70, 0);
 
     static {
         System.setProperty("java.awt.headless", "true");
@@ -87,6 +89,12 @@ public final class SpectrumPlot {
             r.setSeriesPaint(n, TRANSMISSIVITY);
             r.setSeriesStroke(n++, dashed(2.4f, 14f, 5f));
         }
+        boolean singleRho = curves.reflectivity().size() == 1;
+        for (Curve c : curves.reflectivity()) {
+            add(data, c, n);
+            r.setSeriesPaint(n, singleRho ? REFLECTIVITY : ramp(c.temperatureK(), tLo, tHi));
+            r.setSeriesStroke(n++, dotted(2.8f));
+        }
         for (Curve c : curves.planck()) {
             add(data, c, n);
             r.setSeriesPaint(n, ramp(c.temperatureK(), tLo, tHi));
@@ -107,8 +115,8 @@ public final class SpectrumPlot {
         x.setNumberFormatOverride(new DecimalFormat("0.###"));
         x.setRange(curves.fromUm() * 0.999, curves.toUm() * 1.001); // keeps the end decades' labels
         NumberAxis y = new NumberAxis(curves.transmissivity().isEmpty()
-                ? "Spectral emissivity ε_λ  and  normalized E_bλ / E_bλ,max  (–)"
-                : "Spectral ε_λ, transmissivity τ_λ  and  normalized E_bλ / E_bλ,max  (–)");
+                ? "Spectral ε_λ, reflectivity ρ_λ  and  normalized E_bλ / E_bλ,max  (–)"
+                : "Spectral ε_λ, ρ_λ, τ_λ  and  normalized E_bλ / E_bλ,max  (–)");
         y.setRange(0.0, 1.05);
         y.setTickUnit(new NumberTickUnit(0.1));
 
@@ -130,7 +138,9 @@ public final class SpectrumPlot {
         }
         // bottom titles stack toward the plot: the caution goes at the very bottom, the key above it
         chart.addSubtitle(text(Caution.SHORT, 10, RectangleEdge.BOTTOM, HorizontalAlignment.LEFT));
-        chart.addSubtitle(text("Dashed: Planck curves E_bλ/E_bλ,max of the listed temperatures. Dash-dot: blackbody"
+        chart.addSubtitle(text("Thick solid: ε_λ. Round dots: "
+                + (curves.transmissivity().isEmpty() ? "ρ_λ = 1 − ε_λ (opaque, α = ε)." : "ρ_λ = 1 − ε_λ − τ_λ (α = ε). Long dashes: τ_λ.")
+                + " Dashed: Planck curves E_bλ/E_bλ,max of the listed temperatures. Dash-dot: blackbody"
                 + " sources; thin solid: a tabulated source; each scaled to its peak. Beyond a table's ends ε holds its"
                 + " end values.", 11, RectangleEdge.BOTTOM, HorizontalAlignment.LEFT));
         return chart;
@@ -164,6 +174,11 @@ public final class SpectrumPlot {
 
     private static int mix(int a, int b, double f) {
         return (int) Math.round(a + (b - a) * f);
+    }
+
+    /** Round dots, so the curve reads apart from solid and dashed ones without colour. */
+    private static Stroke dotted(float width) {
+        return new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f, new float[] {0.1f, 2.4f * width}, 0f);
     }
 
     private static Stroke dashed(float width, float... dash) {

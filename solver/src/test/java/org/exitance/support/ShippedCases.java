@@ -25,6 +25,7 @@ public final class ShippedCases {
             "heat-treating-chamber.json",
             "muffle-with-part-stl.json",
             "oven-cavity-obj.json",
+            "oven-shelf-two-sided.json",
             "roller-hearth-section.json",
             "selective-absorber-audit.json",
             "spacecraft-box-blankets.json",
