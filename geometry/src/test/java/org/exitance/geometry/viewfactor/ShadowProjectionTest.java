@@ -19,6 +19,7 @@ import org.exitance.geometry.mesh.ObjReader;
 import org.exitance.geometry.mesh.StlReader;
 import org.exitance.geometry.shape.Enclosures;
 import org.exitance.geometry.shape.Facing;
+import org.exitance.geometry.shape.Shapes;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.locationtech.jts.geom.Coordinate;
@@ -148,6 +149,24 @@ class ShadowProjectionTest {
             assertThat(r.methodCounts().raySampled()).isZero();
             assertThat(r.facetClosure().maxRowSumError()).as("%d facets", r.facetCount()).isLessThan(1e-5);
         }
+    }
+
+    /**
+     * A billet standing free in a cylindrical hot zone (the geometry that motivated the method:
+     * curved occluder, many silhouette edges): closed, so every facet row must sum to 1; the
+     * rows close within the estimate, and the estimate meets the default tolerance.
+     */
+    @Test
+    void aBilletInAHotZoneClosesWithinItsEstimate() {
+        List<Surface> s = new ArrayList<>(Enclosures.cylindricalCavity(Vec3.ZERO, Vec3.Z, 0.5, 1.0, 12, 2, 1));
+        s.add(new Surface("billet", Shapes.cylinderWall(new Vec3(0, 0, 0.3), Vec3.Z, 0.15, 0.4, 8, 1, Facing.OUTWARD)));
+        s.add(new Surface("billet_top", Shapes.disc(new Vec3(0, 0, 0.7), Vec3.Z, 0.15, 1, 8)));
+        s.add(new Surface("billet_bottom", Shapes.disc(new Vec3(0, 0, 0.3), new Vec3(0, 0, -1), 0.15, 1, 8)));
+        ViewFactorResult r = ViewFactorCalculator.compute(Scene.of(s), ViewFactorOptions.defaults(), ProgressListener.NONE);
+        assertThat(r.methodCounts().partlyHidden()).isPositive();
+        assertThat(r.methodCounts().raySampled()).isZero();
+        assertThat(r.maxRowErrorEstimate()).isLessThan(1e-5);
+        assertThat(r.facetClosure().maxRowSumError()).isLessThan(r.maxRowErrorEstimate());
     }
 
     static int nearest(FacetTable t, double x, double y, double z, double ny) {
