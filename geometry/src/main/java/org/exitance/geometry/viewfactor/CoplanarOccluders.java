@@ -34,6 +34,8 @@ final class CoplanarOccluders {
     private final Geometry[] region;
     /** Per group: the convex outline of the merged face (packed xyz), or null. */
     private final double[][] merged;
+    /** Per group: the same outline in the plane's (u, v) coordinates, or null. */
+    private final double[][] mergedUv;
     /** Per group: which way its facets face (see {@link #facing}). */
     private final int[] facing;
     private final GeometryFactory factory = new GeometryFactory();
@@ -77,9 +79,20 @@ final class CoplanarOccluders {
         frame = frames.toArray(new double[0][]);
         region = new Geometry[frame.length];
         merged = new double[frame.length][];
+        mergedUv = new double[frame.length][];
         for (int g = 0; g < region.length; g++) {
             region[g] = UnaryUnionOp.union(members.get(g));
             merged[g] = convexOutline(region[g], frame[g], 1e-9 * t.sceneSize);
+            if (merged[g] != null) {
+                double[] m3 = merged[g], fr = frame[g];
+                double[] uv = new double[2 * (m3.length / 3)];
+                for (int k = 0; k < uv.length / 2; k++) {
+                    Coordinate c = project(fr, m3[3 * k], m3[3 * k + 1], m3[3 * k + 2]);
+                    uv[2 * k] = c.x;
+                    uv[2 * k + 1] = c.y;
+                }
+                mergedUv[g] = uv;
+            }
         }
         facing = new int[frame.length];
         for (int f = 0; f < t.count; f++) {
@@ -246,11 +259,33 @@ final class CoplanarOccluders {
                     points[m++] = project(fr, ax + s * (bx - ax), ay + s * (by - ay), az + s * (bz - az));
                 }
             }
+            double[] uv = mergedUv[g];
+            if (uv != null) {
+                // a convex face: the hull of the points is inside it if every point is
+                return insideConvex(uv, points, m, 1e-12 * t.sceneSize);
+            }
             Geometry hull = new ConvexHull(java.util.Arrays.copyOf(points, m), factory).getConvexHull();
             if (prepared[g] == null) {
                 prepared[g] = PreparedGeometryFactory.prepare(region[g]);
             }
             return prepared[g].covers(hull);
+        }
+
+        /** @return whether every point lies inside (or on) the counter-clockwise convex outline uv */
+        private boolean insideConvex(double[] uv, Coordinate[] pts, int m, double tol) {
+            int n = uv.length / 2;
+            for (int k = 0; k < m; k++) {
+                double x = pts[k].x, y = pts[k].y;
+                for (int e = 0; e < n; e++) {
+                    int f = (e + 1) % n;
+                    double ex = uv[2 * f] - uv[2 * e], ey = uv[2 * f + 1] - uv[2 * e + 1];
+                    double cross = ex * (y - uv[2 * e + 1]) - ey * (x - uv[2 * e]);
+                    if (cross < -tol * Math.hypot(ex, ey)) {
+                        return false;
+                    }
+                }
+            }
+            return true;
         }
 
         /** @return +1 all vertices beyond tol above the plane, −1 all below, 0 otherwise */
