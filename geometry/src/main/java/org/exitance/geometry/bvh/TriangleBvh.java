@@ -253,7 +253,7 @@ public final class TriangleBvh {
 
     /**
      * The owners of every triangle that may intersect the convex region bounded by the planes
-     * (same test as {@link #mayIntersect}), each owner once, in ascending order.
+     * (same test as {@link #mayIntersect}), each owner once, in the order found.
      *
      * @param planes packed (nx, ny, nz, d); outside means n·x − d &gt; 0; not modified
      * @param planeCount number of planes
@@ -298,7 +298,6 @@ public final class TriangleBvh {
                 stack[sp++] = node + 1;
             }
         }
-        java.util.Arrays.sort(out, 0, found);
         return found;
     }
 

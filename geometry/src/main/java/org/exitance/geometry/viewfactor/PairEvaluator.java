@@ -127,7 +127,7 @@ final class PairEvaluator {
             counters[order == 0 ? CONTOUR : QUADRATURE]++;
             return s;
         }
-        double v = shadow.exchangeArea(p, q, s, this::unobstructed, visibilityTolerance * s);
+        double v = shadow.exchangeArea(p, q, s, this::unobstructed, visibilityTolerance * s, shaft);
         if (!Double.isNaN(v)) {
             lastError += shadow.lastError;
         } else {

@@ -76,6 +76,7 @@ final class ShadowIntegral {
     private final EventLines events;
     private final Shaft shaft = new Shaft();
     private final Poly backup = new Poly();
+    private Shaft rootShaft;
     private final TriangleBvh bvh;
     private final CoplanarOccluders.Prepared planes;
     private final ConvexOccluders.View convex;
@@ -127,11 +128,14 @@ final class ShadowIntegral {
      * @param exact A_p F_pq without obstruction (m²)
      * @param unobstructedOfPiece the same for a piece of p
      * @param tolerance target absolute error (m²)
+     * @param pairShaft the hull of p and q, already built (not modified)
      * @return A_p F_pq with obstruction (m²), or NaN if a point's visible part had more than
      *         {@value VisiblePart#MAX_PIECES} pieces (then use another method)
      */
-    double exchangeArea(Poly p, Poly q, double exact, Unobstructed unobstructedOfPiece, double tolerance) {
+    double exchangeArea(Poly p, Poly q, double exact, Unobstructed unobstructedOfPiece, double tolerance,
+            Shaft pairShaft) {
         overflow = false;
+        rootShaft = pairShaft;
         unobstructed = unobstructedOfPiece;
         leaves[0].copyFrom(p);
         order[0] = ORDER;
@@ -209,8 +213,14 @@ final class ShadowIntegral {
      */
     private void evaluate(int c, Poly q, double exact) {
         Poly p = leaves[c];
-        shaft.build(p, q);
-        int count = bvh.collect(shaft.planes, shaft.count, shaft.tolerance, p.facet, q.facet, occluders);
+        Shaft hull = shaft;
+        if (rootShaft != null) {
+            hull = rootShaft; // the first leaf is the whole emitter: the pair's hull, already built
+            rootShaft = null;
+        } else {
+            shaft.build(p, q);
+        }
+        int count = bvh.collect(hull.planes, hull.count, hull.tolerance, p.facet, q.facet, occluders);
         if (count < 0) {
             overflow = true;
             return;
