@@ -85,7 +85,10 @@ final class Shaft {
             } else if (s < -tolerance) {
                 below = true;
             }
+            if (above && below) {
+                return 2;
+            }
         }
-        return above && below ? 2 : (above ? 1 : (below ? -1 : 0));
+        return above ? 1 : (below ? -1 : 0);
     }
 }
