@@ -107,6 +107,13 @@ final class SolveCommand implements Callable<Integer> {
                     node.set("audit", arr.get(0));
                 }
             }
+            if (c.viewFactors() != null) {
+                com.fasterxml.jackson.databind.node.ObjectNode vf = node.putObject("viewFactorAccuracy");
+                vf.put("tolerance", c.viewFactorTolerance());
+                vf.put("toleranceMet", c.shortfall() == null);
+                vf.put("maxRowErrorEstimate", c.viewFactors().maxRowErrorEstimate());
+                vf.put("maxRowSumDeviation", c.viewFactors().maxRowSumDeviation());
+            }
             String text = SolveJsonWriter.MAPPER.writeValueAsString(node);
             OutputTarget.write(output.file(), force, stdout, ps -> ps.println(text));
             if (!quiet) {
@@ -114,12 +121,21 @@ final class SolveCommand implements Callable<Integer> {
                 c.warnings().stream().filter(w -> !w.equals(c.shortfall()))
                         .forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));
             }
-        } else if (variants) {
-            OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
-                    AuditTableWriter.summaryLines(audits), ps));
         } else {
-            OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
-                    c.warnings(), AuditTableWriter.summaryLines(audits), ps));
+            List<String> extra = new java.util.ArrayList<>();
+            if (c.viewFactors() != null && c.shortfall() == null) {
+                extra.add("View factors: within the tolerance " + org.exitance.report.Numbers.small(c.viewFactorTolerance())
+                        + " on facet rows (estimated error " + org.exitance.report.Numbers.small(
+                        c.viewFactors().maxRowErrorEstimate()) + ")");
+            }
+            extra.addAll(AuditTableWriter.summaryLines(audits));
+            if (variants) {
+                OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
+                        extra, ps));
+            } else {
+                OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
+                        c.warnings(), extra, ps));
+            }
         }
         return Runs.exitCode(c, spec.commandLine().getErr());
     }

@@ -42,6 +42,14 @@ class ViewFactorToleranceTest {
         assertThat(r.exitCode()).as(r.err()).isZero();
         assertThat(r.err()).doesNotContain("tolerance");
         assertThat(r.out()).contains("Tolerance 1.00e-05 on facet rows: met");
+        CliRun solve = CliRun.of("solve", c.toString());
+        assertThat(solve.exitCode()).isZero();
+        assertThat(solve.out()).contains("View factors: within the tolerance 1.00e-05 on facet rows");
+        CliRun json = CliRun.of("solve", "--json", c.toString());
+        com.fasterxml.jackson.databind.JsonNode acc = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(json.out()).get("viewFactorAccuracy");
+        assertThat(acc.get("toleranceMet").asBoolean()).isTrue();
+        assertThat(acc.get("maxRowErrorEstimate").asDouble()).isLessThan(1e-5);
     }
 
     @Test
