@@ -117,7 +117,7 @@ final class ViewFactorsCommand implements Callable<Integer> {
                 + "; largest reciprocity error " + Numbers.small(v.maxReciprocityError()));
         out.println("Error estimate: largest facet row " + Numbers.small(v.maxRowErrorEstimate())
                 + " (sum of its pairs' estimates)");
-        out.println("Tolerance " + Numbers.small(tolerance(c)) + " on facet rows: "
+        out.println("Tolerance " + Numbers.small(c.viewFactorTolerance()) + " on facet rows: "
                 + (c.shortfall() == null ? "met" : "NOT met (" + c.shortfall() + ")"));
         out.println("Methods: " + v.methodSummary());
         out.println("Closure enforcement: " + v.smoothing());
@@ -137,11 +137,6 @@ final class ViewFactorsCommand implements Callable<Integer> {
             r.append(',').append(v.environmentFactors()[i]);
             ps.println(r);
         }
-    }
-
-    /** @return the view-factor tolerance the case was computed to (the option's, else the case's) */
-    private static double tolerance(PreparedCase c) {
-        return c.viewFactorTolerance();
     }
 
     private static ObjectNode toJson(ComputedViewFactors v, Path caseFile, PreparedCase c) {
@@ -168,7 +163,7 @@ final class ViewFactorsCommand implements Callable<Integer> {
         d.put("worstRow", v.worstRow());
         d.put("maxReciprocityError", v.maxReciprocityError());
         d.put("maxRowErrorEstimate", v.maxRowErrorEstimate());
-        d.put("tolerance", tolerance(c));
+        d.put("tolerance", c.viewFactorTolerance());
         d.put("toleranceMet", c.shortfall() == null);
         d.put("methods", v.methodSummary());
         d.put("closureEnforcement", v.smoothing());

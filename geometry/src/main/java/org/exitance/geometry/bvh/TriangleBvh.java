@@ -226,29 +226,7 @@ public final class TriangleBvh {
      * @return true if some triangle may intersect the region
      */
     public boolean mayIntersect(double[] planes, int planeCount, double tol, int skipA, int skipB) {
-        if (owner.length == 0) {
-            return false;
-        }
-        int[] stack = new int[64];
-        int sp = 0;
-        stack[sp++] = 0;
-        while (sp > 0) {
-            int node = stack[--sp];
-            if (boxOutside(node, planes, planeCount, tol)) {
-                continue;
-            }
-            if (count[node] > 0) {
-                for (int t = first[node], end = first[node] + count[node]; t < end; t++) {
-                    if (owner[t] != skipA && owner[t] != skipB && !triangleOutside(9 * t, planes, planeCount, tol)) {
-                        return true;
-                    }
-                }
-            } else {
-                stack[sp++] = first[node];
-                stack[sp++] = node + 1;
-            }
-        }
-        return false;
+        return gather(planes, planeCount, tol, skipA, skipB, null) != 0;
     }
 
     /**
@@ -264,6 +242,14 @@ public final class TriangleBvh {
      * @return the number of owners written, or −1 if there were more than {@code out.length}
      */
     public int collect(double[] planes, int planeCount, double tol, int skipA, int skipB, int[] out) {
+        return gather(planes, planeCount, tol, skipA, skipB, out);
+    }
+
+    /**
+     * The traversal behind {@link #mayIntersect} (out null: stop at the first triangle, return 1)
+     * and {@link #collect} (out given: distinct owners into it, −1 past its length).
+     */
+    private int gather(double[] planes, int planeCount, double tol, int skipA, int skipB, int[] out) {
         int found = 0;
         if (owner.length == 0) {
             return 0;
@@ -281,6 +267,9 @@ public final class TriangleBvh {
                     int o = owner[t];
                     if (o == skipA || o == skipB || triangleOutside(9 * t, planes, planeCount, tol)) {
                         continue;
+                    }
+                    if (out == null) {
+                        return 1;
                     }
                     boolean seen = false;
                     for (int k = 0; k < found && !seen; k++) {

@@ -30,6 +30,9 @@ final class EventLines {
     /** The region of the candidate's plane where its event is real: apex + αA + βB. */
     private final double[] apex = new double[3], dirA = new double[3], dirB = new double[3];
     private boolean hasWedge, sumAtLeastOne;
+    // scratch of realOnLeaf: where the plane crosses the leaf, their wedge coordinates, the λ range
+    private final double[] crossX = new double[2], crossY = new double[2], crossZ = new double[2];
+    private final double[] alpha = new double[2], beta = new double[2], interval = new double[2];
 
     EventLines(FacetTable t, SilhouetteEdges edges, CoplanarOccluders groups) {
         this.t = t;
@@ -154,7 +157,7 @@ final class EventLines {
             return true;
         }
         int found = 0;
-        double[] sx = new double[2], sy = new double[2], sz = new double[2];
+        double[] sx = crossX, sy = crossY, sz = crossZ;
         for (int k = 0; k < leaf.n && found < 2; k++) {
             int l = (k + 1) % leaf.n;
             double a = mx * leaf.xyz[3 * k] + my * leaf.xyz[3 * k + 1] + mz * leaf.xyz[3 * k + 2] - d;
@@ -175,7 +178,7 @@ final class EventLines {
         if (!(det > 1e-24 * aa * bb)) {
             return true;
         }
-        double[] al = new double[2], be = new double[2];
+        double[] al = alpha, be = beta;
         for (int k = 0; k < 2; k++) {
             double rx = sx[k] - apex[0], ry = sy[k] - apex[1], rz = sz[k] - apex[2];
             double ra = rx * dirA[0] + ry * dirA[1] + rz * dirA[2], rb = rx * dirB[0] + ry * dirB[1] + rz * dirB[2];
@@ -183,7 +186,9 @@ final class EventLines {
             be[k] = (aa * rb - ab * ra) / det;
         }
         double tol = 1e-9;
-        double[] lohi = {0, 1};
+        double[] lohi = interval;
+        lohi[0] = 0;
+        lohi[1] = 1;
         limit(lohi, al[0] + tol, al[1] - al[0]);
         limit(lohi, be[0] + tol, be[1] - be[0]);
         if (sumAtLeastOne) {

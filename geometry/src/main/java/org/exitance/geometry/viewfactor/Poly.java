@@ -171,6 +171,19 @@ final class Poly {
     }
 
     /**
+     * Bisects this polygon by the plane through its centroid across its long axis: this keeps
+     * one half, {@code other} (overwritten with a copy first) the other. Modifies this, other,
+     * {@code axis} (3) and {@code scratch}.
+     */
+    void bisectLongAxis(Poly other, double[] axis, double[] scratch) {
+        other.copyFrom(this);
+        longAxis(axis);
+        double d = axis[0] * cx + axis[1] * cy + axis[2] * cz;
+        clip(axis[0], axis[1], axis[2], d, scratch);
+        other.clip(-axis[0], -axis[1], -axis[2], -d, scratch);
+    }
+
+    /**
      * Direction of the largest extent: from the centroid to the farthest vertex (unit). Writes
      * {@code dir[0..2]} (modified).
      */

@@ -91,10 +91,6 @@ final class ShadowIntegral {
     private boolean overflow;
     /** Error estimate of the last call (m²). */
     double lastError;
-    /** Emitter pieces (leaves of the bisection) of the last call. */
-    int lastLeaves;
-    /** Leaves proved hidden by {@link CoplanarOccluders} (running count). */
-    long certifiedHidden;
 
     /**
      * @param t the facets
@@ -170,7 +166,7 @@ final class ShadowIntegral {
                 leaf.clip(e[0], e[1], e[2], e[3], scratch);
                 other.clip(-e[0], -e[1], -e[2], -e[3], scratch);
             } else {
-                split(leaf, other);
+                leaf.bisectLongAxis(other, axis, scratch);
             }
             if (leaf.n < 3 || other.n < 3) {
                 // the cut left nothing on one side (rounding): undo it, refine otherwise next time
@@ -193,16 +189,7 @@ final class ShadowIntegral {
             s += value[c];
         }
         lastError = err;
-        lastLeaves = n;
         return s;
-    }
-
-    /** Bisects {@code a} across its long axis: a keeps one half, b (a copy of a) the other. */
-    private void split(Poly a, Poly b) {
-        a.longAxis(axis);
-        double d = axis[0] * a.cx + axis[1] * a.cy + axis[2] * a.cz;
-        a.clip(axis[0], axis[1], axis[2], d, scratch);
-        b.clip(-axis[0], -axis[1], -axis[2], -d, scratch);
     }
 
     /**
@@ -239,7 +226,6 @@ final class ShadowIntegral {
             value[c] = 0;
             error[c] = 0;
             hasEvent[c] = false;
-            certifiedHidden++;
             return;
         }
         minFraction = 1;

@@ -71,11 +71,7 @@ final class SplitPairs {
         Poly big = p.radius >= q.radius ? p : q, other = big == p ? q : p;
         Poly a = pool[2 * depth], b = pool[2 * depth + 1];
         a.copyFrom(big);
-        b.copyFrom(big);
-        big.longAxis(axis);
-        double d = axis[0] * big.cx + axis[1] * big.cy + axis[2] * big.cz;
-        a.clip(axis[0], axis[1], axis[2], d, scratch);
-        b.clip(-axis[0], -axis[1], -axis[2], -d, scratch);
+        a.bisectLongAxis(b, axis, scratch);
         double sum = 0;
         for (Poly half : new Poly[] {a, b}) {
             if (half.n >= 3 && half.area > 0) {
