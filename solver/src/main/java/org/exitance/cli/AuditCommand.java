@@ -58,6 +58,9 @@ final class AuditCommand implements Callable<Integer> {
     private SharedOptions.Force force;
 
     @Mixin
+    private SharedOptions.Report report;
+
+    @Mixin
     private SharedOptions.BandEdges bandEdges;
 
     @Mixin
@@ -74,6 +77,8 @@ final class AuditCommand implements Callable<Integer> {
         BandSet override = bandEdges.bands();
         double tolerance = bandTolerance.fraction();
         OutputTarget.check(output.file(), force);
+        Path reportFile = report.file(caseFile, "audit");
+        OutputTarget.check(reportFile, force);
         PreparedCase c = Runs.load(caseFile, vfTolerance.request());
         RadiationCase base = c.model();
         List<String> names = base.loadCases().stream().map(LoadCase::name).toList();
@@ -108,6 +113,10 @@ final class AuditCommand implements Callable<Integer> {
                     }
                 });
             }
+        }
+        if (reportFile != null) {
+            Reports.write(reportFile, force, org.exitance.report.html.HtmlReport.audit(Reports.caseOf(caseFile, c),
+                    audits));
         }
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);

@@ -93,6 +93,9 @@ final class MaterialCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Force force;
 
+    @Mixin
+    private SharedOptions.Report report;
+
     @Override
     public Integer call() throws Exception {
         checkTargets();
@@ -116,6 +119,11 @@ final class MaterialCommand implements Callable<Integer> {
                 StandardCharsets.UTF_8);
         if (plot != null) {
             writePlot(materials.get(0), temperatures, sources, stdout);
+        }
+        Path reportFile = report.file(file, "material");
+        if (reportFile != null) {
+            Reports.write(reportFile, force, org.exitance.report.html.HtmlReport.material(file.toString(), mf.title(),
+                    surveys, temperatures, mf.warnings()));
         }
         if (json.on()) {
             com.fasterxml.jackson.databind.node.ObjectNode doc =
@@ -149,7 +157,8 @@ final class MaterialCommand implements Callable<Integer> {
                 throw new UserError(plot + ": --plot and --output name the same file", ExitCodes.BAD_INPUT);
             }
         }
-        for (Path p : new Path[] {plot, output.file()}) {
+        Path reportFile = report.file(file, "material");
+        for (Path p : new Path[] {plot, output.file(), reportFile}) {
             OutputTarget.check(p, force);
         }
     }

@@ -59,6 +59,34 @@ final class SharedOptions {
         }
     }
 
+    /**
+     * {@code --report DIR}: also write the offline HTML report into DIR, as
+     * {@code CASE-solve.html}, {@code CASE-audit.html} or {@code FILE-material.html}.
+     */
+    static final class Report {
+        @Option(names = "--report", paramLabel = "DIR", descriptionKey = "report",
+                description = "Also write an offline HTML report into DIR.")
+        private Path dir;
+
+        /**
+         * The report's file for an input file, or null without {@code --report}.
+         *
+         * @param input the case or material file
+         * @param kind  "solve", "audit" or "material"
+         */
+        Path file(Path input, String kind) {
+            if (dir == null) {
+                return null;
+            }
+            if (java.nio.file.Files.exists(dir) && !java.nio.file.Files.isDirectory(dir)) {
+                throw new UserError("--report " + dir + ": is not a directory (name a directory for the report)",
+                        ExitCodes.BAD_INPUT);
+            }
+            String stem = input.getFileName().toString().replaceAll("(?i)\\.json$", "");
+            return dir.resolve(stem + "-" + kind + ".html");
+        }
+    }
+
     /** {@code --gray}: one band. */
     static final class Gray {
         @Option(names = "--gray", descriptionKey = "gray", description = "Solve with one band.")

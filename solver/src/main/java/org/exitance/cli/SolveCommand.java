@@ -48,6 +48,9 @@ final class SolveCommand implements Callable<Integer> {
     private SharedOptions.Force force;
 
     @Mixin
+    private SharedOptions.Report report;
+
+    @Mixin
     private SharedOptions.BandEdges bandEdges;
 
     @Mixin
@@ -80,6 +83,8 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         BandSet override = bandEdges.bands(gray);
         OutputTarget.check(output.file(), force);
+        Path reportFile = report.file(caseFile, "solve");
+        OutputTarget.check(reportFile, force);
         PreparedCase c = Runs.load(caseFile, vfTolerance.request());
         org.exitance.thermal.SolverChoice choice;
         try {
@@ -91,6 +96,10 @@ final class SolveCommand implements Callable<Integer> {
                 bandTolerance.fraction(), choice);
         boolean variants = !c.model().loadCases().isEmpty();
         List<AuditResult> audits = noAudit || gray.on() ? List.of() : audit(c, results);
+        if (reportFile != null) {
+            Reports.write(reportFile, force, org.exitance.report.html.HtmlReport.solve(Reports.caseOf(caseFile, c),
+                    results, audits));
+        }
         PrintStream stdout = new PrintStream(new WriterOutputStream(spec.commandLine().getOut()), true,
                 StandardCharsets.UTF_8);
         if (json.on()) {

@@ -39,6 +39,37 @@ public final class AuditPlot {
 
     /** Writes one PNG; {@code out} is not closed. */
     public static void writePng(String title, AuditResult a, OutputStream out) throws IOException {
+        List<JFreeChart> charts = charts(title, a);
+        BufferedImage img = new BufferedImage(WIDTH_PX, CHART_HEIGHT_PX * charts.size(), BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = img.createGraphics();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        draw(charts, g);
+        g.dispose();
+        ImageIO.write(img, "png", out);
+    }
+
+    /** Width of the drawing in pixels. */
+    public static int widthPx() {
+        return WIDTH_PX;
+    }
+
+    /** Height of the drawing of these charts in pixels. */
+    public static int heightPx(List<JFreeChart> charts) {
+        return CHART_HEIGHT_PX * charts.size();
+    }
+
+    /** Draws the charts one above the other, each {@link #widthPx()} wide, from the top left of {@code g}. */
+    public static void draw(List<JFreeChart> charts, Graphics2D g) {
+        for (int i = 0; i < charts.size(); i++) {
+            charts.get(i).draw(g, new Rectangle2D.Double(0, i * CHART_HEIGHT_PX, WIDTH_PX, CHART_HEIGHT_PX));
+        }
+    }
+
+    /**
+     * The audit's charts: net heat of the fixed-temperature surfaces, temperatures of the solved
+     * ones (each only when there are such surfaces), the caution under the last.
+     */
+    public static List<JFreeChart> charts(String title, AuditResult a) {
         DefaultCategoryDataset heat = new DefaultCategoryDataset();
         DefaultCategoryDataset temp = new DefaultCategoryDataset();
         for (AuditRow r : a.rows()) {
@@ -65,14 +96,7 @@ public final class AuditPlot {
         note.setPosition(RectangleEdge.BOTTOM);
         note.setHorizontalAlignment(HorizontalAlignment.LEFT);
         last.addSubtitle(note);
-        BufferedImage img = new BufferedImage(WIDTH_PX, CHART_HEIGHT_PX * charts.size(), BufferedImage.TYPE_INT_RGB);
-        Graphics2D g = img.createGraphics();
-        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-        for (int i = 0; i < charts.size(); i++) {
-            charts.get(i).draw(g, new Rectangle2D.Double(0, i * CHART_HEIGHT_PX, WIDTH_PX, CHART_HEIGHT_PX));
-        }
-        g.dispose();
-        ImageIO.write(img, "png", out);
+        return charts;
     }
 
     private static void add(DefaultCategoryDataset d, double v, String series, String label) {

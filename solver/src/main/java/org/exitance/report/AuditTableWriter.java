@@ -101,7 +101,7 @@ public final class AuditTableWriter {
     }
 
     /** One flagged surface's cause in words and numbers. */
-    static String causeLine(AuditRow r) {
+    public static String causeLine(AuditRow r) {
         GrayCause c = r.cause();
         if (c.kind() == GrayCause.Kind.OTHER_SURFACES) {
             return r.surface() + ": is gray (ε = " + Numbers.ratio(c.emissivityAtOwnTemperature()) + " at every wavelength),"

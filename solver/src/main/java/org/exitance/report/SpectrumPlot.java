@@ -27,8 +27,8 @@ import org.jfree.data.xy.XYSeriesCollection;
 /**
  * Draws ε(λ), ρ(λ) and (for a window) τ(λ) of a material with normalized Planck curves E_bλ/E_bλ,max of the chosen
  * temperatures and of the sources, on a logarithmic wavelength axis, as a PNG image
- * (JFreeChart 1.5.6). Only PNG: JFreeChart writes SVG only with the separate JFreeSVG library,
- * which this build does not include. Draws the given curves; computes no physics.
+ * (JFreeChart 1.5.6); the HTML report draws the same chart as SVG ({@link #chart}, JFreeSVG). Draws the
+ * given curves; computes no physics.
  */
 public final class SpectrumPlot {
     /** Image size in pixels. */
@@ -66,7 +66,8 @@ public final class SpectrumPlot {
         ChartUtils.writeChartAsPNG(out, chart(title, subtitle, curves), WIDTH_PX, HEIGHT_PX);
     }
 
-    static JFreeChart chart(String title, String subtitle, SpectralCurves curves) {
+    /** The chart {@link #writePng} draws, for a writer that renders it in another format (the HTML report's SVG). */
+    public static JFreeChart chart(String title, String subtitle, SpectralCurves curves) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
         r.setDrawSeriesLineAsPath(true); // one path per curve, so dash patterns run along it

@@ -50,6 +50,8 @@ class PackageRulesTest {
         ALLOWED.put("validation", List.of("model", "bands", "thermal", "result", "cases", "pipeline"));
         ALLOWED.put("report", List.of("spectral", "spectral.source", "model", "result", "audit", "properties",
                 "sensitivity"));
+        ALLOWED.put("report.html", List.of("spectral", "spectral.source", "model", "result", "audit", "properties",
+                "report", "geometry.."));
         ALLOWED.put("cli", List.of("..")); // the command line may use everything
     }
 
