@@ -30,10 +30,14 @@ import org.exitance.spectral.SpectralEmissivity;
  * @param sourceAbsorptivity    [source][surface], each surface's band absorptivity for the source's
  *                              own spectrum where the source delivers power in the band (else 0),
  *                              whatever {@link ExternalAbsorption} the network uses
+ * @param termLeaving           R_i split by origin, [term][surface]: term 0 the environment, term
+ *                              1 + s external source s; the terms add up to {@code leaving}
+ * @param termRetained          H_i − R_i split the same way, [term][surface]
  */
 public record ExternalIrradiation(double[] irradiance, double[] leaving, double[] retained,
                                   double[] retainedMagnitude, double environmentPower,
-                                  double[] sourceFraction, double[][] sourceAbsorptivity) {
+                                  double[] sourceFraction, double[][] sourceAbsorptivity,
+                                  double[][] termLeaving, double[][] termRetained) {
 
     /**
      * The external irradiation of band {@code b} at surface temperatures {@code t}.
@@ -60,6 +64,9 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving, double[
         double[] retained = new double[n];
         double[] magnitude = new double[n];
         double[][] sourceAlpha = new double[ns][n];
+        double[][] termLeaving = new double[ns + 1][n];
+        double[][] termRetained = new double[ns + 1][n];
+        double[] unused = new double[n]; // the split needs no H or magnitude of its own
         for (int i = 0; i < n; i++) {
             SpectralEmissivity e = r.surface(i).material().emissivity();
             SpectralEmissivity tr = r.surface(i).material().transmissivity();
@@ -69,6 +76,7 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving, double[
                 double tauExt = tr == null ? 0.0 : own ? tau[i]
                         : BandAverages.planckMean(tr, b.lowerUm(), b.upperUm(), r.environmentK, t[i]);
                 absorb(r, i, hEnv, alpha, tauExt, h, leaving, retained, magnitude);
+                absorb(r, i, hEnv, alpha, tauExt, unused, termLeaving[0], termRetained[0], unused);
             }
             for (int s = 0; s < ns; s++) {
                 ExternalSource src = r.sources.get(s);
@@ -79,10 +87,12 @@ public record ExternalIrradiation(double[] irradiance, double[] leaving, double[
                     double tauExt = tr == null ? 0.0 : own ? tau[i]
                             : src.spectrum().bandAbsorptivity(tr, b.lowerUm(), b.upperUm(), t[i]);
                     absorb(r, i, hs, alpha, tauExt, h, leaving, retained, magnitude);
+                    absorb(r, i, hs, alpha, tauExt, unused, termLeaving[s + 1], termRetained[s + 1], unused);
                 }
             }
         }
-        return new ExternalIrradiation(h, leaving, retained, magnitude, envE, fraction, sourceAlpha);
+        return new ExternalIrradiation(h, leaving, retained, magnitude, envE, fraction, sourceAlpha, termLeaving,
+                termRetained);
     }
 
     /** One term H arriving at face i: α H is absorbed, τ H leaves the other face, the rest is reflected. */

@@ -71,6 +71,13 @@ final class Runs {
     /** As above, with the linear algebra named by {@code --solver} (null: the default rule). */
     static java.util.List<LoadCaseResult> solveAll(PreparedCase c, BandSet override, String only,
                                                    double bandTolerance, org.exitance.thermal.SolverChoice choice) {
+        return solveAll(c, override, only, bandTolerance, choice, org.exitance.thermal.PairExchangeRule.NONE);
+    }
+
+    /** As above, with the pair exchange when {@code pairs} asks for it. */
+    static java.util.List<LoadCaseResult> solveAll(PreparedCase c, BandSet override, String only,
+                                                   double bandTolerance, org.exitance.thermal.SolverChoice choice,
+                                                   org.exitance.thermal.PairExchangeRule pairs) {
         java.util.List<String> names = c.model().loadCases().stream().map(org.exitance.model.LoadCase::name).toList();
         if (only != null && !names.contains(only)) {
             throw new UserError(c.file() + ": --load-case: no load case named '" + only + "'"
@@ -81,7 +88,7 @@ final class Runs {
             throw new UserError(c.file() + ": --solver iterative: the enclosure has windows, whose coupling conjugate"
                     + " gradients cannot solve (use direct or newton-krylov)", ExitCodes.BAD_INPUT);
         }
-        return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only, bandTolerance, choice));
+        return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only, bandTolerance, choice, pairs));
     }
 
     static <T> T guarded(PreparedCase c, java.util.function.Supplier<T> work) {

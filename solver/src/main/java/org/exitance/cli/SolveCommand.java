@@ -79,13 +79,18 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = {"-q", "--quiet"}, description = "Do not print warnings on standard error.")
     private boolean quiet;
 
+    @Mixin
+    private ExportOptions exports;
+
     @Override
     public Integer call() throws Exception {
         BandSet override = bandEdges.bands(gray);
         OutputTarget.check(output.file(), force);
         Path reportFile = report.file(caseFile, "solve");
         OutputTarget.check(reportFile, force);
+        exports.checkFiles(force);
         PreparedCase c = Runs.load(caseFile, vfTolerance.request());
+        exports.check(c, force);
         org.exitance.thermal.SolverChoice choice;
         try {
             choice = solver == null ? null : org.exitance.thermal.SolverChoice.of(solver);
@@ -93,7 +98,7 @@ final class SolveCommand implements Callable<Integer> {
             throw new UserError("--solver: " + e.getMessage(), ExitCodes.BAD_INPUT);
         }
         List<LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
-                bandTolerance.fraction(), choice);
+                bandTolerance.fraction(), choice, exports.rule());
         boolean variants = !c.model().loadCases().isEmpty();
         List<AuditResult> audits = noAudit || gray.on() ? List.of() : audit(c, results);
         if (reportFile != null) {
@@ -104,8 +109,9 @@ final class SolveCommand implements Callable<Integer> {
                 StandardCharsets.UTF_8);
         if (json.on()) {
             com.fasterxml.jackson.databind.node.ObjectNode node = variants
-                    ? SolveJsonWriter.loadCasesToJson(results, caseFile.toString(), c.warnings())
-                    : SolveJsonWriter.toJson(results.get(0).result(), caseFile.toString(), c.warnings());
+                    ? SolveJsonWriter.loadCasesToJson(results, caseFile.toString(), c.warnings(), exports.conductance())
+                    : SolveJsonWriter.toJson(results.get(0).result(), caseFile.toString(), c.warnings(),
+                    exports.conductance());
             if (!audits.isEmpty()) {
                 var arr = AuditJsonWriter.toJson(caseFile.toString(), audits).get("audits");
                 if (variants) {
@@ -140,12 +146,13 @@ final class SolveCommand implements Callable<Integer> {
             extra.addAll(AuditTableWriter.summaryLines(audits));
             if (variants) {
                 OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.writeLoadCases(results, c.warnings(),
-                        extra, ps));
+                        extra, exports.conductance(), ps));
             } else {
                 OutputTarget.write(output.file(), force, stdout, ps -> SolveTableWriter.write(results.get(0).result(),
-                        c.warnings(), extra, ps));
+                        c.warnings(), extra, exports.conductance(), ps));
             }
         }
+        exports.write(c, results, force);
         return Runs.exitCode(c, spec.commandLine().getErr());
     }
 

@@ -40,6 +40,14 @@ public final class SolveJsonWriter {
     }
 
     public static ObjectNode toJson(SolveResult r, String caseFile, List<String> warnings) {
+        return toJson(r, caseFile, warnings, false);
+    }
+
+    /**
+     * The result as JSON; its pair exchange, when computed, under {@code pairExchange} (and
+     * {@code facetPairExchange}), with the conductances when {@code conductance} is set.
+     */
+    public static ObjectNode toJson(SolveResult r, String caseFile, List<String> warnings, boolean conductance) {
         ObjectNode root = SolveJsonWriter.document();
         root.put("case", caseFile);
         root.put("title", r.title());
@@ -105,6 +113,7 @@ public final class SolveJsonWriter {
             o.put("incident_W", x.incidentW());
             o.put("absorbedOnArrival_W", x.absorbedW());
         }
+        PairExchangeWriter.addTo(root, r, conductance);
         root.put("energyBalance_W", r.energyBalanceW());
         root.put("energyBalanceRelative", r.relativeEnergyBalance());
         root.put("crossingHeat_W", r.crossingHeatW());
@@ -137,6 +146,12 @@ public final class SolveJsonWriter {
     /** Several load cases: {@code loadCases[] {name, description, result}} with one result each. */
     public static ObjectNode loadCasesToJson(List<LoadCaseResult> results, String caseFile,
                                              List<String> warnings) {
+        return loadCasesToJson(results, caseFile, warnings, false);
+    }
+
+    /** As above, with the pairs' conductances when {@code conductance} is set. */
+    public static ObjectNode loadCasesToJson(List<LoadCaseResult> results, String caseFile,
+                                             List<String> warnings, boolean conductance) {
         ObjectNode root = SolveJsonWriter.document();
         root.put("case", caseFile);
         ArrayNode arr = root.putArray("loadCases");
@@ -144,7 +159,7 @@ public final class SolveJsonWriter {
             ObjectNode o = arr.addObject();
             o.put("name", r.name());
             o.put("description", r.description());
-            ObjectNode inner = toJson(r.result(), caseFile, warnings);
+            ObjectNode inner = toJson(r.result(), caseFile, warnings, conductance);
             inner.remove(List.of("program", "version", "case", "caution", "warnings"));
             o.set("result", inner);
         }

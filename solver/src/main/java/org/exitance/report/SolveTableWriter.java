@@ -28,10 +28,16 @@ public final class SolveTableWriter {
     /** As above, with extra lines (e.g. the audit summary) before the warnings and the caution ({@link TableFooter}). */
     public static void writeLoadCases(List<LoadCaseResult> results, List<String> warnings,
                                       List<String> extra, PrintStream out) {
+        writeLoadCases(results, warnings, extra, false, out);
+    }
+
+    /** As above; {@code conductance}: also list each pair's linearised conductance ({@link PairExchangeWriter}). */
+    public static void writeLoadCases(List<LoadCaseResult> results, List<String> warnings,
+                                      List<String> extra, boolean conductance, PrintStream out) {
         for (LoadCaseResult r : results) {
             out.println("=".repeat(12) + " Load case: " + r.name()
                     + (r.description().isEmpty() ? "" : " — " + r.description()) + " " + "=".repeat(12));
-            body(r.result(), out);
+            body(r.result(), conductance, out);
             out.println();
         }
         List<String> head = new ArrayList<>();
@@ -65,11 +71,17 @@ public final class SolveTableWriter {
 
     /** As above, with extra lines (e.g. the audit summary) before the warnings and the caution ({@link TableFooter}). */
     public static void write(SolveResult r, List<String> warnings, List<String> extra, PrintStream out) {
-        body(r, out);
+        write(r, warnings, extra, false, out);
+    }
+
+    /** As above; {@code conductance}: also list each pair's linearised conductance ({@link PairExchangeWriter}). */
+    public static void write(SolveResult r, List<String> warnings, List<String> extra, boolean conductance,
+                             PrintStream out) {
+        body(r, conductance, out);
         TableFooter.write(extra, warnings, out);
     }
 
-    private static void body(SolveResult r, PrintStream out) {
+    private static void body(SolveResult r, boolean conductance, PrintStream out) {
         out.println("Exitance " + Version.get() + (r.title().isEmpty() ? "" : " — " + r.title()));
         out.println();
         writeBands(r, out);
@@ -101,6 +113,7 @@ public final class SolveTableWriter {
             out.println("Environment '" + env.name() + "' at " + Numbers.temperature(env.temperatureK())
                     + " K: net heat into the enclosure " + Numbers.power(env.netHeatW()) + " W");
         }
+        PairExchangeWriter.writeTable(r, conductance, out);
         out.println();
         writeBandSplit(r, out);
         out.println();

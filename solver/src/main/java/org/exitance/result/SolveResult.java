@@ -2,6 +2,7 @@ package org.exitance.result;
 
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import org.exitance.model.Band;
 
 /**
@@ -28,6 +29,10 @@ import org.exitance.model.Band;
  *       their totals (empty when there are none)</li>
  *   <li>{@code facets}: for a case solved on facets, every facet's own result, which the
  *       surfaces then aggregate; empty otherwise</li>
+ *   <li>{@code pairExchange}: the net heat between every pair of surfaces (and with the environment
+ *       and the sources), with its exchange factors, when the solve was asked for it
+ *       (thermal.PairExchangeRule); by surface</li>
+ *   <li>{@code facetPairExchange}: the same facet by facet, for a case solved on facets when asked for</li>
  * </ul>
  * Lists are unmodifiable copies.
  */
@@ -43,6 +48,8 @@ public final class SolveResult {
     private final List<SourceResult> sources;
     private final List<FacePairResult> windows;
     private final List<SurfaceResult> facets;
+    private final PairExchange pairExchange;
+    private final PairExchange facetPairExchange;
 
     private SolveResult(Builder b) {
         title = require(b.title, "title");
@@ -56,6 +63,8 @@ public final class SolveResult {
         sources = List.copyOf(b.sources);
         windows = List.copyOf(b.windows);
         facets = List.copyOf(b.facets);
+        pairExchange = b.pairExchange;
+        facetPairExchange = b.facetPairExchange;
     }
 
     private static <T> T require(T value, String name) {
@@ -74,7 +83,8 @@ public final class SolveResult {
     public Builder toBuilder() {
         return new Builder().title(title).bands(bands).bandOrigin(bandOrigin).surfaces(surfaces)
                 .environment(environment).energyBalanceW(energyBalanceW).energyScaleW(energyScaleW).solver(solver)
-                .sources(sources).facePairs(windows).facets(facets);
+                .sources(sources).facePairs(windows).facets(facets).pairExchange(pairExchange)
+                .facetPairExchange(facetPairExchange);
     }
 
     public String title() {
@@ -132,6 +142,16 @@ public final class SolveResult {
         return facets;
     }
 
+    /** The pair exchange by surface (nodes in the order of {@link #surfaces()}), when it was computed. */
+    public Optional<PairExchange> pairExchange() {
+        return Optional.ofNullable(pairExchange);
+    }
+
+    /** The pair exchange facet by facet (nodes in the order of {@link #facets()}), when it was computed. */
+    public Optional<PairExchange> facetPairExchange() {
+        return Optional.ofNullable(facetPairExchange);
+    }
+
     /**
      * The heat that crosses the enclosure (W): half of Σ_i |Q_i| + |Q_env| + P_ext, i.e. what the
      * sources of heat deliver and the sinks take. The energy balance is measured against it: 323 W
@@ -175,13 +195,14 @@ public final class SolveResult {
                 && Objects.equals(environment, r.environment)
                 && Double.compare(energyBalanceW, r.energyBalanceW) == 0
                 && Double.compare(energyScaleW, r.energyScaleW) == 0 && solver.equals(r.solver)
-                && sources.equals(r.sources) && windows.equals(r.windows) && facets.equals(r.facets);
+                && sources.equals(r.sources) && windows.equals(r.windows) && facets.equals(r.facets)
+                && Objects.equals(pairExchange, r.pairExchange) && Objects.equals(facetPairExchange, r.facetPairExchange);
     }
 
     @Override
     public int hashCode() {
         return Objects.hash(title, bands, bandOrigin, surfaces, environment, energyBalanceW, energyScaleW, solver,
-                sources, windows, facets);
+                sources, windows, facets, pairExchange, facetPairExchange);
     }
 
     @Override
@@ -206,8 +227,22 @@ public final class SolveResult {
         private List<SourceResult> sources = List.of();
         private List<FacePairResult> windows = List.of();
         private List<SurfaceResult> facets = List.of();
+        private PairExchange pairExchange;
+        private PairExchange facetPairExchange;
 
         private Builder() {
+        }
+
+        /** @param v the pair exchange by surface, or null when not computed */
+        public Builder pairExchange(PairExchange v) {
+            pairExchange = v;
+            return this;
+        }
+
+        /** @param v the pair exchange by facet, or null when not computed */
+        public Builder facetPairExchange(PairExchange v) {
+            facetPairExchange = v;
+            return this;
         }
 
         public Builder title(String v) {

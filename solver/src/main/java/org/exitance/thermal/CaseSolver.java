@@ -47,9 +47,15 @@ public final class CaseSolver {
 
     /** As {@link #solve(RadiationCase, BandSet, double)} with the given linear algebra (null: the default rule). */
     public static SolveResult solve(RadiationCase c, BandSet override, double tolerance, SolverChoice choice) {
+        return solve(c, override, tolerance, choice, PairExchangeRule.NONE);
+    }
+
+    /** As {@link #solve(RadiationCase, BandSet, double, SolverChoice)}, with the pair exchange when the rule asks. */
+    public static SolveResult solve(RadiationCase c, BandSet override, double tolerance, SolverChoice choice,
+                                    PairExchangeRule pairs) {
         BandSet given = givenBands(c, override);
         java.util.function.Function<BandSet, SolveResult> run = b -> new TemperatureSolver(c, choice,
-                org.exitance.bands.ExternalAbsorption.SOURCE_SPECTRUM).solve(b);
+                org.exitance.bands.ExternalAbsorption.SOURCE_SPECTRUM).pairExchange(pairs).solve(b);
         return given != null ? run.apply(given) : AdaptiveBands.refine(c, tolerance, run).result();
     }
 
@@ -72,16 +78,23 @@ public final class CaseSolver {
     /** As {@link #solveAll(RadiationCase, BandSet, String, double)} with the given linear algebra (null: default). */
     public static List<LoadCaseResult> solveAll(RadiationCase c, BandSet override, String only, double tolerance,
                                                 SolverChoice choice) {
+        return solveAll(c, override, only, tolerance, choice, PairExchangeRule.NONE);
+    }
+
+    /** As {@link #solveAll(RadiationCase, BandSet, String, double, SolverChoice)}, with the pair exchange when the rule asks. */
+    public static List<LoadCaseResult> solveAll(RadiationCase c, BandSet override, String only, double tolerance,
+                                                SolverChoice choice, PairExchangeRule pairs) {
         if (c.loadCases().isEmpty()) {
             if (only != null) {
                 throw new IllegalArgumentException("the case has no load cases, so none is named '" + only + "'");
             }
-            return List.of(new LoadCaseResult("as given", "", solve(c, override, tolerance, choice)));
+            return List.of(new LoadCaseResult("as given", "", solve(c, override, tolerance, choice, pairs)));
         }
         List<LoadCaseResult> out = new ArrayList<>();
         for (LoadCase lc : c.loadCases()) {
             if (only == null || only.equals(lc.name())) {
-                out.add(new LoadCaseResult(lc.name(), lc.description(), solve(lc.applyTo(c), override, tolerance, choice)));
+                out.add(new LoadCaseResult(lc.name(), lc.description(), solve(lc.applyTo(c), override, tolerance, choice,
+                        pairs)));
             }
         }
         if (out.isEmpty()) {

@@ -3,20 +3,26 @@ package org.exitance.thermal;
 import java.util.ArrayList;
 import java.util.List;
 import org.exitance.model.FacetGroups;
+import org.exitance.result.PairExchange;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 
 /**
  * Reports a solve on facets by surface: heats, band heats and incident powers add; the
  * temperature is the area-weighted mean of the facets' (min and max stay available in the facet
- * detail); band emissivities and band radiosities are area-weighted means. The facets' own results are kept in
+ * detail); band emissivities and band radiosities are area-weighted means; the pair exchange
+ * adds over the facets of each pair of surfaces ({@link PairExchange#grouped}). The facets' own results are kept in
  * {@link SolveResult#facets()}.
  */
 final class FacetAggregation {
     private FacetAggregation() {
     }
 
-    static SolveResult bySurface(SolveResult r, FacetGroups groups) {
+    /**
+     * @param keepFacetExchange  also keep the facets' pair exchange (when one was computed) as
+     *                           {@link SolveResult#facetPairExchange()}
+     */
+    static SolveResult bySurface(SolveResult r, FacetGroups groups, boolean keepFacetExchange) {
         List<SurfaceResult> out = new ArrayList<>();
         int nb = r.bands().size();
         for (String surface : groups.surfaces()) {
@@ -56,6 +62,9 @@ final class FacetAggregation {
             out.add(new SurfaceResult(surface, area, label + " per facet", at / area, solved, q, q / area, bandQ, bandEps,
                     conv, cond, supplied, bandG, bandJ));
         }
-        return r.toBuilder().surfaces(out).facets(r.surfaces()).build();
+        PairExchange facetPairs = r.pairExchange().orElse(null);
+        return r.toBuilder().surfaces(out).facets(r.surfaces())
+                .pairExchange(facetPairs == null ? null : facetPairs.grouped(groups.facetsBySurface()))
+                .facetPairExchange(keepFacetExchange ? facetPairs : null).build();
     }
 }

@@ -37,6 +37,7 @@ public final class TemperatureSolver {
     private final RadiositySolver linear;
     private final SolverChoice choice;
     private final ExternalAbsorption absorption;
+    private PairExchangeRule pairs = PairExchangeRule.NONE;
 
     /** A solver that picks its linear algebra by {@link SolverChoice#forCase} and absorbs by source spectrum. */
     public TemperatureSolver(RadiationCase c) {
@@ -87,6 +88,16 @@ public final class TemperatureSolver {
     }
 
     /**
+     * When this solver computes the pair exchange (default {@link PairExchangeRule#NONE}).
+     *
+     * @return this solver
+     */
+    public TemperatureSolver pairExchange(PairExchangeRule rule) {
+        this.pairs = Objects.requireNonNull(rule);
+        return this;
+    }
+
+    /**
      * Solves the case with the given bands.
      *
      * @throws IllPosedCaseException when the case has no solution as posed
@@ -94,13 +105,17 @@ public final class TemperatureSolver {
      */
     public SolveResult solve(BandSet bandSet) {
         SolveResult r = converge(bandSet).result();
-        return radiationCase.facetGroups() == null ? r : FacetAggregation.bySurface(r, radiationCase.facetGroups());
+        if (radiationCase.facetGroups() == null) {
+            return r;
+        }
+        return FacetAggregation.bySurface(r, radiationCase.facetGroups(), pairs == PairExchangeRule.FACETS);
     }
 
     /**
      * Solves the case and keeps the converged state (band networks, temperatures) for the
      * linearisations built on it (sensitivities). The result is per surface of the enclosure
-     * (per facet for a case solved on facets, before aggregation).
+     * (per facet for a case solved on facets, before aggregation), with its pair exchange when the
+     * rule ({@link #pairExchange(PairExchangeRule)}) asks for it.
      *
      * @throws IllPosedCaseException when the case has no solution as posed
      * @throws SolveFailedException  when Newton or the property loop does not converge
@@ -127,8 +142,12 @@ public final class TemperatureSolver {
         counters.addLinear(loop);
         SolveResult assembled = new ResultAssembler(radiationCase, band.name())
                 .assemble(p, bandSet, loop, states, t, counters);
-        SolveResult r = assembled.toBuilder().solver(assembled.solver().withRun(how.label(), counters.bandIterations,
-                counters.krylovProducts, estimate, PeakHeap.bytes())).build();
+        SolveResult.Builder rb = assembled.toBuilder().solver(assembled.solver().withRun(how.label(),
+                counters.bandIterations, counters.krylovProducts, estimate, PeakHeap.bytes()));
+        if (pairs.applies(enc.size())) {
+            rb.pairExchange(PairExchangeAssembler.of(p, loop, t));
+        }
+        SolveResult r = rb.build();
         return new ConvergedState(p, loop, states, t, r);
     }
 

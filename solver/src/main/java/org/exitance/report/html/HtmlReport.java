@@ -54,6 +54,16 @@ public final class HtmlReport {
             ResultSections.bandFlows(h, page.charts, "chart-bands-" + i, several ? r.name() : "", r.result());
         }
         h.endSection();
+        if (results.stream().anyMatch(r -> r.result().pairExchange().isPresent())) {
+            Html x = page.section("exchange", "Where the heat goes: pair exchange");
+            for (int i = 0; i < results.size(); i++) {
+                LoadCaseResult r = results.get(i);
+                int chart = i;
+                r.result().pairExchange().ifPresent(p -> ExchangeSection.write(x, page.charts, "chart-exchange-" + chart,
+                        several ? r.name() : "", p));
+            }
+            x.endSection();
+        }
         spectra(page, c, results);
         if (!audits.isEmpty()) {
             Html a = page.section("audit", "Gray-body audit");

@@ -71,15 +71,16 @@
       title: { text: c.title, left: 'center', textStyle: { fontSize: 14 } },
       tooltip: { trigger: 'item', formatter: function (p) {
         return p.dataType === 'edge' ? p.data.source.replace(/ \(from\)$/, '') + ' → ' + p.data.target.replace(/ \(to\)$/, '')
-          + ': ' + power(p.data.value) + ' W' : p.name + ': ' + power(p.value) + ' W';
+          + ': ' + power(p.data.value) + ' W' : p.name.replace(/ \((from|to)\)$/, '') + ': ' + power(p.data.value) + ' W';
       } },
       series: [{
         type: 'sankey', top: 50, bottom: 20, left: 20, right: 160, nodeGap: 10,
         emphasis: { focus: 'adjacency' },
         lineStyle: { color: 'gradient', opacity: 0.45 },
-        label: { formatter: function (p) { return p.name.replace(/ \((from|to)\)$/, '') + '  ' + power(p.value) + ' W'; } },
-        data: c.nodes.map(function (name, k) {
-          return { name: name, itemStyle: { color: hex(viridis(n === 1 ? 0.45 : 0.92 * k / (n - 1))), borderColor: '#222' } };
+        label: { formatter: function (p) { return p.name.replace(/ \((from|to)\)$/, '') + '  ' + power(p.data.value) + ' W'; } },
+        data: c.nodes.map(function (node, k) {
+          return { name: node.name, value: node.value,
+            itemStyle: { color: hex(viridis(n === 1 ? 0.45 : 0.92 * k / (n - 1))), borderColor: '#222' } };
         }),
         links: c.links
       }]
