@@ -113,9 +113,10 @@ public final class AuditPlot {
         BarRenderer r = new BarRenderer();
         r.setBarPainter(new StandardBarPainter());
         r.setShadowVisible(false);
-        r.setSeriesPaint(0, new Color(0x2b, 0x57, 0x8c));
-        r.setSeriesPaint(1, new Color(0xd9, 0x82, 0x2b));
-        r.setSeriesPaint(2, new Color(0x5a, 0x9e, 0x6f));
+        // three steps of viridis, dark to light: apart in grey print and for colour-blind readers
+        r.setSeriesPaint(0, Viridis.at(0.08));
+        r.setSeriesPaint(1, Viridis.at(0.5));
+        r.setSeriesPaint(2, Viridis.at(0.88));
         CategoryPlot p = new CategoryPlot(d, x, y, r);
         p.setBackgroundPaint(Color.WHITE);
         p.setRangeGridlinePaint(Color.LIGHT_GRAY);

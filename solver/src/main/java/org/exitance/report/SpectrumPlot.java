@@ -35,8 +35,8 @@ public final class SpectrumPlot {
     public static final int WIDTH_PX = 1000;
     public static final int HEIGHT_PX = 640;
 
-    private static final Color COLD = new Color(40, 90, 190);
-    private static final Color HOT = new Color(200, 45, 30);
+    /** Temperatures run along viridis from dark (coldest) to this point (hottest), short of its pale yellow end. */
+    private static final double HOTTEST_ON_MAP = 0.82;
     /** Blackbody sources take these in turn; a tabulated spectrum is drawn in {@link #SPECTRUM}. */
     private static final Color[] SOURCES = {new Color(215, 145, 0), new Color(30, 150, 70), new Color(150, 60, 170)};
     private static final Color SPECTRUM = new Color(95, 95, 95);
@@ -166,15 +166,13 @@ public final class SpectrumPlot {
         return t;
     }
 
-    /** Colour for temperature t between the coldest (blue) and hottest (red) plotted. */
+    /**
+     * Colour for temperature t between the coldest (dark violet) and hottest (green) plotted, along
+     * viridis ({@link Viridis}): told apart by lightness in grey print and by colour-blind readers.
+     */
     private static Color ramp(double t, double lo, double hi) {
         double f = hi > lo ? (t - lo) / (hi - lo) : 0.0;
-        return new Color(mix(COLD.getRed(), HOT.getRed(), f), mix(COLD.getGreen(), HOT.getGreen(), f),
-                mix(COLD.getBlue(), HOT.getBlue(), f));
-    }
-
-    private static int mix(int a, int b, double f) {
-        return (int) Math.round(a + (b - a) * f);
+        return Viridis.at(HOTTEST_ON_MAP * f);
     }
 
     /** Round dots, so the curve reads apart from solid and dashed ones without colour. */
