@@ -43,7 +43,7 @@ import picocli.CommandLine.Model.CommandSpec;
                 + " {\"materials\": {...}} (see docs/case-format.md). Without a source option the source is a"
                 + " 5772 K blackbody (the sun, common practice).",
                 "The plot (--plot FILE.png) shows ε(λ), ρ(λ) and a window's τ(λ) with normalized Planck curves on a log wavelength axis;"
-                + " PNG only (SVG would need a library this build does not include)."},
+                + " PNG (the HTML report, --report DIR, carries the same plot as SVG)."},
         footer = {"", "Example: exitance material cases/materials/white-paint.json --from-K 250 --to-K 400"
                 + " --step-K 50 --plot white-paint.png", "", ExitCodes.HELP})
 final class MaterialCommand implements Callable<Integer> {
@@ -146,8 +146,8 @@ final class MaterialCommand implements Callable<Integer> {
         if (plot != null) {
             String n = plot.getFileName().toString().toLowerCase(Locale.ROOT);
             if (n.endsWith(".svg")) {
-                throw new UserError(plot + ": SVG is not available in this build (JFreeChart needs a separate SVG"
-                        + " library for it); name a .png file", ExitCodes.BAD_INPUT);
+                throw new UserError(plot + ": --plot writes PNG; name a .png file (--report DIR writes an HTML"
+                        + " report that carries the plot as SVG)", ExitCodes.BAD_INPUT);
             }
             if (!n.endsWith(".png")) {
                 throw new UserError(plot + ": the plot file must end in .png", ExitCodes.BAD_INPUT);

@@ -25,7 +25,8 @@ final class ExchangeSection {
      * @param chartId the element the flow diagram is drawn into
      * @param key     the load case's name, or "" for a case without load cases
      */
-    static void write(Html h, ArrayNode charts, String chartId, String key, PairExchange x) {
+    static void write(Html h, ArrayNode charts, String chartId, String key, PairExchange x,
+                      List<org.exitance.model.Band> bands) {
         int n = x.nodes().size();
         List<String> head = new ArrayList<>(List.of("From \\ to, W"));
         head.addAll(x.nodes());
@@ -92,5 +93,45 @@ final class ExchangeSection {
                 + " between nodes" + Html.esc(key.isEmpty() ? "" : ", load case " + key) + "\"></div>\n");
         h.p("note", "Each band of the diagram is one pair's net heat; a node on the left gives heat (its net heat is"
                 + " positive), a node on the right takes it. Widths are to scale; hover for the numbers.");
+        if (x.bandCount() > 1) {
+            for (int i = 0; i < n; i++) {
+                if (x.rowSum_W(i) > 0) {
+                    byBand(h, key, x, i, bands);
+                }
+            }
+        }
+    }
+
+    /** Band by band, the net heat from node i to every other node (W). */
+    private static void byBand(Html h, String key, PairExchange x, int i, List<org.exitance.model.Band> bands) {
+        int n = x.nodes().size();
+        List<String> head = new ArrayList<>(List.of("Band, µm"));
+        for (int j = 0; j < n; j++) {
+            if (j != i) {
+                head.add("to " + x.nodes().get(j) + ", W");
+            }
+        }
+        List<List<Cell>> rows = new ArrayList<>();
+        for (int k = 0; k < x.bandCount(); k++) {
+            List<Cell> row = new ArrayList<>(List.of(Cell.text(ResultSections.band(bands.get(k)))));
+            for (int j = 0; j < n; j++) {
+                if (j != i) {
+                    row.add(Cell.number(Numbers.power(x.bandNetHeat_W(k, i, j)), ""));
+                }
+            }
+            rows.add(row);
+        }
+        List<Cell> total = new ArrayList<>(List.of(Cell.text("all bands")));
+        for (int j = 0; j < n; j++) {
+            if (j != i) {
+                total.add(Cell.number(Numbers.power(x.netHeat_W(i, j)), ""));
+            }
+        }
+        rows.add(total);
+        String what = "where the heat of " + x.nodes().get(i) + " goes, band by band";
+        h.raw("<details><summary>Table: " + Html.esc(what) + " (" + rows.size() + " rows)</summary>\n");
+        h.table("class=\"exchange-bands\"", "Net heat from " + x.nodes().get(i) + " to each node, by band"
+                + (key.isEmpty() ? "" : " — load case " + key), head, rows, null);
+        h.raw("</details>\n");
     }
 }

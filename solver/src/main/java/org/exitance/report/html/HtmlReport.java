@@ -60,7 +60,7 @@ public final class HtmlReport {
                 LoadCaseResult r = results.get(i);
                 int chart = i;
                 r.result().pairExchange().ifPresent(p -> ExchangeSection.write(x, page.charts, "chart-exchange-" + chart,
-                        several ? r.name() : "", p));
+                        several ? r.name() : "", p, r.result().bands()));
             }
             x.endSection();
         }
@@ -117,7 +117,7 @@ public final class HtmlReport {
         t.endSection();
         Html s = page.section("spectra", "Spectral properties and Planck curves");
         PropertySections.spectra(s, surveys.stream().map(MaterialSurvey::material).toList(), plotTemperaturesK,
-                surveys.isEmpty() ? List.of() : surveys.get(0).sources());
+                surveys.isEmpty() ? List.of() : surveys.get(0).sources(), java.util.Map.of());
         s.endSection();
         return page.render();
     }
@@ -177,7 +177,7 @@ public final class HtmlReport {
         double[] t = temps.stream().mapToDouble(Double::doubleValue).toArray();
         List<IrradiationSource> sources = c.sources();
         Html h = page.section("spectra", "Spectral properties against the case's temperatures");
-        PropertySections.spectra(h, c.materials(), t, sources);
+        PropertySections.spectra(h, c.materials(), t, sources, c.materialOf());
         h.endSection();
     }
 }

@@ -33,8 +33,10 @@ final class PropertySections {
      *
      * @param temperaturesK the temperatures whose Planck curves are drawn, ascending (thinned to
      *                      {@value #PLOT_TEMPERATURES}); not modified
+     * @param materialOf    surface name → material name, to say which surfaces use each (empty: not said)
      */
-    static void spectra(Html h, List<Material> materials, double[] temperaturesK, List<IrradiationSource> sources) {
+    static void spectra(Html h, List<Material> materials, double[] temperaturesK, List<IrradiationSource> sources,
+                        java.util.Map<String, String> materialOf) {
         double[] shown = SpectralCurves.pickForPlot(temperaturesK, PLOT_TEMPERATURES);
         h.p("Each plot: the material's spectral emissivity ε(λ) (solid), reflectivity ρ(λ) (dots) and, for a window,"
                 + " transmissivity τ(λ) (long dashes), with the Planck curves E_bλ/E_bλ,max of "
@@ -45,9 +47,13 @@ final class PropertySections {
         for (Material m : materials) {
             String title = "Material " + m.name() + ": ε(λ), ρ(λ)" + (m.semiTransparent() ? ", τ(λ)" : "")
                     + " and Planck curves";
+            List<String> users = materialOf.entrySet().stream().filter(e -> e.getValue().equals(m.name()))
+                    .map(java.util.Map.Entry::getKey).sorted().toList();
+            String caption = title + (materialOf.isEmpty() ? "" : users.isEmpty() ? "; no surface of the case uses it"
+                    : "; used by " + String.join(", ", users));
             h.raw("<figure class=\"plot\" data-material=\"" + Html.esc(m.name()) + "\">"
                     + Svg.spectrum(title, m.description(), SpectralCurves.of(m, shown, sources))
-                    + "<figcaption>" + Html.esc(title) + "</figcaption></figure>\n");
+                    + "<figcaption>" + Html.esc(caption) + "</figcaption></figure>\n");
         }
     }
 

@@ -127,7 +127,7 @@
     function place(cam, dir, up) {
       var d = new THREE.Vector3(dir[0], dir[1], dir[2]).normalize();
       cam.up.set(up[0], up[1], up[2]);
-      cam.position.copy(sphere.center).addScaledVector(d, sphere.radius / Math.sin(THREE.MathUtils.degToRad(cam.fov / 2)) * 1.05);
+      cam.position.copy(sphere.center).addScaledVector(d, sphere.radius / Math.sin(THREE.MathUtils.degToRad(cam.fov / 2)) * 0.95);
       cam.lookAt(sphere.center);
       cam.updateProjectionMatrix();
     }
@@ -166,25 +166,25 @@
         }
       }
       geom.attributes.color.needsUpdate = true;
-      drawBar(document.getElementById('colorbar'), r);
+      drawBar(document.getElementById('colorbar'), r, 12);
       render();
       stills(r);
     }
     /* the colour bar: a gradient of the same map with five labelled ticks and the unit */
-    function drawBar(bar, r) {
-      var g = bar.getContext('2d'), w = bar.width, h = bar.height, top = 28, bottom = h - 14, x0 = 8, bw = 22;
+    function drawBar(bar, r, px) {
+      var g = bar.getContext('2d'), w = bar.width, h = bar.height, top = 2.4 * px, bottom = h - 1.2 * px, x0 = 8, bw = 22;
       g.fillStyle = '#fff'; g.fillRect(0, 0, w, h);
       var grad = g.createLinearGradient(0, bottom, 0, top);
       for (var k = 0; k <= 20; k++) { grad.addColorStop(k / 20, hex(viridis(k / 20))); }
       g.fillStyle = grad; g.fillRect(x0, top, bw, bottom - top);
       g.strokeStyle = '#222'; g.strokeRect(x0 + 0.5, top + 0.5, bw, bottom - top);
-      g.fillStyle = '#111'; g.font = '12px sans-serif'; g.textBaseline = 'middle';
+      g.fillStyle = '#111'; g.font = px + 'px sans-serif'; g.textBaseline = 'middle';
       for (var i = 0; i <= 4; i++) {
         var y = bottom - (bottom - top) * i / 4;
         g.fillRect(x0 + bw, y, 5, 1);
         g.fillText(fmt(r[0] + (r[1] - r[0]) * i / 4), x0 + bw + 8, y);
       }
-      g.textBaseline = 'top'; g.font = 'bold 12px sans-serif';
+      g.textBaseline = 'top'; g.font = 'bold ' + px + 'px sans-serif';
       g.fillText(quantity === 'temperature' ? 'T, K' : 'q, W/m²', x0, 6);
       document.getElementById('colorbar-label').textContent = label() + ', load case ' + m.loadCases[lc].name;
     }
@@ -201,13 +201,13 @@
         stillRenderer.setClearColor(0xffffff, 1);
       }
       var cam = new THREE.PerspectiveCamera(35, 520 / 440, sphere.radius / 100, sphere.radius * 20);
-      var bar = document.createElement('canvas'); bar.width = 120; bar.height = 440;
-      drawBar(bar, r);
+      var bar = document.createElement('canvas'); bar.width = 150; bar.height = 440;
+      drawBar(bar, r, 17);
       holder.innerHTML = '';
       VIEWS.forEach(function (view) {
         place(cam, view.dir, view.up);
         stillRenderer.render(scene, cam);
-        var sheet = document.createElement('canvas'); sheet.width = 640; sheet.height = 440;
+        var sheet = document.createElement('canvas'); sheet.width = 670; sheet.height = 440;
         var g = sheet.getContext('2d');
         g.drawImage(stillRenderer.domElement, 0, 0);
         g.drawImage(bar, 520, 0);

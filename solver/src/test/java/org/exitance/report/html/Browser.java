@@ -105,7 +105,15 @@ final class Browser {
                 WebElement row = row(driver, "table.results", lc[0], s.get("name").asText());
                 close(soft, name, row, "td.t-k", s.get("temperature_K").asDouble());
                 close(soft, name, row, "td.q-w", s.get("netHeat_W").asDouble());
+                // the pair exchange: each surface's row of the matrix sums to its net heat
+                List<WebElement> exchange = driver.findElements(By.cssSelector("table.exchange[data-load-case='"
+                        + lc[0] + "'] tr[data-key='" + s.get("name").asText() + "']"));
+                if (!exchange.isEmpty()) {
+                    close(soft, name, exchange.get(0), "td.row-sum", s.get("netHeat_W").asDouble());
+                }
             }
+            soft.assertThat(driver.findElements(By.cssSelector("table.exchange[data-load-case='" + lc[0] + "']")))
+                    .as(name + ": a pair-exchange matrix exactly when the JSON has one").hasSize(r.has("pairExchange") ? 1 : 0);
         }
     }
 
@@ -115,7 +123,8 @@ final class Browser {
 
     /** The shown number equals the JSON's to its shown precision: 0.01, or 5 significant digits in exponent form. */
     private static void close(SoftAssertions soft, String name, WebElement row, String cell, double expected) {
-        String shown = row.findElement(By.cssSelector(cell)).getText();
+        // textContent, not the rendered text: a table folded into <details> is not rendered
+        String shown = row.findElement(By.cssSelector(cell)).getDomProperty("textContent");
         double tolerance = Math.max(0.0051, 1e-4 * Math.abs(expected));
         soft.assertThat(Double.parseDouble(shown)).as(name + ": " + row.getAttribute("data-key") + " " + cell)
                 .isCloseTo(expected, org.assertj.core.data.Offset.offset(tolerance));

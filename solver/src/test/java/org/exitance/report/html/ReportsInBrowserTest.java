@@ -156,6 +156,9 @@ class ReportsInBrowserTest {
             Long inked = (Long) js.executeScript(Browser.INKED_CANVAS, canvas);
             soft.assertThat(inked).as(name + ": 3-D view inked pixels").isGreaterThan(5000L);
             Browser.checkPicking(driver, canvas, r.json(), soft, name);
+            // the view after the pick, as the docs show it
+            Files.write(out.resolve(name.replace(".html", "-view.png")),
+                    driver.findElement(By.cssSelector("div.viewer")).getScreenshotAs(org.openqa.selenium.OutputType.BYTES));
         }
         if (r.json() != null) {
             Browser.checkTables(driver, r.json(), soft, name);
