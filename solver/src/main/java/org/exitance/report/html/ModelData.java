@@ -20,7 +20,8 @@ import org.exitance.result.SurfaceResult;
  * outlines, and per load case each facet's temperature (K) and net flux (W/m²) with each
  * surface's totals. A facet takes its own result where the case was solved on facets
  * ({@code SURFACE#k}), else its surface's. A scene surface without a result of that name (none
- * in a consistent case) shows as 0 and is left out of the surface list's values.
+ * in a consistent case) has null values and {@code "solved": false}; the page draws it grey and
+ * says so when it is picked.
  */
 final class ModelData {
     private ModelData() {
@@ -84,14 +85,22 @@ final class ModelData {
         for (Surface surface : scene.surfaces()) {
             SurfaceResult s = byName.get(surface.name());
             ObjectNode o = surfaces.addObject();
-            o.put("temperatureK", s == null ? 0 : s.temperatureK());
-            o.put("netHeatW", s == null ? 0 : s.netHeatW());
-            o.put("netFluxWPerM2", s == null ? 0 : s.netFluxWPerM2());
+            o.put("solved", s != null);
             o.put("areaM2", s == null ? surface.area() : s.areaM2());
+            if (s != null) {
+                o.put("temperatureK", s.temperatureK());
+                o.put("netHeatW", s.netHeatW());
+                o.put("netFluxWPerM2", s.netFluxWPerM2());
+            }
             for (int k = 1; k <= surface.facets().size(); k++) {
                 SurfaceResult own = facets.getOrDefault(surface.name() + "#" + k, s);
-                t.add(own == null ? 0 : own.temperatureK());
-                q.add(own == null ? 0 : own.netFluxWPerM2());
+                if (own == null) {
+                    t.addNull();
+                    q.addNull();
+                } else {
+                    t.add(own.temperatureK());
+                    q.add(own.netFluxWPerM2());
+                }
             }
         }
         return c;

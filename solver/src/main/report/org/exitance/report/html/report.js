@@ -149,7 +149,8 @@
       return quantity === 'temperature' ? c.facetTemperatureK : c.facetNetFluxWPerM2;
     }
     function range(v) {
-      var lo = Math.min.apply(null, v), hi = Math.max.apply(null, v);
+      var known = v.filter(function (x) { return x !== null; });
+      var lo = Math.min.apply(null, known), hi = Math.max.apply(null, known);
       if (!(hi > lo)) { var pad = Math.max(Math.abs(lo) * 0.005, 0.5); lo -= pad; hi += pad; }
       return [lo, hi];
     }
@@ -159,7 +160,8 @@
     function colour() {
       var v = values(), r = range(v);
       for (var t = 0; t < m.triangleFacet.length; t++) {
-        var rgb = viridis((v[m.triangleFacet[t]] - r[0]) / (r[1] - r[0]));
+        var value = v[m.triangleFacet[t]];
+        var rgb = value === null ? [0.75, 0.75, 0.75] : viridis((value - r[0]) / (r[1] - r[0]));
         tmp.setRGB(rgb[0], rgb[1], rgb[2], THREE.SRGBColorSpace);
         for (var k = 0; k < 3; k++) {
           colours[9 * t + 3 * k] = tmp.r; colours[9 * t + 3 * k + 1] = tmp.g; colours[9 * t + 3 * k + 2] = tmp.b;
@@ -240,9 +242,10 @@
     });
     function show(facet) {
       var s = m.facetSurface[facet], c = m.loadCases[lc], sv = c.surfaces[s];
-      var rows = [['Surface', m.surfaces[s]], ['Load case', c.name], ['Temperature, K', temperature(sv.temperatureK)],
-        ['Net heat, W', power(sv.netHeatW)], ['Net flux, W/m²', power(sv.netFluxWPerM2)], ['Area, m²', sv.areaM2.toPrecision(5)]];
-      if (c.facetResolved) {
+      var rows = sv.solved ? [['Surface', m.surfaces[s]], ['Load case', c.name], ['Temperature, K', temperature(sv.temperatureK)],
+        ['Net heat, W', power(sv.netHeatW)], ['Net flux, W/m²', power(sv.netFluxWPerM2)], ['Area, m²', sv.areaM2.toPrecision(5)]]
+        : [['Surface', m.surfaces[s]], ['Load case', c.name], ['Result', 'none for this surface (drawn grey)']];
+      if (c.facetResolved && c.facetTemperatureK[facet] !== null) {
         rows.push(['Facet', m.facetLabel[facet]], ['Facet temperature, K', temperature(c.facetTemperatureK[facet])],
           ['Facet net flux, W/m²', power(c.facetNetFluxWPerM2[facet])]);
       }
