@@ -17,12 +17,22 @@ public final class OptionHelp extends ListResourceBundle {
         return new Object[][] {
             {"exitance.solve.json", "Write the machine-readable result (JSON) instead of tables."},
             {"exitance.solve.output", "Write to FILE instead of standard output (never overwrites without --force)."},
-            {"exitance.solve.force", "Allow --output to replace an existing file."},
-            {"exitance.solve.create-dirs", "Create the directory of --output when it does not exist (without this option a missing directory is an error)."},
+            {"exitance.solve.force", "Allow --output, --csv and --vtk to replace existing files."},
+            {"exitance.solve.create-dirs", "Create the directory of --output, --csv or --vtk when it does not exist (without this option a missing directory is an error)."},
             {"exitance.solve.band-edges", "Interior band edges in µm, overriding the case and the default rule"
                     + " (e.g. 1.5,3,6)."},
             {"exitance.solve.gray", "Solve with one band (the gray solution)."},
             {"exitance.solve.band-tolerance", BAND_TOLERANCE},
+            {"exitance.solve.exchange", "Pair exchange (net heat between every pair of surfaces, with the environment and"
+                    + " the sources; Gebhart factors per band): auto (when the solved enclosure has at most 200 surfaces or"
+                    + " facets), on, facets (also facet by facet, for a case solved on facets) or off (default"
+                    + " ${DEFAULT-VALUE})."},
+            {"exitance.solve.conductance", "Also give the linearised radiative conductance of each pair at the solved"
+                    + " temperatures, G = Q/(T_i - T_j) in W/K, in the table, JSON and CSV."},
+            {"exitance.solve.csv", "Also write surfaces.csv, bands.csv, view-factors.csv and (with the pair exchange)"
+                    + " pair-exchange.csv into DIR (never overwrites without --force; a missing DIR needs --create-dirs)."},
+            {"exitance.solve.vtk", "Also write the facets of a geometry case with their results (surface id and name"
+                    + " lookup, temperature, net flux, per-band flux) as VTK legacy polydata to FILE."},
             {"exitance.audit.json", "Write the audit as JSON."},
             {"exitance.audit.output", "Write to FILE (never overwrites without --force)."},
             {"exitance.audit.force", "Allow --output and --plot to replace existing files."},
