@@ -33,8 +33,11 @@ public final class CaseReader {
         JsonCursor root = JsonCursor.root(CaseJson.parse(file), file);
         Path dir = file.toAbsolutePath().getParent();
         List<String> warnings = new ArrayList<>();
-        root.allowOnly("title", "notes", "materials", "surfaces", "environment", "viewFactors", "geometry", "section",
-                "bands", "conductiveLinks", "sources", "loadCases", "solver", "expected");
+        root.allowOnly("$schema", "title", "notes", "materials", "surfaces", "environment", "viewFactors", "geometry",
+                "section", "bands", "conductiveLinks", "sources", "loadCases", "solver", "expected");
+        if (root.has("$schema")) {
+            root.field("$schema").text(); // where an editor finds the case schema (docs/case.schema.json); not used
+        }
         root.exactlyOneOf("viewFactors", "geometry", "section");
         CaseGeometry geometry = root.has("geometry") ? GeometryReader.read(root.field("geometry"), dir) : null;
         Map<String, Double> geometryAreas = null;

@@ -16,7 +16,7 @@ import picocli.CommandLine.Option;
 
 /**
  * The pair-exchange and export options of {@code solve}: {@code --exchange WHEN},
- * {@code --conductance}, {@code --csv DIR} and {@code --vtk FILE}. Every file is checked
+ * {@code --conductance}, {@code --csv DIR} and {@code --vtk FILE} (help texts in {@link OptionHelp}). Every file is checked
  * ({@link OutputTarget#check}) before the solve and written through {@link OutputTarget#write}.
  */
 final class ExportOptions {
@@ -26,22 +26,22 @@ final class ExportOptions {
     static final String VIEW_FACTORS = "view-factors.csv";
     static final String PAIRS = "pair-exchange.csv";
 
-    @Option(names = "--exchange", paramLabel = "WHEN", defaultValue = "auto",
+    @Option(names = "--exchange", paramLabel = "WHEN", defaultValue = "auto", descriptionKey = "exchange",
             description = "Pair exchange (net heat between every pair of surfaces, Gebhart factors): auto (when the"
                     + " solved enclosure has at most " + PairExchangeRule.AUTO_LIMIT + " surfaces or facets), on,"
                     + " facets (also facet by facet, for a case solved on facets) or off (default ${DEFAULT-VALUE}).")
     private String exchange;
 
-    @Option(names = "--conductance", description = "Also give the linearised radiative conductance of each pair at"
+    @Option(names = "--conductance", descriptionKey = "conductance", description = "Also give the linearised radiative conductance of each pair at"
             + " the solved temperatures (W/K) in the table, JSON and CSV.")
     private boolean conductance;
 
-    @Option(names = "--csv", paramLabel = "DIR", description = "Also write " + SURFACES + ", " + BANDS + ", "
+    @Option(names = "--csv", paramLabel = "DIR", descriptionKey = "csv", description = "Also write " + SURFACES + ", " + BANDS + ", "
             + VIEW_FACTORS + " and (with the pair exchange) " + PAIRS + " into DIR (never overwrites without --force;"
             + " a missing DIR needs --create-dirs).")
     private Path csvDir;
 
-    @Option(names = "--vtk", paramLabel = "FILE", description = "Also write the facets of a geometry case with their"
+    @Option(names = "--vtk", paramLabel = "FILE", descriptionKey = "vtk", description = "Also write the facets of a geometry case with their"
             + " results as VTK legacy polydata (.vtk) to FILE.")
     private Path vtk;
 

@@ -17,20 +17,14 @@ public final class OptionHelp extends ListResourceBundle {
         return new Object[][] {
             {"exitance.solve.json", "Write the machine-readable result (JSON) instead of tables."},
             {"exitance.solve.output", "Write to FILE instead of standard output (never overwrites without --force)."},
-            {"exitance.solve.force", "Allow --output and --report to replace existing files."},
-            {"exitance.solve.create-dirs", "Create the directory of --output or --report when it does not exist (without this option a missing directory is an error)."},
+            {"exitance.solve.force", "Allow --output, --csv, --vtk and --report to replace existing files."},
+            {"exitance.solve.create-dirs", "Create the directory of --output, --csv, --vtk or --report when it does not exist (without this option a missing directory is an error)."},
             {"exitance.solve.band-edges", "Interior band edges in µm, overriding the case and the default rule"
                     + " (e.g. 1.5,3,6)."},
             {"exitance.solve.gray", "Solve with one band (the gray solution)."},
             {"exitance.solve.band-tolerance", BAND_TOLERANCE},
-            {"exitance.solve.report", "Also write an offline HTML report, DIR/CASE-solve.html: tables, charts, spectra,"
-                    + " the audit and, for a geometry, a 3-D view (self-contained; never overwritten without --force;"
-                    + " DIR is created only with --create-dirs)."},
-            {"exitance.audit.report", "Also write the audit as an offline HTML report, DIR/CASE-audit.html (never"
-                    + " overwritten without --force; DIR is created only with --create-dirs)."},
-            {"exitance.material.report", "Also write an offline HTML report, DIR/FILE-material.html: the tables and a"
-                    + " spectral plot per material (never overwritten without --force; DIR is created only with"
-                    + " --create-dirs)."},
+            {"exitance.solve.force", "Allow --output, --csv, --vtk and --report to replace existing files."},
+            {"exitance.solve.create-dirs", "Create the directory of --output, --csv, --vtk or --report when it does not exist (without this option a missing directory is an error)."},
             {"exitance.audit.json", "Write the audit as JSON."},
             {"exitance.audit.output", "Write to FILE (never overwrites without --force)."},
             {"exitance.audit.force", "Allow --output, --plot and --report to replace existing files."},

@@ -22,9 +22,12 @@ import org.exitance.result.PairExchange;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
 import org.exitance.spectral.GrayEmissivity;
+import org.exitance.spectral.SpectralEmissivity;
+import org.exitance.spectral.TabulatedEmissivity;
 import org.exitance.support.Cases;
 import org.exitance.support.RandomEnclosures;
 import org.exitance.support.ShippedCases;
+import org.exitance.support.SpectralReference;
 import org.junit.jupiter.api.DynamicTest;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestFactory;
@@ -230,6 +233,55 @@ class PairExchangeTest {
         // the conductance is the secant: G (T1 − T2) = Q
         assertThat(pe.conductance_W_per_K(0, 1) * (t1 - t2)).isCloseTo(expected, within(1e-10 * expected));
         assertThat(pe.nodes()).containsExactly("hot", "cold");
+    }
+
+    @Test
+    void nonGrayParallelPlatesExchangeTheClosedFormInEachBand() {
+        // Per band with step emissivities that change at the band edge, each band is a gray
+        // two-plate problem: Q_k = A (E_1k − E_2k)/(1/ε_1k + 1/ε_2k − 1) (Incropera et al., 7th ed.,
+        // Table 13.3, applied band by band; Siegel & Howell, 5th ed., band form, from memory), with the
+        // band emissive powers from an independent quadrature of Planck's law (support.SpectralReference).
+        SpectralEmissivity hot = new TabulatedEmissivity(new double[] {4, Math.nextUp(4.0)}, new double[] {0.9, 0.3});
+        SpectralEmissivity cold = new TabulatedEmissivity(new double[] {4, Math.nextUp(4.0)}, new double[] {0.2, 0.8});
+        double t1 = 1200;
+        double t2 = 450;
+        Enclosure e = new Enclosure(List.of(
+                new EnclosureSurface("a", new Material("hot", hot, ""), 1.0, new BoundaryCondition.FixedTemperature(t1),
+                        Double.NaN),
+                new EnclosureSurface("b", new Material("cold", cold, ""), 1.0, new BoundaryCondition.FixedTemperature(t2),
+                        Double.NaN)), new double[][] {{0, 1}, {1, 0}}, null);
+        PairExchange pe = solve(e, new BandSet(new double[] {4}, "t")).pairExchange().orElseThrow();
+        double[][] edges = {{0, 4}, {4, Double.POSITIVE_INFINITY}};
+        double[][] eps = {{0.9, 0.2}, {0.3, 0.8}};
+        double total = 0;
+        for (int k = 0; k < 2; k++) {
+            double e1 = SpectralReference.bandPowerWPerM2(edges[k][0], edges[k][1], t1);
+            double e2 = SpectralReference.bandPowerWPerM2(edges[k][0], edges[k][1], t2);
+            double expected = (e1 - e2) / (1 / eps[k][0] + 1 / eps[k][1] - 1);
+            assertThat(pe.bandNetHeat_W(k, 0, 1)).as("band " + k).isCloseTo(expected, within(1e-7 * expected));
+            total += expected;
+        }
+        assertThat(pe.netHeat_W(0, 1)).isCloseTo(total, within(1e-7 * total));
+    }
+
+    @Test
+    void conductanceTimesTemperatureDifferenceIsThePairsHeat() {
+        // For reciprocal exchange areas Q_ij = Σ_k S_ij (E_i − E_j) exactly, so the secant conductance
+        // G_ij = Q_ij/(T_i − T_j) (Hottel & Sarofim, Radiative Transfer, 1967, from memory).
+        Random rnd = new Random(41);
+        Enclosure e = RandomEnclosures.random(rnd, 6, true, 0.3);
+        SolveResult r = solve(e, new BandSet(new double[] {3, 7}, "t"));
+        PairExchange pe = r.pairExchange().orElseThrow();
+        int env = pe.environmentIndex();
+        for (int i = 0; i < 6; i++) {
+            for (int j = i + 1; j < 6; j++) {
+                double dt = r.surfaces().get(i).temperatureK() - r.surfaces().get(j).temperatureK();
+                double q = pe.netHeat_W(i, j);
+                assertThat(pe.conductance_W_per_K(i, j) * dt).isCloseTo(q, within(1e-9 * (Math.abs(q) + 1e-6)));
+                assertThat(pe.conductance_W_per_K(i, j)).isEqualTo(pe.conductance_W_per_K(j, i)).isGreaterThanOrEqualTo(0);
+            }
+            assertThat(pe.conductance_W_per_K(i, env)).isGreaterThanOrEqualTo(0);
+        }
     }
 
     @Test
