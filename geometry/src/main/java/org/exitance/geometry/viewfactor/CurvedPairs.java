@@ -28,6 +28,7 @@ final class CurvedPairs {
     private final CurvedContour contour = new CurvedContour();
     private final Curve[] cp = curves(Poly.MAX_VERTICES), cq = curves(Poly.MAX_VERTICES);
     private final Poly scratch = new Poly();
+    private final PartialPairs partial = new PartialPairs();
     /** Error estimate of the last {@link #exchangeArea} (m²). */
     double lastError;
 
@@ -83,13 +84,34 @@ final class CurvedPairs {
     }
 
     /**
-     * @return true if facet f cannot block any segment between facets i and j: both lie in front
-     *         of every tangent plane of f, which then bounds a region containing them
+     * A_i F_ij of an unobstructed PARTIAL pair, by {@link PartialPairs} with a curved side outside.
+     *
+     * @return the exchange area (m²); sets {@link #lastError}
+     */
+    double partialExchangeArea(int i, Poly p, int j, Poly q) {
+        double tol = relativeTolerance * Math.min(t.exactArea[i], t.exactArea[j]);
+        // outside: a patch, curved rather than plane (polygons and plane patches are best inside,
+        // where their factor from a point is exact)
+        boolean iOutside = t.patch[j] == null
+                || t.patch[i] != null && (t.patch[i].kind() != Patch.Kind.PLANE || t.patch[j].kind() == Patch.Kind.PLANE);
+        double s = iOutside
+                ? partial.exchangeArea(t.patch[i], t.patch[j], q, tol)
+                : partial.exchangeArea(t.patch[j], t.patch[i], p, tol);
+        lastError = partial.lastError;
+        return s;
+    }
+
+    /**
+     * @return true if facet f cannot block a segment between facets i and j that counts (one
+     *         leaving each side in front of its tangent plane): either both lie in front of every
+     *         tangent plane of f, which then bounds a region holding every such segment, or f lies
+     *         behind every tangent plane of i (or of j), where no such segment goes
      */
     boolean cannotBlock(int f, int i, Poly p, int j, Poly q) {
         scratch.load(t, f);
         double tol = 1e-9 * (t.radius[i] + t.radius[j] + distance(i, j));
-        return front(f, scratch, i, p, tol) > 0 && front(f, scratch, j, q, tol) > 0;
+        return front(f, scratch, i, p, tol) > 0 && front(f, scratch, j, q, tol) > 0
+                || front(i, p, f, scratch, tol) < 0 || front(j, q, f, scratch, tol) < 0;
     }
 
     /**

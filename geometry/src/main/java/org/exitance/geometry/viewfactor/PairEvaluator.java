@@ -108,8 +108,15 @@ final class PairEvaluator {
             counters[CURVED_EXACT]++;
             return 0;
         }
-        if (kind == CurvedPairs.PARTIAL || blocked(i, j)) {
+        if (blocked(i, j)) {
             return Double.NaN;
+        }
+        if (kind == CurvedPairs.PARTIAL) {
+            counters[QUADRATURE]++;
+            counters[CURVED_EXACT]++;
+            double s = curved.partialExchangeArea(i, p, j, q);
+            lastError = curved.lastError;
+            return s;
         }
         counters[CONTOUR]++;
         counters[CURVED_EXACT]++;

@@ -21,7 +21,8 @@ final class PatchCurves {
 
     /**
      * @param p the patch (not modified)
-     * @param out receives up to 4 curves (modified; must hold 4 instances)
+     * @param out receives up to 4 curves, in order along the boundary (modified: its first four
+     *        instances are filled and may be permuted; must hold 4 instances)
      * @return number of curves written
      */
     static int of(Patch p, Curve[] out) {
@@ -91,7 +92,13 @@ final class PatchCurves {
         c.line(a.x(), a.y(), a.z(), b.x(), b.y(), b.z());
     }
 
+    /** Reverses the loop: each curve's direction and their order (so that it stays one walk). */
     private static void reverse(Curve[] out, int n) {
+        for (int a = 0, b = n - 1; a < b; a++, b--) {
+            Curve swap = out[a];
+            out[a] = out[b];
+            out[b] = swap;
+        }
         for (int k = 0; k < n; k++) {
             Curve c = out[k];
             if (c.kind == Curve.LINE) {
