@@ -28,9 +28,16 @@ public final class Facet {
     private final Vec3 normal;
     private final double area;
     private final Vec3 centroid;
+    /** Exact curved shape this polygon stands for, or null for a plain planar facet. */
+    private final Patch patch;
 
     private Facet(double[] xyz) {
+        this(xyz, null);
+    }
+
+    private Facet(double[] xyz, Patch patch) {
         this.xyz = xyz;
+        this.patch = patch;
         int n = xyz.length / 3;
         if (n < 3) {
             throw new GeometryException("a facet needs at least 3 vertices, got " + n);
@@ -148,6 +155,27 @@ public final class Facet {
         return new Facet(xyz.clone());
     }
 
+    /**
+     * The same polygon standing for an exact curved (or circular) patch: view factors and
+     * {@link #exactArea()} then use the patch; the polygon remains for rays and drawing.
+     *
+     * @param p the exact shape (its radiating side must agree with this polygon's normal)
+     * @return a new facet
+     */
+    public Facet withPatch(Patch p) {
+        return new Facet(xyz, p);
+    }
+
+    /** @return the exact shape behind this facet, or null for a plain planar facet */
+    public Patch patch() {
+        return patch;
+    }
+
+    /** @return the exact area (m²): the patch's if there is one, else the polygon's */
+    public double exactArea() {
+        return patch == null ? area : patch.area();
+    }
+
     /** @return number of vertices */
     public int vertexCount() {
         return xyz.length / 3;
@@ -187,7 +215,7 @@ public final class Facet {
         return normal;
     }
 
-    /** @return area (m²) */
+    /** @return area of the polygon (m²); see {@link #exactArea()} for curved facets */
     public double area() {
         return area;
     }
@@ -213,7 +241,7 @@ public final class Facet {
         for (int k = 0; k < n; k++) {
             System.arraycopy(xyz, 3 * (n - 1 - k), r, 3 * k, 3);
         }
-        return new Facet(r);
+        return new Facet(r, patch == null ? null : patch.reversed());
     }
 
     /** @return this facet moved by {@code t} */
@@ -225,12 +253,12 @@ public final class Facet {
             r[3 * k + 1] = p.y();
             r[3 * k + 2] = p.z();
         }
-        return new Facet(r);
+        return new Facet(r, patch == null ? null : patch.transformed(t));
     }
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof Facet f && Arrays.equals(xyz, f.xyz);
+        return o instanceof Facet f && Arrays.equals(xyz, f.xyz) && java.util.Objects.equals(patch, f.patch);
     }
 
     @Override

@@ -23,11 +23,20 @@ public record Surface(String name, List<Facet> facets) {
         facets = List.copyOf(facets);
     }
 
-    /** @return the total area (m²), summed in facet order */
+    /** @return the total area of the facet polygons (m²), summed in facet order */
     public double area() {
         double a = 0;
         for (Facet f : facets) {
             a += f.area();
+        }
+        return a;
+    }
+
+    /** @return the total exact area (m²; curved facets count their patch), summed in facet order */
+    public double exactArea() {
+        double a = 0;
+        for (Facet f : facets) {
+            a += f.exactArea();
         }
         return a;
     }

@@ -4,16 +4,16 @@ import java.util.ArrayList;
 import java.util.List;
 import org.exitance.geometry.Facet;
 import org.exitance.geometry.GeometryException;
+import org.exitance.geometry.Patch;
 import org.exitance.geometry.Vec3;
 
 /**
  * Primitive shapes meshed into planar convex facets at a resolution chosen by the caller.
  * Lengths in m, angles in rad.
  *
- * <p>Curved shapes are replaced by inscribed polygons (chords): a cylinder of radius R meshed with
- * n azimuthal divisions has the perimeter 2nR sin(π/n), not 2πR. View factors of the meshed shape
- * are exact for the polygonal shape; compare with closed forms of the round shape only to within
- * this discretisation error (or compare with the polygonal closed form).
+ * <p>Curved shapes are meshed into inscribed polygons (chords), and each polygon carries the exact
+ * piece of the round shape it stands for ({@link Patch}): view factors and areas use the exact
+ * pieces ({@link Facet#exactArea()}); the polygons serve rays, drawing and export.
  *
  * <p>Orientation: every facet lists its vertices counter-clockwise seen from the radiating side
  * (see {@link Facet}). Azimuth φ is measured in the frame of {@link Frame#about}.
@@ -156,10 +156,13 @@ public final class Shapes {
             double r1 = innerRadius + (outerRadius - innerRadius) * (k + 1) / radial;
             for (int m = 0; m < azimuthal; m++) {
                 double p0 = 2 * Math.PI * m / azimuthal, p1 = 2 * Math.PI * ((m + 1) % azimuthal) / azimuthal; // seam shares exact vertices
+                Patch exact = Patch.plane(center, f.u(), f.v(), f.a(), r0, r1, 2 * Math.PI * m / azimuthal,
+                        2 * Math.PI * (m + 1) / azimuthal, 1);
                 if (r0 == 0) {
-                    out.add(Facet.of(center, f.at(r1, p0, 0), f.at(r1, p1, 0)));
+                    out.add(Facet.of(center, f.at(r1, p0, 0), f.at(r1, p1, 0)).withPatch(exact));
                 } else {
-                    out.add(Facet.of(f.at(r0, p0, 0), f.at(r1, p0, 0), f.at(r1, p1, 0), f.at(r0, p1, 0)));
+                    out.add(Facet.of(f.at(r0, p0, 0), f.at(r1, p0, 0), f.at(r1, p1, 0), f.at(r0, p1, 0))
+                            .withPatch(exact));
                 }
             }
         }
@@ -223,7 +226,10 @@ public final class Shapes {
                 if (r1 > 0) {
                     v.add(f.at(r1, p0, z1));
                 }
-                out.add(oriented(v, facing == Facing.OUTWARD));
+                Patch exact = Patch.cone(baseCenter, f.u(), f.v(), f.a(), baseRadius, (topRadius - baseRadius) / height,
+                        z0, z1, 2 * Math.PI * m / azimuthal, 2 * Math.PI * (m + 1) / azimuthal,
+                        facing == Facing.OUTWARD ? 1 : -1);
+                out.add(oriented(v, facing == Facing.OUTWARD).withPatch(exact));
             }
         }
         return out;
@@ -282,7 +288,9 @@ public final class Shapes {
                     v.add(f.at(radius * s0, p1, radius * Math.cos(t0)));
                 }
                 // (θ down, φ around) is right-handed with the outward radius: order is outward.
-                out.add(oriented(v, facing == Facing.OUTWARD));
+                Patch exact = Patch.sphere(center, f.u(), f.v(), f.a(), radius, t0, t1, 2 * Math.PI * m / azimuthal,
+                        2 * Math.PI * (m + 1) / azimuthal, facing == Facing.OUTWARD ? 1 : -1);
+                out.add(oriented(v, facing == Facing.OUTWARD).withPatch(exact));
             }
         }
         return out;

@@ -16,7 +16,16 @@ final class FacetTable {
     final int[] vertexStart;
     final double[] xyz;
     final double[] normal;
+    /** Area of each facet's polygon (m²): what the polygon methods integrate over. */
     final double[] area;
+    /** Exact area (m²): the patch's for a curved facet, else the polygon's. View factors are A F / this. */
+    final double[] exactArea;
+    /** The exact curved shape behind each facet, or null for a plain polygon. */
+    final org.exitance.geometry.Patch[] patch;
+    /** Distance bound between a curved facet's patch and its polygon (m; 0 for plain polygons). */
+    final double[] sagitta;
+    /** True if any facet carries a patch. */
+    final boolean curved;
     final double[] centroid;
     final double[] radius;
     final int[] surfaceOf;
@@ -45,11 +54,15 @@ final class FacetTable {
         xyz = new double[3 * vertexStart[count]];
         normal = new double[3 * count];
         area = new double[count];
+        exactArea = new double[count];
+        patch = new org.exitance.geometry.Patch[count];
+        sagitta = new double[count];
         centroid = new double[3 * count];
         radius = new double[count];
         surfaceOf = new int[count];
         key = new long[count];
         int f = 0;
+        boolean anyPatch = false;
         for (int s = 0; s < scene.surfaceCount(); s++) {
             Surface surface = scene.surfaces().get(s);
             for (Facet facet : surface.facets()) {
@@ -58,6 +71,10 @@ final class FacetTable {
                 normal[3 * f + 1] = facet.normal().y();
                 normal[3 * f + 2] = facet.normal().z();
                 area[f] = facet.area();
+                exactArea[f] = facet.exactArea();
+                patch[f] = facet.patch();
+                sagitta[f] = patch[f] == null ? 0 : patch[f].sagitta();
+                anyPatch |= patch[f] != null;
                 centroid[3 * f] = facet.centroid().x();
                 centroid[3 * f + 1] = facet.centroid().y();
                 centroid[3 * f + 2] = facet.centroid().z();
@@ -71,6 +88,7 @@ final class FacetTable {
                 f++;
             }
         }
+        curved = anyPatch;
         double[] lo = {Double.MAX_VALUE, Double.MAX_VALUE, Double.MAX_VALUE};
         double[] hi = {-Double.MAX_VALUE, -Double.MAX_VALUE, -Double.MAX_VALUE};
         for (int k = 0; k < xyz.length; k++) {

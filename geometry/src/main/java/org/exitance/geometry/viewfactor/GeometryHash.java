@@ -16,7 +16,7 @@ import org.exitance.geometry.Surface;
 public final class GeometryHash {
 
     /** Changes whenever the algorithm changes results. */
-    static final String FORMAT = "exitance-viewfactor-2"; // 2: shadow projection for partly hidden pairs
+    static final String FORMAT = "exitance-viewfactor-3"; // 2: shadow projection; 3: exact curved patches
 
     private GeometryHash() {
     }
@@ -42,6 +42,14 @@ public final class GeometryHash {
                         b.putLong(Double.doubleToLongBits(c));
                     }
                     md.update(b.array());
+                    if (f.patch() != null) {
+                        double[] pp = f.patch().parameters();
+                        ByteBuffer c = ByteBuffer.allocate(8 * pp.length);
+                        for (double v : pp) {
+                            c.putLong(Double.doubleToLongBits(v));
+                        }
+                        md.update(c.array());
+                    }
                 }
             }
             String opts = o.pairTolerance() + "|" + o.contourOrder() + "|" + o.visibilityOrder() + "|"

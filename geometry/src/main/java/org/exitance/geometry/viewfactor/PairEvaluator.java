@@ -22,7 +22,8 @@ import org.exitance.geometry.bvh.TriangleBvh;
 final class PairEvaluator {
 
     static final int ZERO = 0, CLIPPED = 1, CONTOUR = 2, QUADRATURE = 3, PARTIAL = 4, HIDDEN = 5, RAYS = 6;
-    static final int COUNTERS = 7;
+    static final int CURVED_ON_POLYGONS = 7, CURVED_EXACT = 8;
+    static final int COUNTERS = 9;
     /** Most occluder facets in one pair's hull handled by shadow projection (more: rays). */
     static final int MAX_OCCLUDERS = 256;
 
@@ -45,6 +46,9 @@ final class PairEvaluator {
     private final SplitPairs split;
     private final double contourTolerance;
     private final Shaft shaft = new Shaft();
+    /** Pairs with an exact curved side, or null for a scene of plain polygons. */
+    private final CurvedPairs curved;
+    private final int[] owners = new int[MAX_OCCLUDERS];
     private final Poly p = new Poly();
     private final Poly q = new Poly();
     private final double[] scratch = new double[3 * Poly.MAX_VERTICES];
@@ -66,6 +70,97 @@ final class PairEvaluator {
         this.shadow = occluders == null ? null : new ShadowIntegral(t, occluders, planes.prepared(), convex.view(),
                 new EventLines(t, edges, planes), edges.closed, MAX_OCCLUDERS, this::sortByKey);
         this.visibilityTolerance = Math.min(1e-2, 100 * rule.tolerance());
+        this.curved = t.curved ? new CurvedPairs(t, 0.1 * rule.tolerance()) : null;
+    }
+
+    /**
+     * @param i a facet whose patch is concave (it sees itself)
+     * @return A_i F_ii over the exact patch (m²); sets {@link #lastError}
+     */
+    double selfExchangeArea(int i) {
+        p.load(t, i);
+        q.load(t, i);
+        lastError = 0;
+        double s = curved.exchangeArea(i, p, i, q);
+        lastError = curved.lastError;
+        if (blocked(i, i)) {
+            // something inside the patch's own solid may hide part of it from itself: anything
+            // between 0 and the unobstructed value, said so in the estimate
+            counters[CURVED_ON_POLYGONS]++;
+            lastError += 0.5 * s;
+            return 0.5 * s;
+        }
+        counters[CURVED_EXACT]++;
+        return s;
+    }
+
+    /**
+     * A pair with an exact curved side: 0 when one is behind the other, the contour integral over
+     * the exact boundaries when each sees all of the other with nothing in the way, else NaN
+     * (the polygon methods then take it, see {@link #polygonFallback}).
+     */
+    private double curvedPair(int i, int j) {
+        p.load(t, i);
+        q.load(t, j);
+        int kind = curved.classify(i, p, j, q);
+        if (kind == CurvedPairs.ZERO) {
+            counters[ZERO]++;
+            counters[CURVED_EXACT]++;
+            return 0;
+        }
+        if (blocked(i, j)) {
+            return Double.NaN;
+        }
+        if (kind == CurvedPairs.PARTIAL) {
+            counters[QUADRATURE]++;
+            counters[CURVED_EXACT]++;
+            double s = curved.partialExchangeArea(i, p, j, q);
+            lastError = curved.lastError;
+            return s;
+        }
+        counters[CONTOUR]++;
+        counters[CURVED_EXACT]++;
+        double s = curved.exchangeArea(i, p, j, q);
+        lastError = curved.lastError;
+        return s;
+    }
+
+    /**
+     * Whether an occluder may block the exact pair (p, q loaded): the hull of the two polygons,
+     * widened by both patches' sagittas, holds a facet that does not bound a region containing
+     * both.
+     */
+    private boolean blocked(int i, int j) {
+        if (occluders == null) {
+            return false;
+        }
+        shaft.build(p, q);
+        int found = occluders.collect(shaft.planes, shaft.count, shaft.tolerance + t.sagitta[i] + t.sagitta[j], i, j,
+                owners);
+        if (found < 0) {
+            return true;
+        }
+        for (int k = 0; k < found; k++) {
+            if (!curved.cannotBlock(owners[k], i, p, j, q)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * A curved pair the exact methods do not take: the polygon methods on the two polygons, scaled
+     * to the exact areas (√ of both ratios, which keeps reciprocity). The polygons' shape error
+     * enters the estimate: the exchange area times the larger relative area difference, twice.
+     *
+     * @param s the polygons' exchange area (m²)
+     */
+    private double polygonFallback(int i, int j, double s) {
+        counters[CURVED_ON_POLYGONS]++;
+        double ri = t.exactArea[i] / t.area[i], rj = t.exactArea[j] / t.area[j];
+        double scaled = s * Math.sqrt(ri * rj);
+        lastError += 2 * scaled * Math.max(Math.abs(1 - ri), Math.abs(1 - rj));
+        return scaled;
     }
 
     /**
@@ -80,6 +175,20 @@ final class PairEvaluator {
             j = swap;
         }
         lastError = 0;
+        boolean exact = curved != null && curved.involved(i, j);
+        if (exact) {
+            double v = curvedPair(i, j);
+            if (!Double.isNaN(v)) {
+                return v;
+            }
+            double s = polygons(i, j);
+            return polygonFallback(i, j, s);
+        }
+        return polygons(i, j);
+    }
+
+    /** A_i F_ij of two polygon facets (the methods of the class doc); sets {@link #lastError}. */
+    private double polygons(int i, int j) {
         double tol = 1e-9 * (t.radius[i] + t.radius[j]);
         int sideJ = side(i, j, tol);
         int sideI = side(j, i, tol);

@@ -90,6 +90,11 @@ public final class ViewFactorCalculator {
                         if (cancelRequested.getAsBoolean()) {
                             throw new CancellationException("view-factor computation cancelled");
                         }
+                        if (t.patch[i] != null && t.patch[i].concave()) {
+                            // a concave patch sees itself
+                            f[i * n + i] = ev.selfExchangeArea(i) / t.exactArea[i];
+                            err[i] += ev.lastError;
+                        }
                         for (int j = i + 1; j < n; j++) {
                             double s = ev.exchangeArea(i, j);
                             if (!Double.isFinite(s) || !Double.isFinite(ev.lastError)) {
@@ -97,8 +102,8 @@ public final class ViewFactorCalculator {
                                 throw new ArithmeticException("non-finite exchange area between facets " + i
                                         + " and " + j + " (internal error)");
                             }
-                            f[i * n + j] = s / t.area[i];
-                            f[j * n + i] = s / t.area[j];
+                            f[i * n + j] = s / t.exactArea[i];
+                            f[j * n + i] = s / t.exactArea[j];
                             err[i] += ev.lastError;
                             err[j] += ev.lastError;
                         }
@@ -129,9 +134,9 @@ public final class ViewFactorCalculator {
         }
         double maxRowError = 0;
         for (int i = 0; i < n; i++) {
-            maxRowError = Math.max(maxRowError, rowError[i] / t.area[i]);
+            maxRowError = Math.max(maxRowError, rowError[i] / t.exactArea[i]);
         }
-        SmoothingReport smoothing = ExchangeAreaSmoother.smooth(f, n, t.area, options.smoothing());
+        SmoothingReport smoothing = ExchangeAreaSmoother.smooth(f, n, t.exactArea, options.smoothing());
         return assemble(scene, options, t, f, counts, maxRowError, smoothing, threads, start);
     }
 
@@ -140,13 +145,13 @@ public final class ViewFactorCalculator {
         int n = t.count, m = scene.surfaceCount();
         double[] sArea = new double[m];
         for (int i = 0; i < n; i++) {
-            sArea[t.surfaceOf[i]] += t.area[i];
+            sArea[t.surfaceOf[i]] += t.exactArea[i];
         }
         double[][] sf = new double[m][m];
         for (int i = 0; i < n; i++) {
             double[] row = sf[t.surfaceOf[i]];
             for (int j = 0; j < n; j++) {
-                row[t.surfaceOf[j]] += t.area[i] * f[i * n + j];
+                row[t.surfaceOf[j]] += t.exactArea[i] * f[i * n + j];
             }
         }
         double[] env = new double[m];
@@ -167,12 +172,13 @@ public final class ViewFactorCalculator {
             firstOfSurface[t.surfaceOf[i]] = i;
         }
         ClosureDiagnostics surfaceClosure = ClosureDiagnostics.of(flat, m, sArea, names::get);
-        ClosureDiagnostics facetClosure = ClosureDiagnostics.of(f, n, t.area,
+        ClosureDiagnostics facetClosure = ClosureDiagnostics.of(f, n, t.exactArea,
                 i -> names.get(t.surfaceOf[i]) + "#" + (i - firstOfSurface[t.surfaceOf[i]]));
         MethodCounts mc = new MethodCounts(counts[PairEvaluator.ZERO], counts[PairEvaluator.CLIPPED],
                 counts[PairEvaluator.CONTOUR], counts[PairEvaluator.QUADRATURE], counts[PairEvaluator.PARTIAL],
-                counts[PairEvaluator.HIDDEN], counts[PairEvaluator.RAYS]);
-        return new ViewFactorResult(names, sArea, sf, env, n, t.area.clone(), t.surfaceOf.clone(), f, surfaceClosure,
+                counts[PairEvaluator.HIDDEN], counts[PairEvaluator.RAYS], counts[PairEvaluator.CURVED_ON_POLYGONS],
+                counts[PairEvaluator.CURVED_EXACT]);
+        return new ViewFactorResult(names, sArea, sf, env, n, t.exactArea.clone(), t.surfaceOf.clone(), f, surfaceClosure,
                 facetClosure, mc, maxRowError, smoothing, GeometryHash.of(scene, options), options, threads,
                 (System.nanoTime() - start) * 1e-9);
     }
