@@ -139,7 +139,10 @@ public final class ViewFactorStage {
         String methods = String.format(java.util.Locale.ROOT,
                 "%d pairs: %d contour integral, %d area quadrature, %d clipped, %d partly hidden (sampled),"
                         + " %d hidden, %d facing away or coplanar",
-                m.total(), m.contour(), m.quadrature(), m.clipped(), m.partlyHidden(), m.hidden(), m.zero());
+                m.total(), m.contour(), m.quadrature(), m.clipped(), m.partlyHidden(), m.hidden(), m.zero())
+                + (m.curvedExact() + m.curvedOnPolygons() == 0 ? "" : String.format(java.util.Locale.ROOT,
+                        "; with a curved side: %d on the exact shapes, %d on their polygons (something round may be in"
+                                + " the way; the shape error is in the estimate)", m.curvedExact(), m.curvedOnPolygons()));
         SmoothingReport s = r.smoothing();
         String smoothing = s.applied() ? String.format(java.util.Locale.ROOT,
                 "%s: largest change %.3g, rms change %.3g, %d entries held at 0", s.mode(), s.maxChange(),
