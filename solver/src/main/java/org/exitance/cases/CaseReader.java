@@ -44,7 +44,7 @@ public final class CaseReader {
         if (geometry != null) {
             geometryAreas = new LinkedHashMap<>();
             for (var s : geometry.scene().surfaces()) {
-                geometryAreas.put(s.name(), s.area());
+                geometryAreas.put(s.name(), s.exactArea());
             }
             geometry.notes().forEach(n -> warnings.add("geometry: " + n));
         }
