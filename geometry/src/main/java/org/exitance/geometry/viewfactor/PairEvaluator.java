@@ -70,7 +70,7 @@ final class PairEvaluator {
         this.shadow = occluders == null ? null : new ShadowIntegral(t, occluders, planes.prepared(), convex.view(),
                 new EventLines(t, edges, planes), edges.closed, MAX_OCCLUDERS, this::sortByKey);
         this.visibilityTolerance = Math.min(1e-2, 100 * rule.tolerance());
-        this.curved = t.curved ? new CurvedPairs(t, 0.1 * rule.tolerance()) : null;
+        this.curved = t.curved ? new CurvedPairs(t, 0.1 * rule.tolerance(), rule) : null;
     }
 
     /**

@@ -65,11 +65,12 @@ class CatalogCasesTest {
     void concentricPrismsApproachTheTwoDimensionalValueAndOuterSeesItself() {
         int n = 24;
         double r1 = 0.5, r2 = 1, len = 30;
-        List<Facet> inner = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r1, len, n, 30, Facing.OUTWARD);
-        List<Facet> outer = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r2, len, n, 30, Facing.INWARD);
+        // exact cylinder patches: the divisions need not resolve the shape, only keep the run short
+        List<Facet> inner = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r1, len, n, 10, Facing.OUTWARD);
+        List<Facet> outer = Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, r2, len, n, 10, Facing.INWARD);
         ViewFactorResult r = compute(Scene.builder().add("inner", inner).add("outer", outer).build());
         // long concentric cylinders: F_21 = r1/r2, F_22 = 1 − r1/r2 (Incropera 6th ed. Table 13.1);
-        // for the inscribed prisms the perimeter ratio equals r1/r2; open ends lose O(r/len)
+        // open ends lose O(r/len)
         assertThat(r.surfaceFactor(1, 0)).isCloseTo(r1 / r2, within(0.03));
         assertThat(r.surfaceFactor(1, 1)).isCloseTo(1 - r1 / r2, within(0.03));
         assertThat(r.surfaceFactor(1, 1)).isPositive();
