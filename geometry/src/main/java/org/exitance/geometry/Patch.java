@@ -260,24 +260,6 @@ public final class Patch {
         System.arraycopy(f, 3, out, off + 7, 9);
     }
 
-    /**
-     * @return the u of the point nearest to (x, y, z) on the meridian of the whole (unbounded)
-     *         surface through that point, clamped to [u0, u1]: where a near point's kernel peaks
-     */
-    public double nearestU(double x, double y, double z) {
-        double[] f = frame;
-        double vx = x - f[0], vy = y - f[1], vz = z - f[2];
-        double h = vx * f[9] + vy * f[10] + vz * f[11];
-        double px = vx - h * f[9], py = vy - h * f[10], pz = vz - h * f[11];
-        double rho = Math.sqrt(px * px + py * py + pz * pz);
-        double u = switch (kind) {
-            case PLANE -> rho;
-            case CONE -> (h + b * (rho - a)) / (1 + b * b);
-            case SPHERE -> Math.atan2(rho, h);
-        };
-        return Math.max(u0, Math.min(u1, u));
-    }
-
     /** @return metres per unit of u along the patch (1 for PLANE and CYLINDER, √(1 + k²) for a cone, R for a sphere) */
     public double metresPerU() {
         return lengthU() / (u1 - u0);
@@ -313,20 +295,6 @@ public final class Patch {
             case CONE -> Math.max(a + b * u0, a + b * u1);
             case SPHERE -> a * ((u0 <= Math.PI / 2 && u1 >= Math.PI / 2) ? 1 : Math.max(Math.sin(u0), Math.sin(u1)));
         };
-    }
-
-    /**
-     * @param o another patch
-     * @return true if both lie on the same plane, cone or sphere (same frame and shape numbers),
-     *         whatever their ranges and sides
-     */
-    public boolean sameSurface(Patch o) {
-        return kind == o.kind && a == o.a && b == o.b && java.util.Arrays.equals(frame, o.frame);
-    }
-
-    /** @return the same parametrisation over a sub-rectangle */
-    public Patch sub(double nu0, double nu1, double nphi0, double nphi1) {
-        return new Patch(kind, frame, a, b, nu0, nu1, nphi0, nphi1, sign);
     }
 
     /** @return the same surface radiating from its other side */
