@@ -57,7 +57,7 @@ public record Schedule(double[] timeS, double[] value, double repeatS) {
         return value[0];
     }
 
-    /** The times in (from, to] (s) where the schedule has a point (repeated with its period); a new list. */
+    /** The distinct times in (from, to] (s) where the schedule has a point (repeated with its period), in order. */
     public List<Double> knotsIn(double from, double to) {
         List<Double> out = new ArrayList<>();
         if (Double.isNaN(repeatS)) {
@@ -66,7 +66,7 @@ public record Schedule(double[] timeS, double[] value, double repeatS) {
                     out.add(k);
                 }
             }
-            return out;
+            return out.stream().distinct().toList();
         }
         long first = (long) Math.floor(from / repeatS);
         for (long c = first; c * repeatS <= to; c++) {
@@ -77,6 +77,6 @@ public record Schedule(double[] timeS, double[] value, double repeatS) {
                 }
             }
         }
-        return out;
+        return out.stream().distinct().sorted().toList();
     }
 }

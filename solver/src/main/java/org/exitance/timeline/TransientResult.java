@@ -11,6 +11,7 @@ import java.util.List;
  * @param samples      the output instants, in time order
  * @param extremes     per unknown node, its lowest and highest temperature at the steps
  * @param targets      per target, the time it was first reached (NaN: not reached)
+ * @param switches     every thermostat switch, in time order
  * @param cycles       in a periodic run, one entry per period integrated; empty otherwise
  * @param repeated     in a periodic run, whether the last period repeated within the tolerance
  * @param energy       the run's energy account
@@ -19,7 +20,7 @@ import java.util.List;
  * @param bands        the band set's label
  */
 public record TransientResult(String title, List<String> surfaces, List<String> shown, List<Sample> samples,
-                              List<Extremes> extremes, List<TargetTime> targets, List<Cycle> cycles, boolean repeated,
+                              List<Extremes> extremes, List<TargetTime> targets, List<Switch> switches, List<Cycle> cycles, boolean repeated,
                               Energy energy, Steps steps, double toleranceK, String bands) {
     public TransientResult {
         surfaces = List.copyOf(surfaces);
@@ -28,6 +29,7 @@ public record TransientResult(String title, List<String> surfaces, List<String> 
         extremes = List.copyOf(extremes);
         targets = List.copyOf(targets);
         cycles = List.copyOf(cycles);
+        switches = List.copyOf(switches);
     }
 
     /** Index of a surface by name, or −1. */
@@ -37,6 +39,9 @@ public record TransientResult(String title, List<String> surfaces, List<String> 
 
     /** Lowest and highest temperature of a node (K) and when (s). */
     public record Extremes(String surface, double minK, double minTimeS, double maxK, double maxTimeS) { }
+
+    /** A thermostat switched its heater on or off at a time (s). */
+    public record Switch(double timeS, String heater, boolean on) { }
 
     /** The first time (s) a node reached a temperature (K), NaN when it did not. */
     public record TargetTime(String surface, double targetK, double timeS) { }

@@ -69,6 +69,7 @@ public final class TransientRun {
         double smallest = Double.POSITIVE_INFINITY;
         double largest = 0;
         List<TransientResult.Cycle> cycles = new ArrayList<>();
+        List<TransientResult.Switch> switchLog = new ArrayList<>();
         State cycleStart = cur;
         double cycleSupplied = 0;
         double cycleLost = 0;
@@ -140,6 +141,7 @@ public final class TransientRun {
                 if (flip[k]) {
                     on[k] = !on[k];
                     switches++;
+                    switchLog.add(new TransientResult.Switch(cur.timeS(), thermostats.get(k).heater(), on[k]));
                     restart = true;
                 }
             }
@@ -178,7 +180,7 @@ public final class TransientRun {
         var energy = new TransientResult.Energy(rec.storedStartJ(), s.storedJ(cur), rec.suppliedJ, rec.lostJ);
         var steps = new TransientResult.Steps(accepted, rejected, accepted == 0 ? 0 : smallest, largest, switches);
         return new TransientResult(c.model().title(), names(enc), shown(enc), rec.samples(), rec.extremes(),
-                rec.targets(), cycles, repeated, energy, steps, fixed ? Double.NaN : ts.toleranceK(), bands.origin());
+                rec.targets(), switchLog, cycles, repeated, energy, steps, fixed ? Double.NaN : ts.toleranceK(), bands.origin());
     }
 
     /** The next output instant after t (s): a multiple of the spacing, a listed instant, or the end. */
