@@ -145,9 +145,11 @@ public final class TransientRun {
                     restart = true;
                 }
             }
+            boolean sampled = false;
             if (cur.timeS() >= nextOutput * (1 - 1e-12) || cur.timeS() >= end * (1 - 1e-12)) {
                 rec.sample(cur, on, cur.timeS());
                 nextOutput = nextOutput(cur.timeS());
+                sampled = true;
             }
             if (cur.timeS() >= nextPeriod * (1 - 1e-12)) {
                 double change = maxDifference(cur.vector(s.nodes), cycleStart.vector(s.nodes));
@@ -160,7 +162,7 @@ public final class TransientRun {
                 nextPeriod += ts.periodS();
                 if (change <= ts.periodToleranceK()) {
                     repeated = true;
-                    if (cur.timeS() < end * (1 - 1e-12)) {
+                    if (!sampled) {
                         rec.sample(cur, on, cur.timeS());
                     }
                     break;
