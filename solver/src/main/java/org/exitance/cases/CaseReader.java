@@ -86,6 +86,10 @@ public final class CaseReader {
                 geometry != null && geometry.solveOnFacets());
         TimeReader.Block time = root.has("time")
                 ? TimeReader.read(root.field("time"), surfaces, sourceNames, env != null) : null;
+        if (time != null && geometry != null && geometry.solveOnFacets()) {
+            throw root.field("time").error("a case in time is solved on its surfaces: leave the geometry's"
+                    + " \"resolution\" at \"surfaces\"");
+        }
         if (time != null && !loadCases.isEmpty()) {
             throw root.field("loadCases").error("a case with a time block runs as given: its schedules take the place"
                     + " of load cases (leave one of them out)");
