@@ -81,7 +81,7 @@ public final class CaseReader {
                 geometry != null && geometry.solveOnFacets());
         Map<String, org.exitance.conduction.Wall> walls = StorageReader.walls(root.field("surfaces"), surfaces);
         Map<String, org.exitance.conduction.HeatCapacity> caps = StorageReader.capacities(root.field("surfaces"),
-                surfaces);
+                surfaces, covers);
         requireStorable(root.field("surfaces"), surfaces, walls, caps, covers,
                 geometry != null && geometry.solveOnFacets());
         TimeReader.Block time = root.has("time")

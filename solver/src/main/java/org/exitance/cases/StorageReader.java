@@ -22,10 +22,23 @@ final class StorageReader {
     }
 
     /** Heat capacities by the surface that carries the node's condition (a face's other face for a two-sided node). */
-    static Map<String, HeatCapacity> capacities(JsonCursor arr, List<EnclosureSurface> surfaces) throws CaseException {
+    static Map<String, HeatCapacity> capacities(JsonCursor arr, List<EnclosureSurface> surfaces,
+                                                Map<String, org.exitance.model.Cover> covers) throws CaseException {
         Map<String, HeatCapacity> out = new LinkedHashMap<>();
         List<JsonCursor> el = arr.elements();
         for (int i = 0; i < el.size(); i++) {
+            String name = surfaces.get(i).name();
+            if (el.get(i).has("coveredBy") && el.get(i).field("coveredBy").has("layerThermalMass")) {
+                // each sheet of the pack is a two-sided node carried by its inner face (pipeline/CoverExpansion)
+                JsonCursor lm = el.get(i).field("coveredBy").field("layerThermalMass").allowOnly("heatCapacity_J_K",
+                        "mass_kg", "specificHeat_J_kgK", "specificHeatTable");
+                HeatCapacity each = capacity(lm);
+                org.exitance.model.Cover c = covers.get(name);
+                int sheets = c.effective() ? 1 : c.layers();
+                for (int k = 1; k <= sheets; k++) {
+                    out.put(c.effective() ? name + ".cover.in" : name + ".layer" + k + ".in", each);
+                }
+            }
             if (!el.get(i).has("thermalMass")) {
                 continue;
             }

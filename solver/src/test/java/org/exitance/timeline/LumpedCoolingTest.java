@@ -32,8 +32,12 @@ class LumpedCoolingTest {
     static final double T0 = 900;     // K
 
     static RadiationCase body(double sinkK) {
+        return body(sinkK, T0);
+    }
+
+    static RadiationCase body(double sinkK, double initialK) {
         EnclosureSurface s = new EnclosureSurface("body", new Material("m", new GrayEmissivity(EPS), ""), AREA,
-                new BoundaryCondition.Adiabatic(), T0);
+                new BoundaryCondition.Adiabatic(), initialK);
         return Cases.of(new Enclosure(List.of(s), new double[][] {{0}}, new Environment("sink", sinkK)), null);
     }
 

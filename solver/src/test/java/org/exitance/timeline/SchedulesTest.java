@@ -113,4 +113,39 @@ class SchedulesTest {
         // what a period leaves unbalanced is at most C·(the repeat tolerance) = 400 J of 2e6 J
         assertThat(emitted).isCloseTo(absorbed, within(5e-4 * absorbed));
     }
+
+    @Test
+    void aRampedThenHeldDissipationIntegratesExactly() {
+        // a node that sees only itself (F = 1: no net radiation) under P(t) = 0.1 W/s · t up to 1000 s, then
+        // 100 W: C dT/dt = P, so T = T0 + ∫P dt / C, a quadratic then a line (calculus); BDF2 reproduces
+        // polynomials of degree 2 exactly, so only rounding and Newton's tolerance remain
+        double c = 2000;
+        EnclosureSurface s = new EnclosureSurface("node", new Material("m", new GrayEmissivity(0.5), ""), 1.0,
+                new BoundaryCondition.HeatInput(0), Double.NaN);
+        RadiationCase m = Cases.of(new Enclosure(List.of(s), new double[][] {{1}}, null), null);
+        Schedule ramp = new Schedule(new double[] {0, 1000}, new double[] {0, 100}, Double.NaN);
+        Drivers d = new Drivers(Map.of("node", ramp), Map.of(), Map.of(), null, List.of());
+        TransientResult r = Transients.run(m, Map.of("node", HeatCapacity.ofJPerK(c)), d,
+                Transients.adaptive(2000, 1e-3, 300, 500, 1000, 2000));
+        assertThat(Transients.at(r, "node", 500)).isCloseTo(300 + 0.5 * 0.1 * 500 * 500 / c, within(1e-6));
+        assertThat(Transients.at(r, "node", 1000)).isCloseTo(300 + 0.5 * 0.1 * 1000 * 1000 / c, within(1e-6));
+        assertThat(Transients.at(r, "node", 2000)).isCloseTo(300 + (50_000 + 100_000) / c, within(1e-6));
+    }
+
+    @Test
+    void anEnvironmentStepHeatsTheBodyAsTheLumpedClosedFormSays() {
+        // the environment jumps from 300 K to 400 K at 1000 s; the body, at 300 K, then warms by
+        // radiation alone (Incropera, 6th ed., eq. 5.18 with T_sur = 400 K, from memory; its quadrature
+        // check is in LumpedCoolingTest): nothing moves before the step
+        Schedule env = new Schedule(new double[] {0, 1000, 1000}, new double[] {300, 300, 400}, Double.NaN);
+        Drivers d = new Drivers(Map.of(), Map.of(), Map.of(), env, List.of());
+        double t350 = 1000 + LumpedCoolingTest.closedForm(400, 300, 350);
+        double t390 = 1000 + LumpedCoolingTest.closedForm(400, 300, 390);
+        RadiationCase body = LumpedCoolingTest.body(300, 300);
+        TransientResult r = Transients.run(body, Map.of("body", HeatCapacity.ofJPerK(LumpedCoolingTest.C)), d,
+                Transients.adaptive(t390 + 10, 1e-3, 300, 999, t350, t390));
+        assertThat(Transients.at(r, "body", 999)).isCloseTo(300, within(1e-9));
+        assertThat(Transients.at(r, "body", t350)).isCloseTo(350, within(0.05));
+        assertThat(Transients.at(r, "body", t390)).isCloseTo(390, within(0.05));
+    }
 }
