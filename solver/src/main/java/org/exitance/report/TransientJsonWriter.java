@@ -34,6 +34,7 @@ public final class TransientJsonWriter {
             o.put("stored_J", s.storedJ());
             o.put("supplied_J", s.suppliedJ());
             o.put("lost_J", s.lostJ());
+            o.put("drift_J", s.storedJ() - r.energy().storedStartJ() - (s.suppliedJ() - s.lostJ()));
             put(o.putArray("temperature_K"), s.temperatureK());
             put(o.putArray("heater_W"), s.heaterW());
             put(o.putArray("netRadiation_W"), s.radiationW());

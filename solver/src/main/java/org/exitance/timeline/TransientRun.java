@@ -74,6 +74,7 @@ public final class TransientRun {
         double cycleSupplied = 0;
         double cycleLost = 0;
         boolean repeated = false;
+        int locating = 0;
         double nextOutput = nextOutput(0);
         double nextPeriod = ts.periodic() ? ts.periodS() : Double.POSITIVE_INFINITY;
         while (cur.timeS() < end * (1 - 1e-12)) {
@@ -125,11 +126,12 @@ public final class TransientRun {
                     }
                 }
             }
-            if (shorten < 1 && hTry * shorten >= ts.minStepS()) {
+            if (shorten < 1 && hTry * shorten >= ts.minStepS() && locating++ < 20) {
                 h = hTry * shorten * (1 + 1e-6);
                 continue; // locate the switch: retry the step so that it ends at the threshold
             }
             rec.step(cur, cand, on);
+            locating = 0;
             accepted++;
             smallest = Math.min(smallest, hTry);
             largest = Math.max(largest, hTry);
