@@ -37,6 +37,10 @@ import org.exitance.model.SolverSettings;
  * @param warnings    non-fatal findings of reading (mesh repairs, small matrix errors), one line each
  * @param covers      insulation blankets and shield packs by covered surface name (empty for none)
  * @param section     the 2-D cross-section of an infinitely long case, or null
+ * @param walls       layered walls behind surfaces, by surface name (empty for none)
+ * @param capacities  heat capacities by the surface that carries a node's condition (empty for none)
+ * @param time        the {@code time} block's settings, or null without one
+ * @param drivers     the {@code time} block's schedules and thermostats, or null without one
  * @param measurementTolerances  for each window whose ε, ρ and τ are all given, by material name:
  *                    the stated or default measurement tolerance (empty for none)
  */
@@ -45,8 +49,13 @@ public record CaseDescription(Path file, String title, String notes, List<Materi
                               double[][] viewFactors, CaseGeometry geometry, BandSet bands, SolverSettings settings,
                               List<CaseSource> sources, List<LoadCase> loadCases, JsonCursor expected,
                               List<String> warnings, Map<String, Cover> covers, CaseSection section,
-                              Map<String, MeasurementTolerance> measurementTolerances) {
+                              Map<String, MeasurementTolerance> measurementTolerances,
+                              Map<String, org.exitance.conduction.Wall> walls,
+                              Map<String, org.exitance.conduction.HeatCapacity> capacities,
+                              org.exitance.timeline.TimeSettings time, org.exitance.timeline.Drivers drivers) {
     public CaseDescription {
+        walls = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(walls));
+        capacities = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(capacities));
         measurementTolerances = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(measurementTolerances));
         covers = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(covers));
         materials = List.copyOf(materials);

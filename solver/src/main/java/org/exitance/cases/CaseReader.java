@@ -34,7 +34,7 @@ public final class CaseReader {
         Path dir = file.toAbsolutePath().getParent();
         List<String> warnings = new ArrayList<>();
         root.allowOnly("$schema", "title", "notes", "materials", "surfaces", "environment", "viewFactors", "geometry",
-                "section", "bands", "conductiveLinks", "sources", "loadCases", "solver", "expected");
+                "section", "bands", "conductiveLinks", "sources", "loadCases", "solver", "expected", "time");
         if (root.has("$schema")) {
             root.field("$schema").text(); // where an editor finds the case schema (docs/case.schema.json); not used
         }
@@ -82,9 +82,45 @@ public final class CaseReader {
         JsonCursor expected = root.has("expected") ? root.field("expected") : null;
         Map<String, Cover> covers = CoverReader.read(root.field("surfaces"), surfaces, materials,
                 geometry != null && geometry.solveOnFacets());
+        Map<String, org.exitance.conduction.Wall> walls = StorageReader.walls(root.field("surfaces"), surfaces);
+        Map<String, org.exitance.conduction.HeatCapacity> caps = StorageReader.capacities(root.field("surfaces"),
+                surfaces, covers);
+        requireStorable(root.field("surfaces"), surfaces, walls, caps, covers,
+                geometry != null && geometry.solveOnFacets());
+        TimeReader.Block time = root.has("time")
+                ? TimeReader.read(root.field("time"), surfaces, sourceNames, env != null) : null;
+        if (time != null && geometry != null && geometry.solveOnFacets()) {
+            throw root.field("time").error("a case in time is solved on its surfaces: leave the geometry's"
+                    + " \"resolution\" at \"surfaces\"");
+        }
+        if (time != null && !loadCases.isEmpty()) {
+            throw root.field("loadCases").error("a case with a time block runs as given: its schedules take the place"
+                    + " of load cases (leave one of them out)");
+        }
         return new CaseDescription(file, title, notes, new ArrayList<>(materials.values()), surfaces, env, links,
                 matrix, geometry, bands, settings, sources, loadCases, expected, warnings, covers, section,
-                MaterialReader.measurementTolerances(root.field("materials")));
+                MaterialReader.measurementTolerances(root.field("materials")), walls, caps,
+                time == null ? null : time.settings(), time == null ? null : time.drivers());
+    }
+
+    /** Walls and thermal masses sit on surfaces solved as themselves: not on facets, not under a cover. */
+    private static void requireStorable(JsonCursor arr, List<EnclosureSurface> surfaces,
+                                        Map<String, org.exitance.conduction.Wall> walls,
+                                        Map<String, org.exitance.conduction.HeatCapacity> caps, Map<String, Cover> covers,
+                                        boolean onFacets) throws CaseException {
+        List<JsonCursor> el = arr.elements();
+        for (int i = 0; i < el.size(); i++) {
+            String name = surfaces.get(i).name();
+            boolean stores = walls.containsKey(name) || el.get(i).has("thermalMass");
+            if (stores && onFacets) {
+                throw el.get(i).error("walls and thermal masses belong to whole surfaces: leave the geometry's"
+                        + " \"resolution\" at \"surfaces\"");
+            }
+            if (walls.containsKey(name) && covers.containsKey(name)) {
+                throw el.get(i).field("wall").error("a covered surface's outer face is the cover's: give the wall or the"
+                        + " cover, not both");
+            }
+        }
     }
 
     /** A case solved facet by facet: no conductive links and no windows (both join whole surfaces). */

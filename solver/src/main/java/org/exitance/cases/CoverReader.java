@@ -29,7 +29,7 @@ final class CoverReader {
                 continue;
             }
             JsonCursor c = s.field("coveredBy").allowOnly("layers", "layerMaterial", "layerMaterials", "outerMaterial",
-                    "effectiveEmittance", "description");
+                    "effectiveEmittance", "layerThermalMass", "description");
             EnclosureSurface surface = surfaces.get(i);
             if (surface.isWindowFace()) {
                 throw c.error("a window cannot be covered: its faces pass radiation through");

@@ -105,6 +105,35 @@ public final class Limits {
     /** Size of a case file, a mesh file or a CSV file (bytes). */
     public static final Range FILE_BYTES = new Range("file size", 0, 256L * 1024 * 1024, "bytes");
 
+    /** Heat capacity of a node (J/K). */
+    public static final Range HEAT_CAPACITY_J_K = new Range("heat capacity", 1e-6, 1e12, "J/K");
+    /** Mass of a node (kg). */
+    public static final Range MASS_KG = new Range("mass", 1e-9, 1e9, "kg");
+    /** Specific heat of a node or a wall layer (J/(kg·K)). */
+    public static final Range SPECIFIC_HEAT_J_KGK = new Range("specific heat", 1e-3, 1e7, "J/(kg·K)");
+    /** Thermal conductivity of a wall layer (W/(m·K)). */
+    public static final Range CONDUCTIVITY_W_MK = new Range("thermal conductivity", 1e-5, 1e4, "W/(m·K)");
+    /** Density of a wall layer (kg/m³). */
+    public static final Range DENSITY_KG_M3 = new Range("density", 1e-3, 1e5, "kg/m³");
+    /** Thickness of a wall layer (m). */
+    public static final Range THICKNESS_M = new Range("layer thickness", 1e-6, 100, "m");
+    /** Finite-volume cells of one wall layer. */
+    public static final Range WALL_CELLS = new Range("wall cells", 1, 400, "");
+    /** Layers of one wall. */
+    public static final Range WALL_LAYERS = new Range("wall layers", 1, 100, "");
+    /** Duration of a transient, and its period (s). */
+    public static final Range DURATION_S = new Range("duration", 1e-3, 1e10, "s");
+    /** Instants of schedules and outputs (s). */
+    public static final Range TIME_S = new Range("time", 0, 1e10, "s");
+    /** Time steps and output spacing (s). */
+    public static final Range STEP_S = new Range("time step", 1e-12, 1e10, "s");
+    /** The local error per step and the repeat tolerance of a periodic run (K). */
+    public static final Range STEP_TOLERANCE_K = new Range("step tolerance", 1e-8, 100, "K");
+    /** Periods of a periodic run. */
+    public static final Range CYCLES = new Range("cycles", 1, 10_000, "");
+    /** The factor on a source's irradiance in a schedule. */
+    public static final Range SOURCE_SCALE = new Range("source scale", 0, 1000, "");
+
     /** Every range, in the order of the table in docs/case-format.md. */
     /** Layers of one insulation blanket or shield pack. */
     public static final Range COVER_LAYERS = new Range("cover layers", 1, 500, "");
@@ -114,7 +143,9 @@ public final class Limits {
             PLANET_RADIUS_M, ALTITUDE_M, WAVELENGTH_UM, CONDUCTANCE_W_K, CONVECTION_W_M2K, IRRADIANCE_W_M2,
             SPECTRAL_IRRADIANCE_W_M2_UM, HEAT_W, FLUX_W_M2, FRACTION, TEMPERATURE_TOLERANCE_K,
             RELATIVE_HEAT_TOLERANCE, MATRIX_TOLERANCE, PAIR_TOLERANCE, VIEW_FACTOR_TOLERANCE, NEWTON_ITERATIONS, PROPERTY_ITERATIONS,
-            VISIBILITY_ORDER, THREADS, DIVISIONS, FACETS, BAND_EDGES, TABLE_POINTS, FILE_BYTES, COVER_LAYERS);
+            VISIBILITY_ORDER, THREADS, DIVISIONS, FACETS, BAND_EDGES, TABLE_POINTS, FILE_BYTES, COVER_LAYERS,
+            HEAT_CAPACITY_J_K, MASS_KG, SPECIFIC_HEAT_J_KGK, CONDUCTIVITY_W_MK, DENSITY_KG_M3, THICKNESS_M, WALL_CELLS,
+            WALL_LAYERS, DURATION_S, TIME_S, STEP_S, STEP_TOLERANCE_K, CYCLES, SOURCE_SCALE);
 
     private Limits() {
     }

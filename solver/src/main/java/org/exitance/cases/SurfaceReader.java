@@ -33,7 +33,7 @@ final class SurfaceReader {
         for (JsonCursor s : el) {
             s.allowOnly("name", "material", "area_m2", "temperature_K", "temperature_C", "netHeat_W",
                     "netFlux_W_m2", "dissipation_W", "adiabatic", "convection", "initialTemperature_K",
-                    "initialTemperature_C", "description", "otherFace", "coveredBy");
+                    "initialTemperature_C", "description", "otherFace", "coveredBy", "thermalMass", "wall");
             JsonCursor nameCursor = s.field("name");
             String name = nameCursor.nonEmptyText();
             if (seen.containsKey(name)) {

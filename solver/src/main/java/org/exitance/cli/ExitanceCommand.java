@@ -18,7 +18,7 @@ import picocli.CommandLine.Command;
         resourceBundle = "org.exitance.cli.OptionHelp",
         description = {"Thermal radiation exchange in enclosures whose surfaces are not gray:",
                 "band-wise radiosity network, net heat flows and unknown temperatures."},
-        subcommands = {SolveCommand.class, CheckCommand.class, ViewFactorsCommand.class, AuditCommand.class, SensitivityCommand.class, VerifyCommand.class, MaterialCommand.class,
+        subcommands = {SolveCommand.class, TransientCommand.class, CheckCommand.class, ViewFactorsCommand.class, AuditCommand.class, SensitivityCommand.class, VerifyCommand.class, MaterialCommand.class,
                 CommandLine.HelpCommand.class},
         footer = {"", ExitCodes.HELP, "Documentation: README.md and docs/ in the source tree."})
 public final class ExitanceCommand implements Runnable {

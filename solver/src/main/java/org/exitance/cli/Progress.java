@@ -14,8 +14,10 @@ final class Progress implements ProgressListener {
     private int lastPercent = -1;
     private boolean printed;
     private final Thread hook;
+    private final String label;
 
-    private Progress(boolean show, PrintWriter err) {
+    private Progress(boolean show, PrintWriter err, String label) {
+        this.label = label;
         this.show = show;
         this.err = err;
         this.hook = new Thread(() -> cancelled = true, "exitance-cancel");
@@ -24,7 +26,12 @@ final class Progress implements ProgressListener {
 
     /** @param wanted false with --quiet */
     static Progress onStderr(boolean wanted, PrintWriter err) {
-        return new Progress(wanted && System.console() != null, err);
+        return onStderr(wanted, err, "view factors");
+    }
+
+    /** @param label  what is running ("time") */
+    static Progress onStderr(boolean wanted, PrintWriter err, String label) {
+        return new Progress(wanted && System.console() != null, err, label);
     }
 
     @Override
@@ -33,7 +40,7 @@ final class Progress implements ProgressListener {
         if (show && p != lastPercent) {
             lastPercent = p;
             printed = true;
-            err.print("\rview factors: " + p + " %");
+            err.print("\r" + label + ": " + p + " %");
             err.flush();
         }
     }

@@ -1,5 +1,8 @@
 package org.exitance.model;
 
+import java.util.Map;
+import org.exitance.conduction.Wall;
+
 import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
@@ -22,6 +25,7 @@ public final class Enclosure {
     private final ViewFactorMatrix viewFactors;
     private final Environment environment;
     private final List<ConductiveLink> links;
+    private final Map<String, Wall> walls;
 
     /** An enclosure without conductive links; the rows are copied once. */
     public Enclosure(List<EnclosureSurface> surfaces, double[][] viewFactors, Environment environment) {
@@ -47,6 +51,19 @@ public final class Enclosure {
      */
     public Enclosure(List<EnclosureSurface> surfaces, ViewFactorMatrix viewFactors, Environment environment,
                      List<ConductiveLink> links) {
+        this(surfaces, viewFactors, environment, links, Map.of());
+    }
+
+    /**
+     * @param surfaces     the surfaces, in case order
+     * @param viewFactors  the N×N matrix, shared (not copied)
+     * @param environment  the surroundings, or null for a closed enclosure
+     * @param links        conductive links between surfaces (by name)
+     * @param walls        layered walls behind surfaces, by surface name (copied; empty for none)
+     */
+    public Enclosure(List<EnclosureSurface> surfaces, ViewFactorMatrix viewFactors, Environment environment,
+                     List<ConductiveLink> links, Map<String, Wall> walls) {
+        this.walls = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(walls));
         this.surfaces = List.copyOf(surfaces);
         this.links = List.copyOf(links);
         this.environment = environment;
@@ -72,6 +89,11 @@ public final class Enclosure {
             }
         }
         checkWindows(this.surfaces);
+        for (String w : this.walls.keySet()) {
+            if (!names.contains(w)) {
+                throw new IllegalArgumentException("a wall behind '" + w + "' names an unknown surface");
+            }
+        }
     }
 
     private static ViewFactorMatrix rows(double[][] viewFactors, int n) {
@@ -97,6 +119,21 @@ public final class Enclosure {
         return links;
     }
 
+    /** Layered walls behind surfaces, by surface name (unmodifiable; empty for none). */
+    public Map<String, Wall> walls() {
+        return walls;
+    }
+
+    /** The same enclosure with these walls behind its surfaces (by name). */
+    public Enclosure withWalls(Map<String, Wall> replaced) {
+        return new Enclosure(surfaces, viewFactors, environment, links, replaced);
+    }
+
+    /** The same enclosure with another environment (null: closed), sharing the view factors. */
+    public Enclosure withEnvironment(Environment replaced) {
+        return new Enclosure(surfaces, viewFactors, replaced, links, walls);
+    }
+
     /** The view-factor matrix, shared (read only). */
     public ViewFactorMatrix matrix() {
         return viewFactors;
@@ -104,7 +141,7 @@ public final class Enclosure {
 
     /** The same view factors, environment and links with other surfaces (same count and order). */
     public Enclosure withSurfaces(List<EnclosureSurface> replaced) {
-        return new Enclosure(replaced, viewFactors, environment, links);
+        return new Enclosure(replaced, viewFactors, environment, links, walls);
     }
 
     /**
@@ -208,6 +245,6 @@ public final class Enclosure {
         for (int a = 0; a < n; a++) {
             s[a] = surfaces.get(order[a]);
         }
-        return new Enclosure(List.of(s), viewFactors.permuted(order), environment, links);
+        return new Enclosure(List.of(s), viewFactors.permuted(order), environment, links, walls);
     }
 }

@@ -109,7 +109,7 @@ public final class CasePipeline {
     private static Enclosure enclosure(CaseDescription d, List<EnclosureSurface> surfaces, ViewFactorMatrix f)
             throws CaseException {
         try {
-            return new Enclosure(surfaces, f, d.environment(), d.links());
+            return new Enclosure(surfaces, f, d.environment(), d.links(), d.walls());
         } catch (IllegalArgumentException e) {
             throw new CaseException(d.file(), "$", e.getMessage());
         }

@@ -68,6 +68,7 @@ public final class SolveJsonWriter {
             o.put("netFlux_W_m2", s.netFluxWPerM2());
             o.put("convection_W", s.convectionW());
             o.put("conduction_W", s.conductionW());
+            o.put("wall_W", s.wallW());
             o.put("heatSupplied_W", s.heatSuppliedW());
             ArrayNode sb = o.putArray("bands");
             for (int k = 0; k < r.bands().size(); k++) {

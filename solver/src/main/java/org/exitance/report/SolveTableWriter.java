@@ -145,16 +145,17 @@ public final class SolveTableWriter {
 
     /** Convection, conduction and heat supplied, when any surface has them. */
     private static void writeOtherPaths(SolveResult r, PrintStream out) {
-        boolean any = r.surfaces().stream().anyMatch(s -> s.convectionW() != 0 || s.conductionW() != 0);
+        boolean any = r.surfaces().stream().anyMatch(s -> s.convectionW() != 0 || s.conductionW() != 0
+                || s.wallW() != 0);
         if (!any) {
             return;
         }
         out.println();
-        TextTable t = new TextTable(List.of("Surface", "Radiation W", "Convection W", "Conduction W", "Supplied W"),
-                new boolean[] {false, true, true, true, true});
+        TextTable t = new TextTable(List.of("Surface", "Radiation W", "Convection W", "Conduction W", "Wall W",
+                "Supplied W"), new boolean[] {false, true, true, true, true, true});
         for (SurfaceResult s : r.surfaces()) {
             t.row(List.of(s.name(), Numbers.power(s.netHeatW()), Numbers.power(s.convectionW()),
-                    Numbers.power(s.conductionW()), Numbers.power(s.heatSuppliedW())));
+                    Numbers.power(s.conductionW()), Numbers.power(s.wallW()), Numbers.power(s.heatSuppliedW())));
         }
         out.println("Heat leaving each surface by path (supplied = what must be put in to hold it there):");
         t.render(0).forEach(out::println);

@@ -90,6 +90,6 @@ public final class ConvergedState {
      * @param sens  {@link #nodeSensitivities()}; not modified
      */
     public DMatrixRMaj jacobian(double[][][] sens) {
-        return Jacobian.of(p, sens, emissivePowerDerivatives());
+        return Jacobian.of(p, sens, emissivePowerDerivatives(), p.pathDerivativesWPerK(t));
     }
 }

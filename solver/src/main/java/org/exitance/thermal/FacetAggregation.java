@@ -30,6 +30,7 @@ final class FacetAggregation {
             double q = 0;
             double conv = 0;
             double cond = 0;
+            double wall = 0;
             double supplied = 0;
             double at = 0;
             double[] bandQ = new double[nb];
@@ -44,6 +45,7 @@ final class FacetAggregation {
                 q += f.netHeatW();
                 conv += f.convectionW();
                 cond += f.conductionW();
+                wall += f.wallW();
                 supplied += f.heatSuppliedW();
                 at += f.areaM2() * f.temperatureK();
                 solved |= f.temperatureSolved();
@@ -60,7 +62,7 @@ final class FacetAggregation {
                 bandJ[k] /= area;
             }
             out.add(new SurfaceResult(surface, area, label + " per facet", at / area, solved, q, q / area, bandQ, bandEps,
-                    conv, cond, supplied, bandG, bandJ));
+                    conv, cond, wall, supplied, bandG, bandJ));
         }
         PairExchange facetPairs = r.pairExchange().orElse(null);
         return r.toBuilder().surfaces(out).facets(r.surfaces())

@@ -35,8 +35,9 @@ final class Jacobian {
      *
      * @param s   {@link #nodeHeatSensitivities}; not modified
      * @param dE  dE_ik/dT_i, [band][surface], at the current temperatures; not modified
+     * @param dPaths  per node, d/dT of its extra paths (W/K); not modified
      */
-    static DMatrixRMaj compact(Problem p, double[][] s, double[][] dE) {
+    static DMatrixRMaj compact(Problem p, double[][] s, double[][] dE, double[] dPaths) {
         int[] u = p.unknown;
         int m = u.length;
         DMatrixRMaj jac = new DMatrixRMaj(m, m);
@@ -51,8 +52,20 @@ final class Jacobian {
                 }
             }
         });
-        addOtherPaths(p, jac);
+        addOtherPaths(p, jac, dPaths);
         return jac;
+    }
+
+    /**
+     * Adds the convection, link and extra-path derivatives of the all-paths nodes to jac (modified).
+     *
+     * @param dPaths  per node, d/dT of its extra paths (W/K); not modified
+     */
+    static void addOtherPaths(Problem p, DMatrixRMaj jac, double[] dPaths) {
+        for (int a = 0; a < dPaths.length; a++) {
+            jac.add(a, a, dPaths[a]);
+        }
+        addOtherPaths(p, jac);
     }
 
     /** Adds the convection and link derivatives of the all-paths nodes to jac (modified). */
@@ -150,7 +163,7 @@ final class Jacobian {
      * @param sens  {@link #nodeSensitivities}; not modified
      * @param dE    dE_ik/dT_i, [band][surface], at the current temperatures; not modified
      */
-    static DMatrixRMaj of(Problem p, double[][][] sens, double[][] dE) {
+    static DMatrixRMaj of(Problem p, double[][][] sens, double[][] dE, double[] dPaths) {
         int[] u = p.unknown;
         int m = u.length;
         DMatrixRMaj jac = new DMatrixRMaj(m, m);
@@ -166,7 +179,7 @@ final class Jacobian {
                 jac.set(a, b, s);
             }
         }
-        addOtherPaths(p, jac);
+        addOtherPaths(p, jac, dPaths);
         return jac;
     }
 }

@@ -53,6 +53,9 @@ final class KrylovStep {
         return products;
     }
 
+    /** d/dT of the extra paths per node (W/K) of the balance being solved, or null before the first step. */
+    private double[] dPaths;
+
     /**
      * The Newton step.
      *
@@ -64,6 +67,7 @@ final class KrylovStep {
     double[] solve(double[][] dE, NodeBalance bal) {
         int m = p.unknown.length;
         double[] tol = bal.toleranceW();
+        dPaths = bal.pathDerivativeWPerK();
         double[] diag = diagonal(dE);
         double[] rhs = new double[m];
         for (int a = 0; a < m; a++) {
@@ -173,6 +177,11 @@ final class KrylovStep {
             }
         }
         Jacobian.addOtherPaths(p, nodeOf, v, out);
+        if (dPaths != null) {
+            for (int a = 0; a < v.length; a++) {
+                out[a] += dPaths[a] * v[a];
+            }
+        }
         return out;
     }
 
@@ -181,6 +190,9 @@ final class KrylovStep {
         int m = p.unknown.length;
         double[] d = new double[m];
         double[][] eps = loop.emissivity();
+        for (int a = 0; a < m; a++) {
+            d[a] += dPaths == null ? 0 : dPaths[a];
+        }
         for (int a = 0; a < m; a++) {
             for (int i : p.faces[a]) {
                 for (int k = 0; k < dE.length; k++) {

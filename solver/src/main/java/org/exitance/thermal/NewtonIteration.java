@@ -54,7 +54,8 @@ final class NewtonIteration {
                 dx = krylov.solve(loop.emissivePowerDerivatives(t), bal);
                 counters.krylovProducts += krylov.products() - before;
             } else {
-                DMatrixRMaj jac = Jacobian.compact(p, sens, loop.emissivePowerDerivatives(t));
+                DMatrixRMaj jac = Jacobian.compact(p, sens, loop.emissivePowerDerivatives(t),
+                        bal.pathDerivativeWPerK());
                 Posedness.requireLiveColumns(p, jac);
                 dx = step(jac, bal.residualW());
             }

@@ -16,13 +16,16 @@ import org.exitance.network.BandState;
  *   <li>r is the relative heat tolerance of the settings, c = 64 a safety factor on rounding,
  *       and ℓ the largest relative residual of the band solves.</li>
  * </ul>
+ * The extra paths of the problem ({@link SurfacePaths}: walls, storage) count in flow and terms
+ * like convection, with d/dT of them kept for the Jacobian's diagonal.
  * A node is balanced when |R_a| ≤ tol_a (methods: the node's own scale, not a global one;
  * Kelley, Solving Nonlinear Equations with Newton's Method, SIAM 2003, §1.5 on termination).
  *
  * @param residualW   R_a (W), positive when the node loses more heat than its condition asks
  * @param toleranceW  tol_a (W)
+ * @param pathDerivativeWPerK  per node, d/dT of its extra paths (W/K)
  */
-record NodeBalance(double[] residualW, double[] toleranceW) {
+record NodeBalance(double[] residualW, double[] toleranceW, double[] pathDerivativeWPerK) {
     private static final double ROUNDING = 64 * Math.ulp(1.0);
 
     /**
@@ -38,6 +41,8 @@ record NodeBalance(double[] residualW, double[] toleranceW) {
         int m = p.unknown.length;
         double[] r = new double[m];
         double[] tol = new double[m];
+        double[] dPaths = new double[m];
+        double[] extra = new double[2];
         for (int a = 0; a < m; a++) {
             r[a] = -p.target[a];
             double flow = Math.abs(p.target[a]);
@@ -58,11 +63,16 @@ record NodeBalance(double[] residualW, double[] toleranceW) {
                     r[a] += conv + cond;
                     flow += Math.abs(conv) + p.conductionMagnitudeW(i, t);
                     terms += p.convG[i] * (Math.abs(t[i]) + Math.abs(p.fluidT[i])) + p.conductionTermsW(i, t);
+                    p.paths.heat(i, t[i], extra);
+                    r[a] += extra[0];
+                    flow += Math.abs(extra[0]);
+                    terms += Math.abs(extra[0]) + Math.abs(extra[1] * t[i]);
+                    dPaths[a] += extra[1];
                 }
             }
             tol[a] = Math.max(relativeTolerance * flow + (ROUNDING + linear) * terms, Double.MIN_NORMAL);
         }
-        return new NodeBalance(r, tol);
+        return new NodeBalance(r, tol, dPaths);
     }
 
     /** max_a |R_a| / tol_a: at most 1 when every node is balanced. */

@@ -22,10 +22,13 @@ final class Posedness {
     static void requireAnchor(Enclosure enc) {
         boolean anchored = enc.environment() != null || enc.surfaces().stream().anyMatch(s ->
                 s.boundary() instanceof BoundaryCondition.FixedTemperature
-                        || s.boundary().balancesAllPaths() && s.convectionConductanceWPerK() > 0);
+                        || s.boundary().balancesAllPaths() && s.convectionConductanceWPerK() > 0)
+                || enc.walls().entrySet().stream().anyMatch(w -> !(w.getValue().outside()
+                        instanceof org.exitance.conduction.OuterBoundary.Insulated)
+                        && enc.surface(enc.indexOf(w.getKey())).boundary().balancesAllPaths());
         if (!anchored) {
             throw new IllPosedCaseException("no surface has a fixed temperature, none convects to a fluid and"
-                    + " there is no environment: the temperature level is undetermined; fix at least one"
+                    + " there is no environment (nor a wall open to the outside): the temperature level is undetermined; fix at least one"
                     + " surface's temperature");
         }
     }

@@ -41,8 +41,17 @@ final class Problem {
     final int[] linkA;
     final int[] linkB;
     final double[] linkG;
+    /** Heat by paths outside the network (walls, storage), for the all-paths nodes. */
+    final SurfacePaths paths;
 
+    /** A problem whose extra paths are the steady conduction through the enclosure's walls. */
     Problem(Enclosure enc, List<ExternalSource> sources) {
+        this(enc, sources, WallPaths.of(enc));
+    }
+
+    /** @param paths  heat by paths outside the network ({@link SurfacePaths#NONE} for none) */
+    Problem(Enclosure enc, List<ExternalSource> sources, SurfacePaths paths) {
+        this.paths = paths;
         this.radiative = new RadiativeArrays(enc, sources);
         this.enc = enc;
         int n = enc.size();
@@ -88,6 +97,24 @@ final class Problem {
             linkB[l] = enc.indexOf(link.surfaceB());
             linkG[l] = link.conductanceWPerK();
         }
+    }
+
+    /**
+     * Per unknown node, d/dT of its extra paths (W/K), 0 for a node whose condition counts
+     * radiation only; t not modified; a new array.
+     */
+    double[] pathDerivativesWPerK(double[] t) {
+        double[] d = new double[unknown.length];
+        double[] out = new double[2];
+        for (int a = 0; a < unknown.length; a++) {
+            if (allPaths[a]) {
+                for (int i : faces[a]) {
+                    paths.heat(i, t[i], out);
+                    d[a] += out[1];
+                }
+            }
+        }
+        return d;
     }
 
     /** Heat leaving surface i by convection at temperature ti (W). */

@@ -102,6 +102,7 @@ final class ResultAssembler {
         List<SurfaceResult> out = new ArrayList<>(n);
         double total = 0;
         double scale = 0;
+        double[] extra = new double[2];
         for (int i = 0; i < n; i++) {
             EnclosureSurface s = enc.surface(i);
             EnclosureSurface carrier = enc.surface(p.primary[i]);
@@ -117,6 +118,8 @@ final class ResultAssembler {
             total += q;
             double conv = p.convectionW(i, t[i]);
             double cond = p.conductionW(i, t);
+            p.paths.heat(i, t[i], extra);
+            double wall = extra[0];
             String kind = s.isWindowFace() ? "window" : "two-sided";
             String label = !s.hasOtherFace() ? s.boundary().label()
                     : carrier != s ? kind + " face" : s.boundary().label() + " (" + kind + ")";
@@ -127,7 +130,8 @@ final class ResultAssembler {
                 bandJ[k] = states[k].radiosity()[i];
             }
             out.add(new SurfaceResult(s.name(), s.areaM2(), label, t[i],
-                    carrier.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, q + conv + cond,
+                    carrier.boundary().temperatureUnknown(), q, q / s.areaM2(), bandQ, bandEps, conv, cond, wall,
+                    q + conv + cond + wall,
                     bandG, bandJ));
         }
         double external = externalPowerW(p);

@@ -122,10 +122,37 @@ public final class TemperatureSolver {
      */
     public ConvergedState converge(BandSet bandSet) {
         Enclosure enc = radiationCase.enclosure();
-        List<Band> bands = bandSet.bands();
         Problem p = new Problem(enc, radiationCase.sources());
         Posedness.requireAnchor(enc);
-        double[] t = StartingGuess.temperatures(p, radiationCase.sources());
+        return converge(p, bandSet, StartingGuess.temperatures(p, radiationCase.sources()), true);
+    }
+
+    /**
+     * One solve with extra heat paths of the caller (a time step: each node's storage and its
+     * walls' implicit conduction, {@link SurfacePaths}) from the caller's temperatures, without the
+     * gray start and without the anchor check (the storage terms fix the level). The result is per
+     * surface of the enclosure; {@link SurfaceResult#wallW()} holds the extra paths' heat.
+     *
+     * @param start  temperatures per surface (K); fixed ones are taken from their conditions; not modified
+     * @throws IllPosedCaseException when a node's temperature is undetermined
+     * @throws SolveFailedException  when Newton or the property loop does not converge
+     */
+    public SolveResult solveWith(BandSet bandSet, SurfacePaths paths, double[] start) {
+        Problem p = new Problem(radiationCase.enclosure(), radiationCase.sources(), paths);
+        double[] t = start.clone();
+        for (int i = 0; i < t.length; i++) {
+            var bc = radiationCase.enclosure().surface(p.primary[i]).boundary();
+            if (bc instanceof org.exitance.model.BoundaryCondition.FixedTemperature f) {
+                t[i] = f.temperatureK();
+            }
+        }
+        return converge(p, bandSet, t, false).result();
+    }
+
+    private ConvergedState converge(Problem p, BandSet bandSet, double[] start, boolean grayStart) {
+        Enclosure enc = radiationCase.enclosure();
+        List<Band> bands = bandSet.bands();
+        double[] t = start;
         Counters counters = new Counters();
         SolverChoice how = choice != null ? choice : SolverChoice.forCase(enc.size(), p.unknown.length, bands.size(),
                 enc.hasWindows(), Runtime.getRuntime().maxMemory());
@@ -133,7 +160,7 @@ public final class TemperatureSolver {
         long estimate = MemoryEstimate.bytes(enc.size(), p.unknown.length, bands.size(), how);
         PeakHeap.reset();
         PropertyLoop properties = new PropertyLoop(p, radiationCase.settings(), band, absorption, how);
-        if (p.unknown.length > 0 && bands.size() > 1) {
+        if (grayStart && p.unknown.length > 0 && bands.size() > 1) {
             t = properties.converge(BandSet.gray("gray start").bands(), t, counters);
         }
         t = properties.converge(bands, t, counters);

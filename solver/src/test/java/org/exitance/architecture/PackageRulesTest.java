@@ -36,20 +36,24 @@ class PackageRulesTest {
     static {
         ALLOWED.put("spectral", List.of());
         ALLOWED.put("spectral.source", List.of("spectral"));
-        ALLOWED.put("model", List.of("spectral", "spectral.source"));
+        ALLOWED.put("conduction", List.of("spectral"));
+        ALLOWED.put("model", List.of("spectral", "spectral.source", "conduction"));
         ALLOWED.put("network", List.of());
         ALLOWED.put("result", List.of("model"));
         ALLOWED.put("bands", List.of("spectral", "spectral.source", "model", "network", "result"));
-        ALLOWED.put("thermal", List.of("spectral", "spectral.source", "model", "network", "bands", "result"));
+        ALLOWED.put("thermal", List.of("spectral", "spectral.source", "model", "network", "bands", "result",
+                "conduction"));
+        ALLOWED.put("timeline", List.of("spectral", "spectral.source", "model", "bands", "result", "thermal",
+                "conduction"));
         ALLOWED.put("sensitivity", List.of("spectral", "model", "network", "bands", "result", "thermal"));
         ALLOWED.put("audit", List.of("spectral", "spectral.source", "model", "bands", "result", "thermal"));
         ALLOWED.put("properties", List.of("spectral", "spectral.source", "model"));
-        ALLOWED.put("cases", List.of("spectral", "spectral.source", "model", "geometry.."));
+        ALLOWED.put("cases", List.of("spectral", "spectral.source", "model", "conduction", "timeline", "geometry.."));
         ALLOWED.put("pipeline", List.of("spectral", "spectral.source", "model", "bands", "thermal", "result", "cases",
                 "geometry.."));
         ALLOWED.put("validation", List.of("model", "bands", "thermal", "result", "cases", "pipeline"));
         ALLOWED.put("report", List.of("spectral", "spectral.source", "model", "result", "audit", "properties",
-                "sensitivity"));
+                "sensitivity", "timeline", "conduction"));
         ALLOWED.put("report.html", List.of("spectral", "spectral.source", "model", "result", "audit", "properties",
                 "report", "geometry.."));
         ALLOWED.put("cli", List.of("..")); // the command line may use everything
@@ -58,7 +62,7 @@ class PackageRulesTest {
     /** Libraries that mean files, JSON, plots or the command line: none of them in the physics. */
     private static final String[] EDGE_LIBRARIES = {"com.fasterxml..", "picocli..", "org.jfree..", "java.nio.file.."};
     private static final String[] PHYSICS = {"spectral", "spectral.source", "model", "network", "result", "bands",
-        "thermal", "sensitivity"};
+        "thermal", "sensitivity", "conduction", "timeline"};
 
     private static final JavaClasses MAIN = new ClassFileImporter()
             .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)

@@ -14,7 +14,7 @@ class SolveResultTest {
     private static final SurfaceResult B = surface("b", -2.0);
 
     private static SurfaceResult surface(String name, double q) {
-        return new SurfaceResult(name, 1.0, "fixed", 300, false, q, q, new double[] {q}, new double[] {0.5}, 0, 0, q,
+        return new SurfaceResult(name, 1.0, "fixed", 300, false, q, q, new double[] {q}, new double[] {0.5}, 0, 0, 0, q,
                 new double[] {1.0}, new double[] {1.5});
     }
 

@@ -19,6 +19,7 @@ public final class ShippedCases {
     public static final List<String> DEMO = List.of(
             "crucible-cavity.json",
             "electronics-box.json",
+            "furnace-heat-up-lined.json",
             "furnace-sight-window.json",
             "heat-treating-chamber-facets.json",
             "heat-treating-chamber-geometry.json",
@@ -31,6 +32,7 @@ public final class ShippedCases {
             "spacecraft-box-blankets.json",
             "spacecraft-box-geometry.json",
             "spacecraft-box-orbit.json",
+            "spacecraft-box-orbits-transient.json",
             "vacuum-furnace-shield-pack.json");
 
     /** The case files of cases/validation, by name. */

@@ -193,6 +193,9 @@ public final class SolveCheck {
                     achieved += band[f];
                 }
                 if (bc.balancesAllPaths()) {
+                    // a wall's heat is taken as reported: its conduction is checked on its own against
+                    // closed forms (thermal.LayeredWallSteadyTest); here the node balance that includes it
+                    achieved += rep.get(f).wallW();
                     if (face.convection() != null) {
                         achieved += face.convection().coefficientWPerM2K() * face.areaM2()
                                 * (t - face.convection().fluidTemperatureK());

@@ -85,7 +85,7 @@ class SolveCheckTest {
             }
             wrong.add(new SurfaceResult(s.name(), s.areaM2(), s.boundary(), s.temperatureK(), s.temperatureSolved(),
                     s.netHeatW(), s.netFluxWPerM2(), s.bandNetHeatW(), s.bandEmissivity(), s.convectionW(),
-                    s.conductionW(), s.heatSuppliedW(), bg, bj));
+                    s.conductionW(), s.wallW(), s.heatSuppliedW(), bg, bj));
         }
         SolveResult bad = right.toBuilder().surfaces(wrong).build();
         double scale = SolveCheck.scaleW(c, right);

@@ -45,7 +45,8 @@ class JacobianTest {
                 : new DirectRadiositySolver();
         BandLoop loop = BandLoop.prepare(p.radiative, bands, BandProperties.emissivities(c.enclosure().surfaces(), bands,
                 t), t, ExternalAbsorption.SOURCE_SPECTRUM, band);
-        DMatrixRMaj jac = Jacobian.compact(p, Jacobian.nodeHeatSensitivities(p, loop), loop.emissivePowerDerivatives(t));
+        DMatrixRMaj jac = Jacobian.compact(p, Jacobian.nodeHeatSensitivities(p, loop), loop.emissivePowerDerivatives(t),
+                p.pathDerivativesWPerK(t));
         int m = p.unknown.length;
         double h = 1e-2; // K
         KrylovStep krylov = new KrylovStep(p, loop);
