@@ -138,7 +138,7 @@ class PairExchangeTest {
         java.util.List<SurfaceResult> shifted = new java.util.ArrayList<>(r.surfaces());
         shifted.set(2, new SurfaceResult(s.name(), s.areaM2(), s.boundary(), s.temperatureK(), s.temperatureSolved(),
                 s.netHeatW() + 1e-6 * (Math.abs(s.netHeatW()) + 1), s.netFluxWPerM2(), s.bandNetHeatW(),
-                s.bandEmissivity(), s.convectionW(), s.conductionW(), s.heatSuppliedW(), s.bandIncidentW(),
+                s.bandEmissivity(), s.convectionW(), s.conductionW(), s.wallW(), s.heatSuppliedW(), s.bandIncidentW(),
                 s.bandRadiosityWPerM2()));
         assertThat(worstRowSumError(r.toBuilder().surfaces(shifted).build(), pe)).isGreaterThan(1e-9);
         // one Gebhart factor raised by 1e-6: reciprocity and summation both fail
