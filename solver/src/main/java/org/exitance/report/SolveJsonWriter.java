@@ -119,7 +119,7 @@ public final class SolveJsonWriter {
         root.put("energyBalanceRelative", r.relativeEnergyBalance());
         root.put("crossingHeat_W", r.crossingHeatW());
         root.put("energyScale_W", r.energyScaleW());
-        root.put("energyBalanceCloses", r.relativeEnergyBalance() <= SolveTableWriter.BALANCE_WARNING);
+        root.put("energyBalanceCloses", r.energyBalanceCloses());
         SolverReport s = r.solver();
         ObjectNode so = root.putObject("solver");
         so.put("linearSolver", s.linearSolver());

@@ -12,7 +12,7 @@ import org.exitance.result.SurfaceResult;
 /** Writes a solve result as readable text tables. Reads the result; computes no physics. */
 public final class SolveTableWriter {
     /** Relative energy imbalance above which the writer says the balance does not close. */
-    public static final double BALANCE_WARNING = 1e-6;
+    public static final double BALANCE_WARNING = SolveResult.BALANCE_TOLERANCE;
     private static final int MAX_SPLIT_COLUMNS = 8;
     private static final int MAX_SPLIT_ROWS = 24;
     private static final int MAX_LISTED_EDGES = 30;
@@ -236,7 +236,11 @@ public final class SolveTableWriter {
                 + (r.sources().isEmpty() ? "" : " + source power")
                 + " = " + Numbers.small(r.energyBalanceW()) + " W, " + Numbers.small(rel) + " of the "
                 + Numbers.power(r.crossingHeatW()) + " W crossing the enclosure — "
-                + (rel <= BALANCE_WARNING ? "closes" : "DOES NOT CLOSE (check view-factor closure and reciprocity)"));
+                + (rel <= BALANCE_WARNING ? "closes"
+                        : r.atRoundingFloor() ? "closes at the rounding floor (within " + Numbers.small(SolveResult.ROUNDING_FLOOR)
+                                + " of the " + Numbers.power(r.energyScaleW()) + " W in play): the net heats are uncertain by about "
+                                + Numbers.small(Math.abs(r.energyBalanceW())) + " W"
+                        : "DOES NOT CLOSE (check view-factor closure and reciprocity)"));
         var s = r.solver();
         out.println("Solver: " + s.linearSolver() + "; Newton iterations " + s.newtonIterations()
                 + ", property updates " + s.propertyIterations() + ", heat residual " + Numbers.small(s.residualW())

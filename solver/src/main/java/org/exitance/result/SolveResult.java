@@ -182,6 +182,25 @@ public final class SolveResult {
         return scale > 0 ? Math.abs(energyBalanceW) / scale : Math.abs(energyBalanceW);
     }
 
+    /** Largest imbalance, relative to the heat crossing the enclosure, that counts as closed. */
+    public static final double BALANCE_TOLERANCE = 1e-6;
+    /**
+     * An imbalance below this fraction of the power in play is the rounding of the band sums (the
+     * net heats are differences of emitted and absorbed powers that large); it closes whatever the
+     * heat crossing the enclosure, and the net heats are uncertain by about that much.
+     */
+    public static final double ROUNDING_FLOOR = 1e-9;
+
+    /** @return true if the energy balance closes: within {@link #BALANCE_TOLERANCE} of the crossing heat, or at the rounding floor */
+    public boolean energyBalanceCloses() {
+        return relativeEnergyBalance() <= BALANCE_TOLERANCE || atRoundingFloor();
+    }
+
+    /** @return true if the imbalance is within {@link #ROUNDING_FLOOR} of the power in play */
+    public boolean atRoundingFloor() {
+        return Math.abs(energyBalanceW) <= ROUNDING_FLOOR * energyScaleW;
+    }
+
     /** The surface result with this name. */
     public SurfaceResult surface(String name) {
         return surfaces.stream().filter(s -> s.name().equals(name)).findFirst()

@@ -25,6 +25,20 @@ class SolveResultTest {
     }
 
     @Test
+    void aBalanceClosesWithinItsToleranceOfTheCrossingHeatOrAtTheRoundingFloorOfThePowerInPlay() {
+        // 2 W cross the enclosure (surfaces A and B); the imbalance is judged against them ...
+        assertThat(complete().energyBalanceW(1e-6).build().energyBalanceCloses()).isTrue();
+        assertThat(complete().energyBalanceW(1e-3).build().energyBalanceCloses()).isFalse();
+        // ... unless it is within 1e-9 of the power in play, the rounding of the band sums: 1e-5 W
+        // of 1e5 W in play closes however little crosses; 1e-3 W of the same does not
+        SolveResult floor = complete().energyBalanceW(1e-5).energyScaleW(1e5).build();
+        assertThat(floor.relativeEnergyBalance()).isGreaterThan(SolveResult.BALANCE_TOLERANCE);
+        assertThat(floor.atRoundingFloor()).isTrue();
+        assertThat(floor.energyBalanceCloses()).isTrue();
+        assertThat(complete().energyBalanceW(1e-3).energyScaleW(1e5).build().energyBalanceCloses()).isFalse();
+    }
+
+    @Test
     void aBuiltResultHoldsWhatWasSetAndDefaultsTheOptionalPartsToEmpty() {
         SolveResult r = complete().build();
         assertThat(r.surfaces()).containsExactly(A, B);

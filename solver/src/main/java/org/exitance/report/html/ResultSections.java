@@ -91,6 +91,7 @@ final class ResultSections {
         rows.add(row("Heat crossing the enclosure", Numbers.power(r.crossingHeatW()) + " W"));
         rows.add(row("Imbalance, relative", Numbers.small(rel)));
         rows.add(row("Verdict", rel <= SolveTableWriter.BALANCE_WARNING ? "closes (within 1e-6)"
+                : r.atRoundingFloor() ? "closes at the rounding floor (within 1e-9 of the power in play)"
                 : "does not close: check view-factor closure and reciprocity"));
         rows.add(row("Power in play (Σ A·J over bands, environment, sources)", Numbers.power(r.energyScaleW()) + " W"));
         rows.add(row("Linear solver", s.linearSolver() + (s.strategy().isEmpty() ? "" : " (" + s.strategy() + ")")));
