@@ -260,32 +260,11 @@ public final class Patch {
         System.arraycopy(f, 3, out, off + 7, 9);
     }
 
-    /** @return metres per unit of u along the patch (1 for PLANE and CYLINDER, √(1 + k²) for a cone, R for a sphere) */
-    public double metresPerU() {
-        return lengthU() / (u1 - u0);
-    }
-
     /** @return the point at (u, φ) (m) */
     public Vec3 point(double u, double phi) {
         double[] o = new double[7];
         evaluate(u, phi, o, 0);
         return new Vec3(o[0], o[1], o[2]);
-    }
-
-    /** @return the radiating unit normal at (u, φ) */
-    public Vec3 normal(double u, double phi) {
-        double[] o = new double[7];
-        evaluate(u, phi, o, 0);
-        return new Vec3(o[3], o[4], o[5]);
-    }
-
-    /** @return length of the patch along u (m), at its widest */
-    public double lengthU() {
-        return switch (kind) {
-            case PLANE -> u1 - u0;
-            case CONE -> (u1 - u0) * Math.sqrt(1 + b * b);
-            case SPHERE -> a * (u1 - u0);
-        };
     }
 
     /** @return the largest radius from the axis (m) */

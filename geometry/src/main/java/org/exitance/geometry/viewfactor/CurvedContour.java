@@ -112,8 +112,6 @@ final class CurvedContour {
 
     /** ∫∫ ln(r/r₀) dx_c · dx_d over one curve pair, split where the two share a line or circle. */
     private double term(Curve c, Curve d) {
-        int nc = 1, nd = 1;
-        double diagonal = 0;
         boolean shared = c.kind == d.kind
                 && (c.kind == Curve.LINE ? Coincidence.lines(c, d, ref, cut, dut) : Coincidence.arcs(c, d, ref, cut, dut));
         if (!shared) {
@@ -121,10 +119,9 @@ final class CurvedContour {
         }
         // cut[0..1], dut[0..1]: the parameters of the shared piece on c and on d; cut[2]: its
         // closed-form self term with the directions of travel applied
-        diagonal = cut[2];
-        nc = pieces(c, cut[0], cut[1], pc, cOver);
-        nd = pieces(d, dut[0], dut[1], pd, dOver);
-        double sum = diagonal;
+        int nc = pieces(c, cut[0], cut[1], pc, cOver);
+        int nd = pieces(d, dut[0], dut[1], pd, dOver);
+        double sum = cut[2];
         for (int a = 0; a < nc; a++) {
             for (int b = 0; b < nd; b++) {
                 if (cOver[a] && dOver[b]) {

@@ -10,9 +10,9 @@ import org.exitance.geometry.Patch;
  * <pre>  A_a F_ab = ∫_a F_{dx→b} dA_x,  F_{dx→b} = ∫_b max(0, cos θ_x) max(0, cos θ_y) / (π r²) dA_y </pre>
  *
  * <ul>
- *   <li>Outer: a curved patch a in its parameters (u, φ), 8 × 8 Gauss–Legendre cells halved along
- *       their longer side (in metres) until the halves agree with the whole within the cell's
- *       share of the tolerance.</li>
+ *   <li>Outer: a curved patch a in its parameters (u, φ), 6 × 6 Gauss–Legendre cells (a 4 × 4 rule
+ *       on the whole patch settles far, smooth pairs), halved in the direction whose halves
+ *       disagree more with the whole until they agree within the cell's share of the tolerance.</li>
  *   <li>Inner, polygon b: F_{dx→b} exactly, the polygon clipped to the front of x's tangent plane
  *       and the closed-form point-to-polygon factor ({@link PointFactor}).</li>
  *   <li>Inner, plane patch b: F_{dx→b} by the contour form over its exact boundary cut to the
