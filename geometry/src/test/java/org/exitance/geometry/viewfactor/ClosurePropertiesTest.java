@@ -78,16 +78,23 @@ class ClosurePropertiesTest {
         }
         java.util.Collections.shuffle(pairs, new Random(seed));
         int checked = 0;
-        for (int[] pair : pairs.subList(0, Math.min(6, pairs.size()))) {
+        for (int[] pair : pairs) {
+            if (checked == 6) {
+                break;
+            }
             int i = pair[0];
             int j = pair[1];
+            // the reference is used only where it has converged: its 24- and 32-point rules agree
+            // to 1e-9 (a close random pair can leave the 24-point rule 1e-5 off, seen once)
             double fij = IndependentFactor.factor(f.get(i), f.get(j), 24);
             double fji = IndependentFactor.factor(f.get(j), f.get(i), 24);
-            // both orders by the independent 24-point integration, whose own error reaches a few
-            // 1e-8 relative on close random pairs (3.4e-8 seen, seed 4000067575181985116): reciprocity
-            // to 1e-6 still catches any wrong order or area, which is off by far more
+            if (Math.abs(IndependentFactor.factor(f.get(i), f.get(j), 32) - fij) > 1e-9 * Math.max(fij, 1e-3)
+                    || Math.abs(IndependentFactor.factor(f.get(j), f.get(i), 32) - fji) > 1e-9 * Math.max(fji, 1e-3)) {
+                continue;
+            }
+            // both orders by the independent integration: reciprocity to 1e-7 checks the reference
             assertThat(f.get(i).area() * fij).isCloseTo(f.get(j).area() * fji,
-                    within(1e-6 * f.get(i).area() * Math.max(fij, 1e-3)));
+                    within(1e-7 * f.get(i).area() * Math.max(fij, 1e-3)));
             assertThat(r.facetFactor(i, j)).as("F[%d][%d]", i, j).isCloseTo(fij, within(1e-6 * Math.max(fij, 1e-3)));
             assertThat(r.facetFactor(j, i)).as("F[%d][%d]", j, i).isCloseTo(fji, within(1e-6 * Math.max(fji, 1e-3)));
             checked++;
