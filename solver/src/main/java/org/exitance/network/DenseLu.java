@@ -11,8 +11,11 @@ import java.util.stream.IntStream;
  *
  * <p>Memory: the factors overwrite the array; nothing else of size N² is allocated. Work is
  * split by rows (factorization) or by right-hand-side columns (solves) over the fork-join pool
- * the caller runs in (also used for the m×m Newton step of the temperature solve); every entry is computed by the same operations in the same order whatever
- * the split, so the factors and solutions are bit-for-bit the same for any thread count.
+ * the caller runs in (also used for the m×m Newton step of the temperature solve); every entry
+ * is computed by the same operations in the same order whatever the split, so the factors and
+ * solutions are bit-for-bit the same for any thread count. The trailing update, nearly all of
+ * the 2N³/3 operations, is a {@link TrailingKernel}: the vector-API one when the JVM has its
+ * module, otherwise plain Java, with the same factors bit for bit.
  */
 public final class DenseLu {
     /** Panel width (columns factored together). */
@@ -23,6 +26,7 @@ public final class DenseLu {
     private final int n;
     private final double[] a;
     private final int[] pivot;
+    private final TrailingKernel kernel;
 
     /**
      * Factors {@code a} in place.
@@ -33,14 +37,20 @@ public final class DenseLu {
      * @return the factorization, or null when a pivot is exactly zero (the matrix is singular)
      */
     public static DenseLu factor(double[] a, int n) {
-        DenseLu lu = new DenseLu(a, n);
+        return factor(a, n, TrailingKernel.best());
+    }
+
+    /** As {@link #factor(double[], int)}, with the trailing update done by {@code kernel}. */
+    static DenseLu factor(double[] a, int n, TrailingKernel kernel) {
+        DenseLu lu = new DenseLu(a, n, kernel);
         return lu.run() ? lu : null;
     }
 
-    private DenseLu(double[] a, int n) {
+    private DenseLu(double[] a, int n, TrailingKernel kernel) {
         this.n = n;
         this.a = a;
         this.pivot = new int[n];
+        this.kernel = kernel;
     }
 
     private boolean run() {
@@ -110,7 +120,7 @@ public final class DenseLu {
         return true;
     }
 
-    /** A22 −= L21 U12 for rows and columns ke..n; row blocks in parallel. */
+    /** A22 −= L21 U12 for rows and columns ke..n; row blocks in parallel, columns in chunks. */
     private void trailing(int kb, int ke) {
         int rows = n - ke;
         int blocks = Math.max(1, Math.min(rows / 16, 4 * ForkJoinPool.getCommonPoolParallelism() + 4));
@@ -118,37 +128,9 @@ public final class DenseLu {
             int i0 = ke + (int) ((long) rows * blk / blocks);
             int i1 = ke + (int) ((long) rows * (blk + 1) / blocks);
             for (int j0 = ke; j0 < n; j0 += CHUNK) {
-                int j1 = Math.min(j0 + CHUNK, n);
-                for (int i = i0; i < i1; i++) {
-                    updateRow(i * n, kb, ke, j0, j1);
-                }
+                kernel.update(a, n, kb, ke, i0, i1, j0, Math.min(j0 + CHUNK, n));
             }
         });
-    }
-
-    /** Row at offset ri, columns j0..j1: subtract Σ_{k in kb..ke} a[i][k] a[k][j], four k at a time. */
-    private void updateRow(int ri, int kb, int ke, int j0, int j1) {
-        int k = kb;
-        for (; k + 3 < ke; k += 4) {
-            double l0 = a[ri + k];
-            double l1 = a[ri + k + 1];
-            double l2 = a[ri + k + 2];
-            double l3 = a[ri + k + 3];
-            int r0 = k * n;
-            int r1 = r0 + n;
-            int r2 = r1 + n;
-            int r3 = r2 + n;
-            for (int j = j0; j < j1; j++) {
-                a[ri + j] -= l0 * a[r0 + j] + l1 * a[r1 + j] + l2 * a[r2 + j] + l3 * a[r3 + j];
-            }
-        }
-        for (; k < ke; k++) {
-            double l = a[ri + k];
-            int rk = k * n;
-            for (int j = j0; j < j1; j++) {
-                a[ri + j] -= l * a[rk + j];
-            }
-        }
     }
 
     /**

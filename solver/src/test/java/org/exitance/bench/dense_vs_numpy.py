@@ -6,7 +6,10 @@ A = I - diag(rho) F, b of the invented closed box and times the tool's factoriza
 then loads FILE and times numpy.linalg.solve (LAPACK gesv through OpenBLAS) on one thread, in the
 same run. Not a test; results go to docs/performance.md.
 
-usage: dense_vs_numpy.py CLASSPATH N [N ...] [--java-threads 1,2] [--heap 8g]
+The tool runs with its vector kernel (the JDK's incubating vector API, added with
+--add-modules as the launcher does) and, with --scalar, also without it.
+
+usage: dense_vs_numpy.py CLASSPATH N [N ...] [--java-threads 1,2] [--heap 8g] [--scalar]
 """
 import os
 import sys
@@ -24,9 +27,10 @@ import time  # noqa: E402
 import numpy as np  # noqa: E402
 
 
-def java_dense(cp, n, path, threads, heap):
-    out = subprocess.run(["java", "-Xmx" + heap, "-cp", cp, "org.exitance.bench.SolverBenchmark", "dense", str(n),
-                          path, str(threads)], check=True, capture_output=True, text=True).stdout
+def java_dense(cp, n, path, threads, heap, vector=True):
+    kernel = ["--add-modules", "jdk.incubator.vector"] if vector else ["-Dexitance.vector=false"]
+    out = subprocess.run(["java", "-Xmx" + heap] + kernel + ["-cp", cp, "org.exitance.bench.SolverBenchmark", "dense",
+                          str(n), path, str(threads)], check=True, capture_output=True, text=True).stdout
     m = re.search(r"N=(\d+) threads=(\d+) median_s=([\d.]+) min_s=([\d.]+) runs=(.*) residual=(\S+)", out)
     if not m:
         raise SystemExit("unexpected output: " + out)
@@ -56,25 +60,30 @@ def main(argv):
     sizes = []
     threads = [1, 2]
     heap = "8g"
+    scalar = False
     i = 2
     while i < len(argv):
         if argv[i] == "--java-threads":
             threads = [int(t) for t in argv[i + 1].split(",")]
             i += 2
+        elif argv[i] == "--scalar":
+            scalar = True
+            i += 1
         elif argv[i] == "--heap":
             heap = argv[i + 1]
             i += 2
         else:
             sizes.append(int(argv[i]))
             i += 1
-    print("N       numpy_1t_s  " + "  ".join("java_%dt_s  ratio_%dt" % (t, t) for t in threads)
+    runs = [(t, True) for t in threads] + ([(t, False) for t in threads] if scalar else [])
+    print("N       numpy_1t_s  " + "  ".join("%s_%dt_s  ratio" % ("vec" if v else "scal", t) for t, v in runs)
           + "  residual numpy / java")
     with tempfile.TemporaryDirectory() as d:
         for size in sizes:
             path = os.path.join(d, "band.bin")
-            java = [java_dense(cp, size, path, t, heap) for t in threads]
+            java = [java_dense(cp, size, path, t, heap, v) for t, v in runs]
             n, np_med, np_min, np_res = numpy_solve(path)
-            cols = "  ".join("%-10.3f %-8.2f" % (j[1], j[1] / np_med) for j in java)
+            cols = "  ".join("%-10.3f %-6.2f" % (j[1], j[1] / np_med) for j in java)
             print("%-7d %-11.3f %s  %.1e / %.1e" % (n, np_med, cols, np_res, java[0][3]))
             os.remove(path)
     return 0

@@ -58,4 +58,32 @@ class DenseLuTest {
         double[] a = {1, 2, 3, 2, 4, 6, 1, 0, 1}; // row 2 = 2 × row 1
         assertThat(DenseLu.factor(a, 3)).isNull();
     }
+
+    /**
+     * The vector kernel is the one in use under the tests (surefire adds its module), and it gives
+     * the scalar kernel's factors bit for bit, on sizes that leave partial tiles of rows and columns
+     * and with one or two threads: each entry is the same chain of fused multiply-adds.
+     */
+    @ParameterizedTest
+    @ValueSource(ints = {67, 203, 300})
+    void vectorAndScalarKernelsGiveTheSameFactorsForAnyThreadCount(int n) throws Exception {
+        assertThat(TrailingKernel.best().describe()).startsWith("vector");
+        Random r = new Random(7 * n);
+        double[] a = new double[n * n];
+        for (int i = 0; i < a.length; i++) {
+            a[i] = r.nextDouble() - 0.5;
+        }
+        double[] scalar = a.clone();
+        DenseLu.factor(scalar, n, TrailingKernel.scalar());
+        for (int threads : new int[] {1, 2}) {
+            double[] vector = a.clone();
+            java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(threads);
+            try {
+                pool.submit(() -> DenseLu.factor(vector, n, TrailingKernel.best())).get();
+            } finally {
+                pool.shutdown();
+            }
+            assertThat(vector).as("threads %d", threads).containsExactly(scalar);
+        }
+    }
 }

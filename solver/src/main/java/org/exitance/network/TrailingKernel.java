@@ -1,0 +1,59 @@
+package org.exitance.network;
+
+/**
+ * The inner product of the blocked LU ({@link DenseLu}): {@code A22 −= L21 U12} on a rectangle of
+ * one row-major N×N array. Every entry is computed the same way by every implementation and for
+ * any split of the rectangle: {@code c ← fma(−a[i][k], a[k][j], c)} for k ascending, one rounding
+ * per step. So the factors do not depend on the thread count, nor on whether the vector kernel is
+ * in use.
+ *
+ * <p>Two implementations: {@link VectorTrailingKernel} (the JDK's vector API, module
+ * {@code jdk.incubator.vector}, which the launcher adds; on an AVX-512 machine about five times the
+ * scalar speed) and {@link ScalarTrailingKernel}. {@link #best()} takes the vector one when its
+ * module is present and the system property {@code exitance.vector} is not {@code false}.
+ */
+interface TrailingKernel {
+
+    /**
+     * {@code a[i][j] −= Σ_{k = kb}^{ke−1} a[i][k] a[k][j]} for i in [i0, i1), j in [j0, j1). The
+     * rows kb..ke and the columns kb..ke are read only; the rectangle must not overlap them.
+     *
+     * @param a  N×N row-major; modified in the rectangle only
+     */
+    void update(double[] a, int n, int kb, int ke, int i0, int i1, int j0, int j1);
+
+    /** A short name for reports and benchmarks ("vector 8 × 64-bit", "scalar"). */
+    String describe();
+
+    /** The fastest kernel this JVM can run. */
+    static TrailingKernel best() {
+        return Choice.BEST;
+    }
+
+    /** The scalar kernel, whatever the JVM has (tests and comparisons). */
+    static TrailingKernel scalar() {
+        return ScalarTrailingKernel.INSTANCE;
+    }
+
+    /** Chosen once per JVM. */
+    final class Choice {
+        static final TrailingKernel BEST = choose();
+
+        private Choice() {
+        }
+
+        private static TrailingKernel choose() {
+            if ("false".equals(System.getProperty("exitance.vector"))
+                    || ModuleLayer.boot().findModule("jdk.incubator.vector").isEmpty()) {
+                return ScalarTrailingKernel.INSTANCE;
+            }
+            try {
+                // by name, so that this class links without the incubator module
+                return (TrailingKernel) Class.forName("org.exitance.network.VectorTrailingKernel")
+                        .getDeclaredConstructor().newInstance();
+            } catch (ReflectiveOperationException | LinkageError e) {
+                return ScalarTrailingKernel.INSTANCE;
+            }
+        }
+    }
+}
