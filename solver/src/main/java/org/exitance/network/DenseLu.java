@@ -128,7 +128,7 @@ public final class DenseLu {
             int i0 = ke + (int) ((long) rows * blk / blocks);
             int i1 = ke + (int) ((long) rows * (blk + 1) / blocks);
             for (int j0 = ke; j0 < n; j0 += CHUNK) {
-                kernel.update(a, n, kb, ke, i0, i1, j0, Math.min(j0 + CHUNK, n));
+                kernel.update(a, n, a, n, kb, ke, i0, i1, j0, Math.min(j0 + CHUNK, n));
             }
         });
     }
@@ -221,18 +221,6 @@ public final class DenseLu {
 
     /** X[i, c0..c1) −= Σ_{k in k0..k1} A[i][k] X[k, c0..c1) for rows i in i0..i1, k ascending; x modified. */
     private void eliminate(double[] x, int cols, int i0, int i1, int k0, int k1, int c0, int c1) {
-        for (int i = i0; i < i1; i++) {
-            int ri = i * n;
-            int xi = i * cols;
-            for (int k = k0; k < k1; k++) {
-                double l = a[ri + k];
-                if (l != 0) {
-                    int xk = k * cols;
-                    for (int c = c0; c < c1; c++) {
-                        x[xi + c] -= l * x[xk + c];
-                    }
-                }
-            }
-        }
+        kernel.update(a, n, x, cols, k0, k1, i0, i1, c0, c1);
     }
 }

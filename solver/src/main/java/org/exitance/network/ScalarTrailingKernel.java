@@ -8,15 +8,16 @@ final class ScalarTrailingKernel implements TrailingKernel {
     }
 
     @Override
-    public void update(double[] a, int n, int kb, int ke, int i0, int i1, int j0, int j1) {
+    public void update(double[] l, int ldl, double[] c, int ldc, int k0, int k1, int i0, int i1, int j0, int j1) {
         for (int i = i0; i < i1; i++) {
-            int ri = i * n;
-            for (int k = kb; k < ke; k++) {
-                double l = -a[ri + k];
-                if (l != 0) {
-                    int rk = k * n;
+            int li = i * ldl;
+            int ci = i * ldc;
+            for (int k = k0; k < k1; k++) {
+                double f = -l[li + k];
+                if (f != 0) {
+                    int ck = k * ldc;
                     for (int j = j0; j < j1; j++) {
-                        a[ri + j] = Math.fma(l, a[rk + j], a[ri + j]);
+                        c[ci + j] = Math.fma(f, c[ck + j], c[ci + j]);
                     }
                 }
             }

@@ -61,8 +61,10 @@ class DenseLuTest {
 
     /**
      * The vector kernel is the one in use under the tests (surefire adds its module), and it gives
-     * the scalar kernel's factors bit for bit, on sizes that leave partial tiles of rows and columns
-     * and with one or two threads: each entry is the same chain of fused multiply-adds.
+     * the scalar kernel's factors and blocked solutions bit for bit, on sizes that leave partial
+     * tiles of rows and columns and with one or two threads: each entry is the same chain of fused
+     * multiply-adds. (Checked to fail: a tile that skipped its last k, or a remainder row loop that
+     * started at the wrong column, breaks it.)
      */
     @ParameterizedTest
     @ValueSource(ints = {67, 203, 300})
@@ -73,17 +75,25 @@ class DenseLuTest {
         for (int i = 0; i < a.length; i++) {
             a[i] = r.nextDouble() - 0.5;
         }
+        int cols = 37; // tiles of 2 vectors, one more vector and a few single columns
+        double[] b = new double[n * cols];
+        for (int i = 0; i < b.length; i++) {
+            b[i] = r.nextDouble();
+        }
         double[] scalar = a.clone();
-        DenseLu.factor(scalar, n, TrailingKernel.scalar());
+        double[] xScalar = b.clone();
+        DenseLu.factor(scalar, n, TrailingKernel.scalar()).solveInPlace(xScalar, cols);
         for (int threads : new int[] {1, 2}) {
             double[] vector = a.clone();
+            double[] xVector = b.clone();
             java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(threads);
             try {
-                pool.submit(() -> DenseLu.factor(vector, n, TrailingKernel.best())).get();
+                pool.submit(() -> DenseLu.factor(vector, n, TrailingKernel.best()).solveInPlace(xVector, cols)).get();
             } finally {
                 pool.shutdown();
             }
-            assertThat(vector).as("threads %d", threads).containsExactly(scalar);
+            assertThat(vector).as("factors, threads %d", threads).containsExactly(scalar);
+            assertThat(xVector).as("solutions, threads %d", threads).containsExactly(xScalar);
         }
     }
 }
