@@ -185,13 +185,13 @@ final class TransientPages {
             soft.assertThat(Double.parseDouble(lohi[0])).as(name + ": scale low").isCloseTo(range[0], Offset.offset(1e-9));
             soft.assertThat(Double.parseDouble(lohi[1])).as(name + ": scale high").isCloseTo(range[1], Offset.offset(1e-9));
         }
-        Object pixels = js.executeScript(PIXEL_SUM, canvas);
         String surface = Browser.clickFacet(driver, canvas, soft, name);
         int i = surface == null ? -1 : indexOf(json, surface);
         soft.assertThat(i).as(name + ": the picked surface " + surface + " is a surface of the run").isNotNegative();
         if (i >= 0) {
             pickedAt(driver, samples, last, i, soft, name);
         }
+        Object pixels = js.executeScript(PIXEL_SUM, canvas); // after the pick, whose outline stays
         driver.findElement(By.id("instant-first")).click();
         new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> Long.valueOf(0).equals(
                 js.executeScript("return window.exitanceReport.instant;")));
