@@ -61,7 +61,7 @@ final class SharedOptions {
 
     /**
      * {@code --report DIR}: also write the offline HTML report into DIR, as
-     * {@code CASE-solve.html}, {@code CASE-audit.html} or {@code FILE-material.html}.
+     * {@code CASE-solve.html}, {@code CASE-audit.html}, {@code CASE-transient.html} or {@code FILE-material.html}.
      */
     static final class Report {
         @Option(names = "--report", paramLabel = "DIR", descriptionKey = "report",
@@ -72,7 +72,7 @@ final class SharedOptions {
          * The report's file for an input file, or null without {@code --report}.
          *
          * @param input the case or material file
-         * @param kind  "solve", "audit" or "material"
+         * @param kind  "solve", "audit", "transient" or "material"
          */
         Path file(Path input, String kind) {
             if (dir == null) {

@@ -32,7 +32,7 @@ import picocli.CommandLine.Spec;
         description = {"Integrate a case in time from its initial state (the case's \"time\" block).",
                 "Implicit variable-step BDF2 on the band-wise model, heat capacities and layered walls; prints the"
                 + " temperatures at the output instants, events, periods and the energy account."},
-        footer = {"", "Example: exitance transient cases/demo/furnace-heat-up-lined.json --plot heat-up.png", "",
+        footer = {"", "Example: exitance transient cases/demo/furnace-heat-up-lined.json --plot heat-up.png --report out", "",
                 ExitCodes.HELP})
 final class TransientCommand implements Callable<Integer> {
     @Spec
@@ -49,6 +49,9 @@ final class TransientCommand implements Callable<Integer> {
 
     @Mixin
     private SharedOptions.Force force;
+
+    @Mixin
+    private SharedOptions.Report report;
 
     @Mixin
     private SharedOptions.BandEdges bandEdges;
@@ -71,7 +74,8 @@ final class TransientCommand implements Callable<Integer> {
         if (plot != null && !plot.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".png")) {
             throw new UserError(plot + ": the plot file must end in .png", ExitCodes.BAD_INPUT);
         }
-        for (Path p : new Path[] {output.file(), csv, plot}) {
+        Path reportFile = report.file(caseFile, "transient");
+        for (Path p : new Path[] {output.file(), csv, plot, reportFile}) {
             OutputTarget.check(p, force);
         }
         PreparedCase c = Runs.load(caseFile);
@@ -118,6 +122,10 @@ final class TransientCommand implements Callable<Integer> {
                     throw new UserError(plot + ": cannot write the plot: " + OutputTarget.problem(e), ExitCodes.BAD_INPUT);
                 }
             });
+        }
+        if (reportFile != null) {
+            Reports.write(reportFile, force, org.exitance.report.html.HtmlReport.transientRun(Reports.caseOf(caseFile, c),
+                    r));
         }
         if (!quiet && json.on()) {
             c.warnings().forEach(w -> spec.commandLine().getErr().println("exitance: warning: " + w));

@@ -55,7 +55,7 @@ class PackageRulesTest {
         ALLOWED.put("report", List.of("spectral", "spectral.source", "model", "result", "audit", "properties",
                 "sensitivity", "timeline", "conduction"));
         ALLOWED.put("report.html", List.of("spectral", "spectral.source", "model", "result", "audit", "properties",
-                "report", "geometry.."));
+                "report", "timeline", "geometry.."));
         ALLOWED.put("cli", List.of("..")); // the command line may use everything
     }
 

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * {@code --report DIR} of solve, audit and material: the page's name, the file rules of every
+ * {@code --report DIR} of solve, audit, transient and material: the page's name, the file rules of every
  * output (no overwrite without --force, no directory without --create-dirs), and a page that
  * names nothing to load.
  */
@@ -61,6 +61,28 @@ class ReportOptionTest {
         CliRun run = CliRun.of("audit", plates(), "--report", missing.toString(), "--create-dirs");
         assertThat(run.exitCode()).as(run.toString()).isZero();
         assertThat(missing.resolve("gray-parallel-plates-audit.html")).exists();
+    }
+
+    /** The furnace demo in time: its page is named after the case, checked before the run, and kept. */
+    @Test
+    void transientWritesItsPageUnderTheSameFileRules() throws Exception {
+        Path c = RepoCases.copyDemo(dir, "furnace-heat-up-lined.json");
+        Path out = dir.resolve("out");
+        CliRun missing = CliRun.of("transient", c.toString(), "-q", "--report", out.toString());
+        assertThat(missing.exitCode()).as(missing.toString()).isEqualTo(2);
+        assertThat(missing.out()).as("refused before the run").isEmpty();
+        assertThat(missing.errLines()).singleElement().asString().contains("does not exist", "--create-dirs");
+        CliRun run = CliRun.of("transient", c.toString(), "-q", "--report", out.toString(), "--create-dirs");
+        assertThat(run.exitCode()).as(run.toString()).isZero();
+        assertThat(run.out()).contains("Temperatures at the output instants");
+        Path page = out.resolve("furnace-heat-up-lined-transient.html");
+        assertThat(Files.readString(page)).startsWith("<!DOCTYPE html>").contains("Transient report",
+                "has no geometry to draw", "Invented data", "Caution");
+        Files.writeString(page, "mine");
+        CliRun again = CliRun.of("transient", c.toString(), "-q", "--report", out.toString());
+        assertThat(again.exitCode()).as(again.toString()).isEqualTo(2);
+        assertThat(again.errLines()).singleElement().asString().contains(page.toString(), "exists", "--force");
+        assertThat(Files.readString(page)).isEqualTo("mine");
     }
 
     @Test

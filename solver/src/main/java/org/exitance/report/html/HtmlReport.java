@@ -76,6 +76,11 @@ public final class HtmlReport {
         return page.render();
     }
 
+    /** The transient report: the run's charts, the model at its output instants, events and energy. */
+    public static String transientRun(ReportCase c, org.exitance.timeline.TransientResult r) {
+        return TransientReport.write(c, r);
+    }
+
     /** The audit report: summary, band set, the audit of every (load) case, and the spectra. */
     public static String audit(ReportCase c, List<AuditResult> audits) {
         Page page = new Page("Gray-body audit report", heading(c), c.file());
@@ -127,32 +132,49 @@ public final class HtmlReport {
     }
 
     private static void summary(Page page, ReportCase c, SolveResult first, List<LoadCaseResult> results) {
-        Html h = page.section("summary", "Case summary");
         List<List<Cell>> rows = new ArrayList<>();
-        rows.add(List.of(Cell.text("Case file"), Cell.text(c.file())));
-        rows.add(List.of(Cell.text("Title"), Cell.text(c.title())));
-        if (!c.notes().isEmpty()) {
-            rows.add(List.of(Cell.text("Notes"), Cell.text(c.notes())));
-        }
-        rows.add(List.of(Cell.text("Surfaces"), Cell.text(Integer.toString(first.surfaces().size()))));
-        rows.add(List.of(Cell.text("Materials"), Cell.text(String.join(", ",
-                c.materials().stream().map(Material::name).toList()))));
-        rows.add(List.of(Cell.text("Bands"), Cell.text(first.bands().size() + " (" + first.bandOrigin() + ")")));
-        rows.add(List.of(Cell.text("Enclosure"), Cell.text(Double.isNaN(c.environmentK()) ? "closed"
-                : "open to an environment at " + org.exitance.report.Numbers.temperature(c.environmentK()) + " K")));
+        rows.add(row("Surfaces", Integer.toString(first.surfaces().size())));
+        rows.add(row("Bands", first.bands().size() + " (" + first.bandOrigin() + ")"));
         if (c.scene() != null) {
-            rows.add(List.of(Cell.text("Geometry"), Cell.text(c.scene().surfaceCount() + " surfaces, "
-                    + c.scene().facetCount() + " facets" + (first.facets().isEmpty() ? "" : "; solved facet by facet"))));
+            rows.add(row("Geometry", c.scene().surfaceCount() + " surfaces, " + c.scene().facetCount() + " facets"
+                    + (first.facets().isEmpty() ? "" : "; solved facet by facet")));
         }
         if (results.size() > 1 || !results.get(0).name().equals("as given")) {
-            rows.add(List.of(Cell.text("Load cases"), Cell.text(String.join(", ",
-                    results.stream().map(LoadCaseResult::name).toList()))));
+            rows.add(row("Load cases", String.join(", ", results.stream().map(LoadCaseResult::name).toList())));
         }
-        c.facts().forEach(f -> rows.add(List.of(Cell.text("Note"), Cell.text(f))));
+        summary(page, c, rows);
+    }
+
+    /**
+     * The case summary section: the case's file, title, notes, materials and enclosure, then the
+     * given rows and the case's facts; the caution; the warnings. Marks the page as invented data
+     * where the case says so.
+     *
+     * @param more rows particular to the report (item, value); not modified
+     */
+    static void summary(Page page, ReportCase c, List<List<Cell>> more) {
+        page.inventedLabel(c.title(), c.notes());
+        Html h = page.section("summary", "Case summary");
+        List<List<Cell>> rows = new ArrayList<>();
+        rows.add(row("Case file", c.file()));
+        rows.add(row("Title", c.title()));
+        if (!c.notes().isEmpty()) {
+            rows.add(row("Notes", c.notes()));
+        }
+        rows.add(row("Materials", String.join(", ", c.materials().stream().map(Material::name).toList())));
+        rows.add(row("Enclosure", Double.isNaN(c.environmentK()) ? "closed"
+                : "open to an environment at " + org.exitance.report.Numbers.temperature(c.environmentK()) + " K"));
+        rows.addAll(more);
+        c.facts().forEach(f -> rows.add(row("Note", f)));
         h.table("class=\"summary\"", "The case", List.of("Item", "Value"), rows, null);
         page.caution();
         warnings(h, c.warnings());
         h.endSection();
+    }
+
+    /** A row of two text cells. */
+    static List<Cell> row(String item, String value) {
+        return List.of(Cell.text(item), Cell.text(value));
     }
 
     private static void warnings(Html h, List<String> warnings) {

@@ -13,25 +13,93 @@ import org.exitance.geometry.Vec3;
 import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 import org.exitance.result.SurfaceResult;
+import org.exitance.timeline.Sample;
+import org.exitance.timeline.TransientResult;
 
 /**
  * The data of the 3-D view, as JSON for the page's script: the scene's facets as triangles
  * (each convex facet split into a fan from its first vertex, coordinates in m), the facet
- * outlines, and per load case each facet's temperature (K) and net flux (W/m²) with each
- * surface's totals. A facet takes its own result where the case was solved on facets
- * ({@code SURFACE#k}), else its surface's. A scene surface without a result of that name (none
- * in a consistent case) has null values and {@code "solved": false}; the page draws it grey and
- * says so when it is picked.
+ * outlines, and per frame (a load case of a solve, an output instant of a transient) each
+ * facet's temperature (K) and net flux (W/m²) with each surface's totals. A facet takes its own
+ * result where the case was solved on facets ({@code SURFACE#k}), else its surface's. A scene
+ * surface without a result of that name (none in a consistent case) has null values and
+ * {@code "solved": false}; the page draws it grey and says so when it is picked.
  */
 final class ModelData {
+    /** One surface's (or facet's) values in a frame: area (m²), temperature (K), net heat (W), net flux (W/m²). */
+    private record Values(double areaM2, double temperatureK, double netHeatW, double netFluxWPerM2) {
+    }
+
     private ModelData() {
     }
 
     /**
+     * The view of a solve: one frame per load case, each on its own colour scale.
+     *
      * @param scene   the case's geometry (not modified)
      * @param results the solved load cases (or the one solve), in order
      */
     static ObjectNode of(Scene scene, List<LoadCaseResult> results) {
+        ObjectNode m = geometry(scene);
+        m.put("frameKind", "Load case");
+        m.put("commonScale", false);
+        ArrayNode frames = m.putArray("frames");
+        for (LoadCaseResult lc : results) {
+            SolveResult r = lc.result();
+            Map<String, Values> byName = new HashMap<>();
+            for (List<SurfaceResult> list : List.of(r.surfaces(), r.facets())) {
+                list.forEach(s -> byName.put(s.name(), new Values(s.areaM2(), s.temperatureK(), s.netHeatW(),
+                        s.netFluxWPerM2())));
+            }
+            frames.add(frame(scene, lc.name(), !r.facets().isEmpty(), byName));
+        }
+        return m;
+    }
+
+    /**
+     * The view of a transient run: one frame per output instant, on one colour scale over the
+     * whole run, with the still pictures at some of the instants.
+     *
+     * @param scene       the case's geometry (not modified)
+     * @param names       the frames' names, one per sample
+     * @param first       the frame shown first
+     * @param stillFrames the frames of the still pictures (not modified)
+     */
+    static ObjectNode ofRun(Scene scene, TransientResult r, List<String> names, int first, int[] stillFrames) {
+        ObjectNode m = geometry(scene);
+        m.put("frameKind", "Instant");
+        m.put("commonScale", true);
+        m.put("firstFrame", first);
+        ArrayNode stills = m.putArray("stillFrames");
+        for (int f : stillFrames) {
+            stills.add(f);
+        }
+        Map<String, Double> area = new HashMap<>();
+        for (Surface s : scene.surfaces()) {
+            area.put(s.name(), s.area());
+            for (int k = 0; k < s.facets().size(); k++) {
+                area.put(s.name() + "#" + (k + 1), s.facets().get(k).area());
+            }
+        }
+        boolean facetResolved = r.surfaces().stream().anyMatch(s -> s.contains("#"));
+        ArrayNode frames = m.putArray("frames");
+        for (int f = 0; f < r.samples().size(); f++) {
+            Sample x = r.samples().get(f);
+            Map<String, Values> byName = new HashMap<>();
+            for (int i = 0; i < r.surfaces().size(); i++) {
+                String name = r.surfaces().get(i);
+                if (area.containsKey(name)) {
+                    double a = area.get(name);
+                    byName.put(name, new Values(a, x.temperatureK()[i], x.radiationW()[i], x.radiationW()[i] / a));
+                }
+            }
+            frames.add(frame(scene, names.get(f), facetResolved, byName));
+        }
+        return m;
+    }
+
+    /** Positions, triangles, outlines and names of the scene. */
+    private static ObjectNode geometry(Scene scene) {
         JsonNodeFactory f = JsonNodeFactory.instance;
         ObjectNode m = f.objectNode();
         ArrayNode positions = m.putArray("positions");
@@ -64,26 +132,19 @@ final class ModelData {
                 facet++;
             }
         }
-        ArrayNode cases = m.putArray("loadCases");
-        for (LoadCaseResult lc : results) {
-            cases.add(loadCase(scene, lc.name(), lc.result()));
-        }
         return m;
     }
 
-    private static ObjectNode loadCase(Scene scene, String name, SolveResult r) {
-        Map<String, SurfaceResult> byName = new HashMap<>();
-        r.surfaces().forEach(s -> byName.put(s.name(), s));
-        Map<String, SurfaceResult> facets = new HashMap<>();
-        r.facets().forEach(s -> facets.put(s.name(), s));
+    /** One frame: per scene surface its totals, per facet its own values or its surface's. */
+    private static ObjectNode frame(Scene scene, String name, boolean facetResolved, Map<String, Values> byName) {
         ObjectNode c = JsonNodeFactory.instance.objectNode();
         c.put("name", name);
-        c.put("facetResolved", !r.facets().isEmpty());
+        c.put("facetResolved", facetResolved);
         ArrayNode t = c.putArray("facetTemperatureK");
         ArrayNode q = c.putArray("facetNetFluxWPerM2");
         ArrayNode surfaces = c.putArray("surfaces");
         for (Surface surface : scene.surfaces()) {
-            SurfaceResult s = byName.get(surface.name());
+            Values s = byName.get(surface.name());
             ObjectNode o = surfaces.addObject();
             o.put("solved", s != null);
             o.put("areaM2", s == null ? surface.area() : s.areaM2());
@@ -93,7 +154,7 @@ final class ModelData {
                 o.put("netFluxWPerM2", s.netFluxWPerM2());
             }
             for (int k = 1; k <= surface.facets().size(); k++) {
-                SurfaceResult own = facets.getOrDefault(surface.name() + "#" + k, s);
+                Values own = byName.getOrDefault(surface.name() + "#" + k, s);
                 if (own == null) {
                     t.addNull();
                     q.addNull();

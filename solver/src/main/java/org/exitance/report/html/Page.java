@@ -17,6 +17,8 @@ import org.exitance.report.Version;
  */
 final class Page {
     private static final String RESOURCES = "/org/exitance/report/html/";
+    /** The page's script, in this order, run as one function (report.js holds run()). */
+    private static final String[] SCRIPTS = {"report.js", "report-charts.js", "report-model.js", "report-time.js"};
 
     final Html body = new Html();
     final ObjectNode data = JsonNodeFactory.instance.objectNode();
@@ -26,6 +28,7 @@ final class Page {
     private final String heading;
     private final String meta;
     private boolean three;
+    private String label = "";
 
     /**
      * @param kind    what the report is, e.g. "Solve report"
@@ -45,6 +48,17 @@ final class Page {
     Html section(String id, String title) {
         toc.add(new String[] {id, title});
         return body.section(id, title);
+    }
+
+    /**
+     * Marks the page as built on invented data when the case's title or notes say so (the demo
+     * cases do): a label under the heading.
+     */
+    void inventedLabel(String title, String notes) {
+        if ((title + " " + notes).toLowerCase(java.util.Locale.ROOT).contains("invented")) {
+            label = "<p class=\"invented\">Invented data: the case says its data are invented, for illustration;"
+                    + " they are not measurements.</p>";
+        }
     }
 
     /** The page also needs three.js (a 3-D view). */
@@ -96,13 +110,23 @@ final class Page {
             {"@KIND@", Html.esc(kind)},
             {"@HEADING@", Html.esc(heading)},
             {"@META@", Html.esc(meta)},
+            {"@LABEL@", label},
             {"@STYLE@", Libraries.resource(RESOURCES + "report.css")},
             {"@TOC@", tocHtml.toString()},
             {"@BODY@", body.toString()},
             {"@DATA@", json},
             {"@LIBRARIES@", libs},
-            {"@GLUE@", Libraries.resource(RESOURCES + "report.js")},
+            {"@GLUE@", glue()},
         });
+    }
+
+    /** The page's script files joined into one function scope, ending with the call of run(). */
+    private static String glue() {
+        StringBuilder b = new StringBuilder("(function () {\n'use strict';\n");
+        for (String s : SCRIPTS) {
+            b.append(Libraries.resource(RESOURCES + s)).append('\n');
+        }
+        return b.append("run();\n})();").toString();
     }
 
     /** Replaces each marker once, in one pass, so that no inserted text is searched again. */

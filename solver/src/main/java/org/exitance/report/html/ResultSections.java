@@ -129,7 +129,8 @@ final class ResultSections {
                 List.of("Band", "From, µm", "To, µm"), rows, null));
     }
 
-    private static void fold(Html h, int rows, String what, Runnable table) {
+    /** Writes a table, folded into a {@code <details>} element when it has more than {@link #FOLD_ROWS} rows. */
+    static void fold(Html h, int rows, String what, Runnable table) {
         if (rows > FOLD_ROWS) {
             h.raw("<details><summary>Table of " + Html.esc(what) + " (" + rows + " rows)</summary>\n");
             table.run();

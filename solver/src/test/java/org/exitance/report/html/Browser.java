@@ -28,7 +28,7 @@ final class Browser {
      * A pixel of the 3-D view inside a patch of one saturated colour (a facet's face, away from
      * its outline and from the white background): the one nearest the centre of all such pixels.
      */
-    private static final String FACET_PIXEL = "var c = arguments[0], t = document.createElement('canvas');"
+    static final String FACET_PIXEL = "var c = arguments[0], t = document.createElement('canvas');"
             + "t.width = c.width; t.height = c.height; var g = t.getContext('2d'); g.drawImage(c, 0, 0);"
             + "var w = t.width, h = t.height, d = g.getImageData(0, 0, w, h).data;"
             + "function at(x, y) { var i = 4 * (y * w + x); return [d[i], d[i + 1], d[i + 2]]; }"
@@ -130,20 +130,32 @@ final class Browser {
                 .isCloseTo(expected, org.assertj.core.data.Offset.offset(tolerance));
     }
 
-    /** A click on a facet of the 3-D view shows that surface's name and temperature, as in the JSON. */
-    static void checkPicking(WebDriver driver, WebElement canvas, JsonNode json, SoftAssertions soft, String name) {
+    /**
+     * Clicks a facet of the 3-D view (inside a patch of one colour) and returns the surface the
+     * pick panel then names, or null (a soft failure) when no facet was found.
+     */
+    static String clickFacet(WebDriver driver, WebElement canvas, SoftAssertions soft, String name) {
         @SuppressWarnings("unchecked")
         List<Long> xy = (List<Long>) ((JavascriptExecutor) driver).executeScript(FACET_PIXEL, canvas);
         soft.assertThat(xy).as(name + ": a facet to click in the 3-D view").isNotNull();
         if (xy == null) {
-            return;
+            return null;
         }
         int w = canvas.getSize().getWidth();
         int h = canvas.getSize().getHeight();
         new Actions(driver).moveToElement(canvas, (int) (xy.get(0) - w / 2), (int) (xy.get(1) - h / 2)).click().perform();
         WebElement pick = driver.findElement(By.id("pick"));
         new WebDriverWait(driver, Duration.ofSeconds(10)).until(d -> pick.getAttribute("data-surface") != null);
-        String surface = pick.getAttribute("data-surface");
+        return pick.getAttribute("data-surface");
+    }
+
+    /** A click on a facet of the 3-D view shows that surface's name and temperature, as in the JSON. */
+    static void checkPicking(WebDriver driver, WebElement canvas, JsonNode json, SoftAssertions soft, String name) {
+        String surface = clickFacet(driver, canvas, soft, name);
+        if (surface == null) {
+            return;
+        }
+        WebElement pick = driver.findElement(By.id("pick"));
         JsonNode r = result(json, loadCases(json).get(0)[0]);
         JsonNode expected = null;
         for (JsonNode s : r.get("surfaces")) {

@@ -30,7 +30,8 @@ import org.openqa.selenium.logging.LoggingPreferences;
 import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
- * Opens the HTML report of every demo case that solves, an audit report and a material report in
+ * Opens the HTML report of every demo case that solves, an audit report, a material report and
+ * the transient reports of {@link TransientPages} in
  * headless Chromium (Debian's chromium and chromedriver, driven by Selenium; one browser session
  * for all) and checks what a reader would: no console errors, no network request, every picture
  * and chart drawn, the 3-D view rendered, the result tables holding the values of the JSON output
@@ -43,8 +44,15 @@ class ReportsInBrowserTest {
     private static final Path DRIVER = Path.of("/usr/bin/chromedriver");
     private static final ObjectMapper JSON = new ObjectMapper();
 
-    /** A report to open, and the JSON of the same run (null for the material report). */
-    private record Report(Path page, JsonNode json, boolean hasModel) {
+    /**
+     * A report to open, and the JSON of the same run (null for the material report).
+     *
+     * @param timed a transient report
+     */
+    record Report(Path page, JsonNode json, boolean hasModel, boolean timed) {
+        Report(Path page, JsonNode json, boolean hasModel) {
+            this(page, json, hasModel, false);
+        }
     }
 
     @Test
@@ -99,7 +107,9 @@ class ReportsInBrowserTest {
         Path material = ShippedCases.root().resolve("cases").resolve("materials").resolve("white-paint.json");
         assertThat(CliRun.of("material", material.toString(), "--report", out.toString()).exitCode()).isZero();
         reports.add(new Report(out.resolve("white-paint-material.html"), null, false));
-        return reports;
+        reports.addAll(TransientPages.write(out, cases));
+        return reports.stream().map(r -> r.json() != null && r.json().has("samples")
+                ? new Report(r.page(), r.json(), r.hasModel(), true) : r).toList();
     }
 
     private static ChromeDriver start(Path out) throws IOException {
@@ -130,7 +140,11 @@ class ReportsInBrowserTest {
 
         // pictures and charts
         List<WebElement> svgs = driver.findElements(By.cssSelector("figure.plot svg"));
-        soft.assertThat(svgs).as(name + ": spectral plots").isNotEmpty();
+        if (!r.timed()) {
+            soft.assertThat(svgs).as(name + ": spectral plots").isNotEmpty();
+        } else {
+            soft.assertThat(driver.findElements(By.cssSelector("div.chart"))).as(name + ": charts against time").hasSizeGreaterThanOrEqualTo(2);
+        }
         for (WebElement svg : svgs) {
             soft.assertThat(svg.getSize().getWidth() * svg.getSize().getHeight()).as(name + ": an SVG plot's size").isPositive();
             soft.assertThat(svg.findElements(By.cssSelector("path, text")).size()).as(name + ": an SVG plot's marks")
@@ -151,16 +165,26 @@ class ReportsInBrowserTest {
                     .as(name + ": picture " + img.getAttribute("alt")).isTrue();
         }
         if (r.hasModel()) {
-            soft.assertThat(driver.findElements(By.cssSelector("#stills img"))).as(name + ": still pictures").hasSize(4);
+            soft.assertThat(driver.findElements(By.cssSelector("#stills img"))).as(name + ": still pictures")
+                    .hasSize(r.timed() ? Math.min(6, r.json().get("samples").size()) : 4);
             WebElement canvas = driver.findElement(By.id("view3d"));
             Long inked = (Long) js.executeScript(Browser.INKED_CANVAS, canvas);
             soft.assertThat(inked).as(name + ": 3-D view inked pixels").isGreaterThan(5000L);
-            Browser.checkPicking(driver, canvas, r.json(), soft, name);
+            if (r.timed()) {
+                TransientPages.checkModel(driver, canvas, r.json(), soft, name);
+            } else {
+                Browser.checkPicking(driver, canvas, r.json(), soft, name);
+            }
             // the view after the pick, as the docs show it
             Files.write(out.resolve(name.replace(".html", "-view.png")),
                     driver.findElement(By.cssSelector("div.viewer")).getScreenshotAs(org.openqa.selenium.OutputType.BYTES));
         }
-        if (r.json() != null) {
+        if (r.timed()) {
+            TransientPages.checkTables(driver, r.json(), soft, name);
+            if (!r.hasModel()) {
+                TransientPages.checkNodeTable(driver, r.json(), soft, name);
+            }
+        } else if (r.json() != null) {
             Browser.checkTables(driver, r.json(), soft, name);
         }
 
