@@ -10,8 +10,8 @@ package org.exitance.network;
  *
  * <p>Two implementations: {@link VectorTrailingKernel} (the JDK's vector API, module
  * {@code jdk.incubator.vector}, which the launcher adds; on an AVX-512 machine about five times the
- * scalar speed) and {@link ScalarTrailingKernel}. {@link #best()} takes the vector one when its
- * module is present and the system property {@code exitance.vector} is not {@code false}.
+ * scalar speed) and {@link ScalarTrailingKernel}. {@link #best()} takes the vector one when
+ * {@link VectorKernels#ON}.
  */
 interface TrailingKernel {
 
@@ -28,9 +28,9 @@ interface TrailingKernel {
     /** A short name for reports and benchmarks ("vector 8 × 64-bit", "scalar"). */
     String describe();
 
-    /** The fastest kernel this JVM can run. */
+    /** The fastest kernel this JVM can run ({@link VectorKernels}). */
     static TrailingKernel best() {
-        return Choice.BEST;
+        return Best.KERNEL;
     }
 
     /** The scalar kernel, whatever the JVM has (tests and comparisons). */
@@ -39,24 +39,11 @@ interface TrailingKernel {
     }
 
     /** Chosen once per JVM. */
-    final class Choice {
-        static final TrailingKernel BEST = choose();
+    final class Best {
+        static final TrailingKernel KERNEL = VectorKernels.load("org.exitance.network.VectorTrailingKernel",
+                TrailingKernel.class, ScalarTrailingKernel.INSTANCE);
 
-        private Choice() {
-        }
-
-        private static TrailingKernel choose() {
-            if ("false".equals(System.getProperty("exitance.vector"))
-                    || ModuleLayer.boot().findModule("jdk.incubator.vector").isEmpty()) {
-                return ScalarTrailingKernel.INSTANCE;
-            }
-            try {
-                // by name, so that this class links without the incubator module
-                return (TrailingKernel) Class.forName("org.exitance.network.VectorTrailingKernel")
-                        .getDeclaredConstructor().newInstance();
-            } catch (ReflectiveOperationException | LinkageError e) {
-                return ScalarTrailingKernel.INSTANCE;
-            }
+        private Best() {
         }
     }
 }

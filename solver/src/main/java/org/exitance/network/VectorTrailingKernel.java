@@ -10,7 +10,7 @@ import jdk.incubator.vector.VectorSpecies;
  * over after the last full pair of vectors, and rows after the last tile of four, go one vector or
  * one entry at a time ({@link Math#fma} rounds exactly as a vector lane does).
  *
- * <p>Loaded only by name from {@link TrailingKernel.Choice}, when the module is present.
+ * <p>Loaded only by name ({@link VectorKernels}), when the module is present.
  */
 final class VectorTrailingKernel implements TrailingKernel {
     private static final VectorSpecies<Double> S = DoubleVector.SPECIES_PREFERRED;
