@@ -30,6 +30,7 @@ public final class ShippedCases {
             "roller-hearth-section.json",
             "selective-absorber-audit.json",
             "spacecraft-box-blankets.json",
+            "spacecraft-box-geometry-orbits.json",
             "spacecraft-box-geometry.json",
             "spacecraft-box-orbit.json",
             "spacecraft-box-orbits-transient.json",
