@@ -74,7 +74,8 @@ final class CurvedPairs {
     /**
      * A_i F_ij of a FULL pair (i = j allowed: a concave patch with itself) over the exact shapes.
      *
-     * @return the exchange area (m²); sets {@link #lastError}
+     * @return the exchange area (m²), or NaN when the contour integral ran out of its budget
+     *         ({@link CurvedContour#BUDGET}); sets {@link #lastError}
      */
     double exchangeArea(int i, Poly p, int j, Poly q) {
         if (i != j && t.patch[i] != null && t.patch[j] != null) {
@@ -90,6 +91,9 @@ final class CurvedPairs {
         double scale = Math.max(t.radius[i], t.radius[j]);
         double tol = relativeTolerance * Math.min(t.exactArea[i], t.exactArea[j]);
         double s = contour.exchangeArea(cp, np, cq, nq, i == j ? t.exactArea[i] : 0, scale, tol);
+        if (contour.exhausted) {
+            return Double.NaN;
+        }
         // rounding: the terms' sum loses about 1e-15 of their magnitude
         lastError = contour.lastError + 1e-14 * contour.lastMagnitude;
         return Math.max(0, s);

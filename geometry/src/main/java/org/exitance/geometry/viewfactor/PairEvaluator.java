@@ -83,6 +83,13 @@ final class PairEvaluator {
         lastError = 0;
         double s = curved.exchangeArea(i, p, i, q);
         lastError = curved.lastError;
+        if (Double.isNaN(s)) {
+            // the contour integral ran out of its budget (a degenerate shape): the flat facet's 0,
+            // and an error as large as the exchange area can be, so the tolerance is not met
+            counters[CURVED_ON_POLYGONS]++;
+            lastError = t.exactArea[i];
+            return 0;
+        }
         if (blocked(i, i)) {
             // something inside the patch's own solid may hide part of it from itself: anything
             // between 0 and the unobstructed value, said so in the estimate
@@ -97,7 +104,8 @@ final class PairEvaluator {
     /**
      * A pair with an exact curved side: 0 when one is behind the other, the contour integral over
      * the exact boundaries when each sees all of the other with nothing in the way, else NaN
-     * (the polygon methods then take it, see {@link #polygonFallback}).
+     * (the polygon methods then take it, see {@link #polygonFallback}); NaN too when that contour
+     * integral runs out of its budget (a degenerate shape).
      */
     private double curvedPair(int i, int j) {
         p.load(t, i);
@@ -118,9 +126,12 @@ final class PairEvaluator {
             lastError = curved.lastError;
             return s;
         }
+        double s = curved.exchangeArea(i, p, j, q);
+        if (Double.isNaN(s)) {
+            return s; // the contour integral's budget ran out: the polygons take the pair
+        }
         counters[CONTOUR]++;
         counters[CURVED_EXACT]++;
-        double s = curved.exchangeArea(i, p, j, q);
         lastError = curved.lastError;
         return s;
     }
