@@ -7,7 +7,12 @@ import org.exitance.geometry.viewfactor.PairSource;
  * Binary cluster tree over the facets: each node is a contiguous range of positions in a
  * permutation of the facets, with the bounding box of its facets' vertices (m). A node with more than {@code leafSize} facets is bisected across the longest axis of
  * its centroids' bounding box at that box's midpoint (geometric bisection); when every centroid
- * lies on one side, it is halved in the order below instead.
+ * lies on one side, it is halved in the order below instead. A node whose facets lie in 2 to
+ * {@value #MAX_PLANES} distinct planes (an edge or a corner of a box, a few flat walls) is first
+ * split by plane instead: the facets in the plane of its first facet against the rest. Cross
+ * approximation of a block whose cluster spans a crease has to find every plane's part of the
+ * kernel with its pivots and was measured to miss some (a 10,086-facet cube: row errors 6e-3 at a
+ * block tolerance of 1e-6); with planar clusters each far block is one smooth kernel.
  *
  * <p>Order independence: the facets are first sorted by their order-independent key
  * ({@link PairSource#key}, index on ties) and every split keeps that order on each side, so the
@@ -18,6 +23,8 @@ import org.exitance.geometry.viewfactor.PairSource;
  * cluster's plane, exchange nothing, and their block is known to be zero without sampling.
  */
 final class ClusterTree {
+
+    static final int MAX_PLANES = 8;
 
     /** Facet index at each position (position = index in tree order). */
     final int[] perm;
@@ -124,6 +131,12 @@ final class ClusterTree {
         if (to - from <= leafSize) {
             return v;
         }
+        int cut = planeCut(src, from, to, scratch);
+        if (cut > from) {
+            child1[v] = split(src, from, cut, leafSize, count, scratch);
+            child2[v] = split(src, cut, to, leafSize, count, scratch);
+            return v;
+        }
         int axis = 0;
         for (int k = 1; k < 3; k++) {
             if (chi[k] - clo[k] > chi[axis] - clo[axis]) {
@@ -140,7 +153,7 @@ final class ClusterTree {
             }
         }
         System.arraycopy(scratch, 0, perm, from + left, right);
-        int cut = from + left;
+        cut = from + left;
         if (left == 0 || right == 0) {
             // all centroids on one side (identical coordinate): halve in key order
             cut = from + (to - from) / 2;
@@ -148,6 +161,68 @@ final class ClusterTree {
         child1[v] = split(src, from, cut, leafSize, count, scratch);
         child2[v] = split(src, cut, to, leafSize, count, scratch);
         return v;
+    }
+
+    /**
+     * Puts the facets in the plane of the node's first facet before the others (order kept on
+     * each side) when the node spans 2..{@value #MAX_PLANES} planes.
+     *
+     * @return the first position after that plane's facets, or {@code from} for no plane split
+     */
+    private int planeCut(PairSource src, int from, int to, int[] scratch) {
+        double[] planes = new double[4 * (MAX_PLANES + 1)];
+        int count = 0;
+        for (int p = from; p < to; p++) {
+            int f = perm[p];
+            if (src.curved(f)) {
+                return from;
+            }
+            if (planeIndex(src, f, planes, count) < 0) {
+                if (count == MAX_PLANES) {
+                    return from;
+                }
+                double[] pl = planeOfFacet(src, f);
+                System.arraycopy(pl, 0, planes, 4 * count, 4);
+                count++;
+            }
+        }
+        if (count < 2) {
+            return from;
+        }
+        int in = 0, out = 0;
+        for (int p = from; p < to; p++) {
+            int f = perm[p];
+            if (planeIndex(src, f, planes, 1) == 0) {
+                perm[from + in++] = f;
+            } else {
+                scratch[out++] = f;
+            }
+        }
+        System.arraycopy(scratch, 0, perm, from + in, out);
+        return from + in;
+    }
+
+    private double planeTolerance = -1;
+
+    private static double[] planeOfFacet(PairSource src, int f) {
+        double nx = src.normal(f, 0), ny = src.normal(f, 1), nz = src.normal(f, 2);
+        return new double[] {nx, ny, nz, nx * src.centroid(f, 0) + ny * src.centroid(f, 1) + nz * src.centroid(f, 2)};
+    }
+
+    /** @return index among the first {@code count} planes of the one facet f lies in, or −1 */
+    private int planeIndex(PairSource src, int f, double[] planes, int count) {
+        if (planeTolerance < 0) {
+            planeTolerance = 1e-9 * Math.max(diameter(0), 1e-300);
+        }
+        double[] pl = planeOfFacet(src, f);
+        for (int k = 0; k < count; k++) {
+            if (Math.abs(pl[0] - planes[4 * k]) <= 1e-12 && Math.abs(pl[1] - planes[4 * k + 1]) <= 1e-12
+                    && Math.abs(pl[2] - planes[4 * k + 2]) <= 1e-12
+                    && Math.abs(pl[3] - planes[4 * k + 3]) <= planeTolerance) {
+                return k;
+            }
+        }
+        return -1;
     }
 
     /** Records the common plane of the node's facets, or NaN. */
