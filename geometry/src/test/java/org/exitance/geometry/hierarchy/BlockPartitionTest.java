@@ -49,6 +49,34 @@ class BlockPartitionTest {
     }
 
     @Test
+    void aSixFacetCubeIsOneExactBlockWithTheClosedFormFactors() {
+        // smallest case: one leaf, no far block. Unit cube faces: opposite 0.19982 (Howell C-11),
+        // adjacent 0.20004 (C-14), via ClosedForms; rows sum to 1 (summation rule)
+        Scene cube = Scene.of(Enclosures.box(Vec3.ZERO, new Vec3(1, 1, 1), 1, 1, 1));
+        CompressedOperator op = OperatorBuilder.build(cube, ViewFactorOptions.defaults(), OperatorOptions.defaults(),
+                org.exitance.geometry.viewfactor.ProgressListener.NONE);
+        assertThat(op.report().farBlocks() + op.report().zeroBlocks()).isZero();
+        double[] e = new double[36], y = new double[36];
+        for (int c = 0; c < 6; c++) {
+            e[c * 6 + c] = 1;
+        }
+        op.multiplyViewFactors(e, 6, y);
+        double opposite = org.exitance.geometry.viewfactor.ClosedForms.parallelRectangles(1, 1, 1);
+        double adjacent = org.exitance.geometry.viewfactor.ClosedForms.perpendicularRectangles(1, 1, 1);
+        for (int i = 0; i < 6; i++) {
+            double sum = 0;
+            for (int j = 0; j < 6; j++) {
+                double fij = y[i * 6 + j];
+                sum += fij;
+                boolean facing = cube.facets().get(i).normal().dot(cube.facets().get(j).normal()) < -0.5;
+                assertThat(fij).isCloseTo(i == j ? 0 : facing ? opposite : adjacent,
+                        org.assertj.core.api.Assertions.within(1e-9));
+            }
+            assertThat(sum).isCloseTo(1, org.assertj.core.api.Assertions.within(1e-12));
+        }
+    }
+
+    @Test
     void leavesOfABoxLieInOnePlaneAndZeroBlocksExchangeNothing() {
         ClusterTree tree = new ClusterTree(SRC, 16);
         for (int v : tree.leaves) {

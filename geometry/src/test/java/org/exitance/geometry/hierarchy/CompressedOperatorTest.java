@@ -146,6 +146,20 @@ class CompressedOperatorTest {
     }
 
     @Test
+    void meshedCylinderWithManyPlanesAgreesWithDense() {
+        // 64 facet columns around: clusters with many planes, normals turning from facet to facet
+        Scene cylinder = Scene.of(Enclosures.cylindricalCavity(Vec3.ZERO, new Vec3(0, 0, 1), 0.5, 1.2, 64, 20, 6));
+        ViewFactorOptions vf = ViewFactorOptions.defaults();
+        double[] f = dense(ViewFactorCalculator.compute(cylinder, vf, ProgressListener.NONE));
+        CompressedOperator op = OperatorBuilder.build(cylinder, vf, options(), ProgressListener.NONE);
+        System.out.println(op.report().summary());
+        assertThat(op.report().farBlocks()).isGreaterThan(20);
+        assertThat(relativeProductError(op, f, 2, 4)).isLessThan(op.report().tolerance());
+        assertThat(max(rowErrors(op, f))).as("measured worst row (l1)").isLessThan(op.report().errorEstimate());
+        assertRowsSumToOne(op);
+    }
+
+    @Test
     void rowsOfClosedEnclosuresSumToOneAfterTheClosureScaling() {
         // summation rule, Siegel & Howell 4th ed. eq. 4.19
         double[] unscaled = blockOp.scale;
