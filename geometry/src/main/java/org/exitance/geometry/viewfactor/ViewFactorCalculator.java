@@ -10,7 +10,6 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.BooleanSupplier;
 import org.exitance.geometry.Scene;
-import org.exitance.geometry.bvh.TriangleBvh;
 
 /**
  * Entry point: facet-to-facet and surface-to-surface view factors of a {@link Scene}.
@@ -54,13 +53,8 @@ public final class ViewFactorCalculator {
     public static ViewFactorResult compute(Scene scene, ViewFactorOptions options, ProgressListener progress,
             BooleanSupplier cancelRequested) {
         long start = System.nanoTime();
-        FacetTable t = new FacetTable(scene, ProximityRule.MAX_ORDER);
-        boolean[] candidates = options.obstruction() == Obstruction.AUTO ? Occluders.candidates(t) : null;
-        TriangleBvh occluders = candidates == null ? null : Occluders.build(t, candidates);
-        CoplanarOccluders planes = occluders == null ? null : new CoplanarOccluders(t, candidates);
-        SilhouetteEdges edges = planes == null ? null : new SilhouetteEdges(t, candidates, planes);
-        ConvexOccluders convex = edges == null ? null : new ConvexOccluders(t, edges);
-        ProximityRule rule = new ProximityRule(options.pairTolerance());
+        PairSource source = new PairSource(scene, options);
+        FacetTable t = source.table;
         int n = t.count;
         double[] f = new double[Math.multiplyExact(n, n)];
         int chunks = Math.min(CHUNKS, n);
@@ -81,8 +75,7 @@ public final class ViewFactorCalculator {
         List<Future<?>> futures = new ArrayList<>();
         for (int w = 0; w < threads; w++) {
             futures.add(pool.submit(() -> {
-                PairEvaluator ev = new PairEvaluator(t, occluders, planes, edges, convex, rule, options.contourOrder(),
-                        options.visibilityOrder());
+                PairEvaluator ev = source.newPairs().ev;
                 for (int c = nextChunk.getAndIncrement(); c < chunks; c = nextChunk.getAndIncrement()) {
                     java.util.Arrays.fill(ev.counters, 0);
                     double[] err = chunkError[c];

@@ -1,7 +1,7 @@
 package org.exitance.geometry.viewfactor;
 
 /** Closed-form configuration factors used as expected values in tests, each with its source. */
-final class ClosedForms {
+public final class ClosedForms {
 
     private ClosedForms() {
     }
@@ -11,7 +11,7 @@ final class ClosedForms {
      * Heat Transfer Configuration Factors</i>, case C-11; Incropera et al., <i>Fundamentals of Heat
      * and Mass Transfer</i>, 6th ed., Table 13.2 (aligned parallel rectangles).
      */
-    static double parallelRectangles(double a, double b, double c) {
+    public static double parallelRectangles(double a, double b, double c) {
         double x = a / c, y = b / c;
         double x2 = 1 + x * x, y2 = 1 + y * y;
         return 2 / (Math.PI * x * y) * (0.5 * Math.log(x2 * y2 / (1 + x * x + y * y))
@@ -24,7 +24,7 @@ final class ClosedForms {
      * receiver height z. Howell's catalog, case C-14; Incropera et al., 6th ed., Table 13.2
      * (H = Z/X, W = Y/X).
      */
-    static double perpendicularRectangles(double x, double y, double z) {
+    public static double perpendicularRectangles(double x, double y, double z) {
         double h = z / x, w = y / x;
         double h2 = h * h, w2 = w * w, s = Math.sqrt(h2 + w2);
         double log = Math.log((1 + w2) * (1 + h2) / (1 + w2 + h2))
