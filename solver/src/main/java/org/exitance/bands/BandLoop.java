@@ -55,8 +55,9 @@ public final class BandLoop {
         for (int k = 0; k < nets.length; k++) {
             ExternalIrradiation h = ExternalIrradiation.of(r, bands.get(k), absorption, emissivity[k], tau[k], t);
             external[k] = h;
-            nets[k] = new BandNetwork(r.viewFactors, r.n, r.area, emissivity[k], new WindowCoupling(tau[k], r.otherFace),
-                    h.irradiance(), h.leaving(), h.retained(), h.retainedMagnitude(), solver);
+            nets[k] = new BandNetwork(r.operator, r.viewFactors, r.area, emissivity[k],
+                    new WindowCoupling(tau[k], r.otherFace), h.irradiance(), h.leaving(), h.retained(),
+                    h.retainedMagnitude(), solver);
         }
         return new BandLoop(List.copyOf(bands), emissivity, nets, external);
     }

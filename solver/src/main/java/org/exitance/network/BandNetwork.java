@@ -28,7 +28,10 @@ package org.exitance.network;
  */
 public final class BandNetwork {
     final int n;
+    /** F as a dense array, or null when the network works from {@link #op} alone. */
     final double[] f;
+    /** F as an operator: every F product of this class and of the fused band solves. */
+    final RadiationOperator op;
     final double[] eps;
     private final double[] rho;
     final double[] tau;
@@ -81,7 +84,22 @@ public final class BandNetwork {
     public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] emissivity, WindowCoupling windows,
                        double[] externalIrradiation, double[] externalReflected, double[] externalRetained,
                        double[] externalMagnitude, RadiositySolver solver) {
-        this.n = n;
+        this(RadiationOperator.dense(viewFactors, n), viewFactors, areasM2, emissivity, windows, externalIrradiation,
+                externalReflected, externalRetained, externalMagnitude, solver);
+    }
+
+    /**
+     * A band over a {@link RadiationOperator}; the other arguments as above.
+     *
+     * @param operator     F as an operator (shared, not modified)
+     * @param viewFactors  F, N×N row-major (shared, not modified), or null when the strategy works from
+     *                     the operator alone (conjugate gradients)
+     */
+    public BandNetwork(RadiationOperator operator, double[] viewFactors, double[] areasM2, double[] emissivity,
+                       WindowCoupling windows, double[] externalIrradiation, double[] externalReflected,
+                       double[] externalRetained, double[] externalMagnitude, RadiositySolver solver) {
+        this.op = operator;
+        this.n = operator.size();
         this.f = viewFactors;
         this.eps = emissivity.clone();
         this.rho = new double[n];
@@ -97,7 +115,7 @@ public final class BandNetwork {
             rho[i] = Math.max(0.0, 1.0 - eps[i] - tau[i]);
         }
         this.area = areasM2.clone();
-        this.prepared = solver.prepare(f, n, rho, area, windows);
+        this.prepared = solver.prepare(op, f, rho, area, windows);
     }
 
     /**
@@ -153,9 +171,9 @@ public final class BandNetwork {
         return prepared;
     }
 
-    /** The view factors (shared). */
-    double[] viewFactors() {
-        return f;
+    /** The view-factor operator (shared). */
+    RadiationOperator operator() {
+        return op;
     }
 
     /** ε_i δE_i (a new array; not modified). */
@@ -237,10 +255,25 @@ public final class BandNetwork {
         double[] b = responseSource(deltaEmissive);
         double[] x = new double[n];
         prepared.solve(b, x);
+        // F x on the rows asked for and their windows' other faces
+        int[] slot = new int[n];
+        java.util.Arrays.fill(slot, -1);
+        int[] need = new int[2 * rows.length];
+        int count = 0;
+        for (int i : rows) {
+            for (int r : new int[] {i, other[i]}) {
+                if (r >= 0 && slot[r] < 0) {
+                    slot[r] = count;
+                    need[count++] = r;
+                }
+            }
+        }
+        double[] fx = new double[count];
+        op.multiplyRows(java.util.Arrays.copyOf(need, count), x, 1, fx);
         double[] out = new double[rows.length];
         for (int r = 0; r < rows.length; r++) {
             int i = rows[r];
-            out[r] = response(i, b, rowTimes(i, x), other[i] >= 0 ? rowTimes(other[i], x) : 0.0);
+            out[r] = response(i, b, fx[slot[i]], other[i] >= 0 ? fx[slot[other[i]]] : 0.0);
         }
         return out;
     }
@@ -248,16 +281,6 @@ public final class BandNetwork {
     /** Iterations of the last linear solve of this band. */
     public int lastIterations() {
         return prepared.lastIterations();
-    }
-
-    /** (F x)_i; x not modified. */
-    private double rowTimes(int i, double[] x) {
-        double s = 0;
-        int row = i * n;
-        for (int k = 0; k < n; k++) {
-            s += f[row + k] * x[k];
-        }
-        return s;
     }
 
     /**
@@ -322,10 +345,13 @@ public final class BandNetwork {
         return d;
     }
 
-    /** G = F J + H, rows in parallel; arrays not modified, result new. */
+    /** G = F J + H ({@link RadiationOperator#multiply}); arrays not modified, result new. */
     private double[] irradiationFrom(double[] j, double[] external) {
         double[] g = new double[n];
-        java.util.stream.IntStream.range(0, n).parallel().forEach(i -> g[i] = external[i] + rowTimes(i, j));
+        op.multiply(j, 1, g);
+        for (int i = 0; i < n; i++) {
+            g[i] += external[i];
+        }
         return g;
     }
 

@@ -63,17 +63,23 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
     /** Opaque enclosures only: a window's coupling breaks the symmetry this method needs. */
     @Override
     public Prepared prepare(double[] f, int n, double[] rho, double[] area, WindowCoupling windows) {
+        return prepare(RadiationOperator.dense(f, n), f, rho, area, windows);
+    }
+
+    /** Works from the operator's products alone; the dense array is not used (may be null). */
+    @Override
+    public Prepared prepare(RadiationOperator op, double[] f, double[] rho, double[] area, WindowCoupling windows) {
         if (!windows.isEmpty()) {
             throw new IllegalArgumentException("conjugate gradients need a symmetric radiosity matrix; an enclosure"
                     + " with windows needs the direct solver (RadiositySolver.forSize)");
         }
-        return new SymmetricBand(f, n, rho.clone(), area.clone(), relativeTolerance, maxIterations);
+        return new SymmetricBand(op, rho.clone(), area.clone(), relativeTolerance, maxIterations);
     }
 
     /**
      * Solves several bands of the same enclosure together: each band runs its own conjugate
      * gradients, but every iteration multiplies F with all active bands' search directions in one
-     * pass over F ({@link FusedProduct}). Each band's numbers are the same as when it is solved
+     * pass over F ({@link RadiationOperator#multiply}). Each band's numbers are the same as when it is solved
      * alone.
      *
      * @param bands  prepared bands sharing one view-factor array

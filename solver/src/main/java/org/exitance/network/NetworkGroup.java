@@ -5,8 +5,8 @@ import java.util.stream.IntStream;
 /**
  * The networks of all bands of one property update, which share one view-factor array: solves
  * and flux responses of every band at once. When every band uses conjugate gradients the bands
- * iterate together and each pass over F serves all of them ({@link FusedProduct}: the memory
- * traffic of one product for B bands); otherwise the bands are solved side by side in parallel.
+ * iterate together and each pass over F serves all of them ({@link RadiationOperator#multiply}: for the
+ * dense matrix, the memory traffic of one product for B bands); otherwise the bands are solved side by side in parallel.
  * Either way each band's numbers are those of its own solve, whatever the thread count.
  */
 public final class NetworkGroup {
@@ -35,7 +35,7 @@ public final class NetworkGroup {
             b[k] = nets[k].source(emissive[k]);
         }
         SymmetricBand.solveTogether(cg, b, j, 1.0);
-        double[] fj = product(nets[0].viewFactors(), n, j);
+        double[] fj = product(nets[0].operator(), n, j);
         for (int k = 0; k < nb; k++) {
             double[] col = new double[n];
             for (int i = 0; i < n; i++) {
@@ -74,7 +74,7 @@ public final class NetworkGroup {
         // F x on the rows asked for and (for windows) their other faces
         double[] v = interleave(x, n);
         double[] w = new double[rows.length * nb];
-        FusedProduct.multiplyRows(nets[0].viewFactors(), n, rows, v, nb, w);
+        nets[0].operator().multiplyRows(rows, v, nb, w);
         for (int k = 0; k < nb; k++) {
             out[k] = new double[rows.length];
             for (int r = 0; r < rows.length; r++) {
@@ -88,7 +88,7 @@ public final class NetworkGroup {
     private static SymmetricBand[] fused(BandNetwork[] nets) {
         SymmetricBand[] cg = new SymmetricBand[nets.length];
         for (int k = 0; k < nets.length; k++) {
-            if (!(nets[k].prepared() instanceof SymmetricBand s) || s.f != nets[0].viewFactors()) {
+            if (!(nets[k].prepared() instanceof SymmetricBand s) || s.op != nets[0].operator()) {
                 return null;
             }
             cg[k] = s;
@@ -97,9 +97,9 @@ public final class NetworkGroup {
     }
 
     /** F · [j_0 … j_B−1] as N×B row-major. */
-    private static double[] product(double[] f, int n, double[][] j) {
+    private static double[] product(RadiationOperator op, int n, double[][] j) {
         double[] w = new double[n * j.length];
-        FusedProduct.multiply(f, n, interleave(j, n), j.length, w);
+        op.multiply(interleave(j, n), j.length, w);
         return w;
     }
 

@@ -7,7 +7,7 @@ package org.exitance.network;
  * enters the right-hand side.
  */
 final class SymmetricBand implements RadiositySolver.Prepared {
-    final double[] f;
+    final RadiationOperator op;
     final int n;
     private final double[] rho;
     private final double[] area;
@@ -19,23 +19,35 @@ final class SymmetricBand implements RadiositySolver.Prepared {
     private int iterations;
     private double residual;
 
-    SymmetricBand(double[] f, int n, double[] rho, double[] area, double tol, int maxIterations) {
-        this.f = f;
-        this.n = n;
+    /**
+     * @param op    the view-factor operator (shared, not modified)
+     * @param rho   ρ per surface; kept, not modified
+     * @param area  A per surface (m²); kept, not modified
+     */
+    SymmetricBand(RadiationOperator op, double[] rho, double[] area, double tol, int maxIterations) {
+        this.op = op;
+        this.n = op.size();
         this.rho = rho;
         this.area = area;
         this.tol = tol;
         this.maxIterations = maxIterations;
         free = new boolean[n];
         diag = new double[n];
+        boolean allFree = true;
         double[] ones = new double[n];
         for (int i = 0; i < n; i++) {
             free[i] = rho[i] > 0;
+            allFree &= free[i];
             ones[i] = free[i] ? 1.0 : 0.0;
-            diag[i] = free[i] ? area[i] / rho[i] - area[i] * f[i * n + i] : 1.0;
+            diag[i] = free[i] ? area[i] / rho[i] - area[i] * op.diagonal(i) : 1.0;
         }
-        double[] fo = new double[n];
-        FusedProduct.multiply(f, n, ones, 1, fo);
+        double[] fo;
+        if (allFree) {
+            fo = op.rowSums();
+        } else {
+            fo = new double[n];
+            op.multiply(ones, 1, fo);
+        }
         double zsz = 0;
         for (int i = 0; i < n; i++) {
             if (free[i]) {
@@ -65,7 +77,7 @@ final class SymmetricBand implements RadiositySolver.Prepared {
     static void solveTogether(SymmetricBand[] bands, double[][] b, double[][] out, double relax) {
         int nb = bands.length;
         int n = bands[0].n;
-        double[] f = bands[0].f;
+        RadiationOperator op = bands[0].op;
         // known black radiosities, and c = A_i b_i/ρ_i + A_i Σ_{black k} F_ik J_k on the free rows
         double[] known = new double[n * nb];
         for (int k = 0; k < nb; k++) {
@@ -74,7 +86,7 @@ final class SymmetricBand implements RadiositySolver.Prepared {
             }
         }
         double[] fk = new double[n * nb];
-        FusedProduct.multiply(f, n, known, nb, fk);
+        op.multiply(known, nb, fk);
         State[] st = new State[nb];
         for (int k = 0; k < nb; k++) {
             SymmetricBand s = bands[k];
@@ -163,7 +175,7 @@ final class SymmetricBand implements RadiositySolver.Prepared {
             }
         }
         double[] w = new double[n * na];
-        FusedProduct.multiply(bands[0].f, n, v, na, w);
+        bands[0].op.multiply(v, na, w);
         double[][] q = new double[bands.length][];
         for (int a = 0; a < na; a++) {
             int k = active[a];
