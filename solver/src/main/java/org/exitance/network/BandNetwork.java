@@ -42,6 +42,12 @@ public final class BandNetwork {
     private final double[] retainedMagnitude;
     final double[] area;
     final RadiositySolver.Prepared prepared;
+    /**
+     * The last fused solve's J and its product F·J (NetworkGroup), the warm start of the next
+     * conjugate-gradient solve of this band; null before the first.
+     */
+    double[] lastRadiosity;
+    double[] lastIrradiationProduct;
 
     /**
      * @param viewFactors          F, N×N row-major (not modified, not copied)

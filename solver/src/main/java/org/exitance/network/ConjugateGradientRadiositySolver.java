@@ -75,18 +75,4 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
         }
         return new SymmetricBand(op, rho.clone(), area.clone(), relativeTolerance, maxIterations);
     }
-
-    /**
-     * Solves several bands of the same enclosure together: each band runs its own conjugate
-     * gradients, but every iteration multiplies F with all active bands' search directions in one
-     * pass over F ({@link RadiationOperator#multiply}). Each band's numbers are the same as when it is solved
-     * alone.
-     *
-     * @param bands  prepared bands sharing one view-factor array
-     * @param b      right-hand side per band, not modified
-     * @param j      receives J per band; modified
-     */
-    static void solveTogether(SymmetricBand[] bands, double[][] b, double[][] j) {
-        SymmetricBand.solveTogether(bands, b, j, 1.0);
-    }
 }

@@ -34,7 +34,16 @@ public final class NetworkGroup {
         for (int k = 0; k < nb; k++) {
             b[k] = nets[k].source(emissive[k]);
         }
-        SymmetricBand.solveTogether(cg, b, j, 1.0);
+        double[][] start = new double[nb][];
+        double[][] startFj = new double[nb][];
+        boolean warm = true;
+        for (int k = 0; k < nb; k++) {
+            start[k] = nets[k].lastRadiosity;
+            startFj[k] = nets[k].lastIrradiationProduct;
+            warm &= start[k] != null;
+        }
+        FusedConjugateGradients.solve(cg, b, j, 1.0, false, warm ? start : null, warm ? startFj : null, null);
+        // the residual check and the net fluxes use a fresh product F·J (not the recurrence)
         double[] fj = product(nets[0].operator(), n, j);
         for (int k = 0; k < nb; k++) {
             double[] col = new double[n];
@@ -42,6 +51,8 @@ public final class NetworkGroup {
                 col[i] = fj[i * nb + k];
             }
             states[k] = nets[k].finish(emissive[k], b[k], j[k], col);
+            nets[k].lastRadiosity = j[k];
+            nets[k].lastIrradiationProduct = col;
         }
         return states;
     }
@@ -49,14 +60,15 @@ public final class NetworkGroup {
     /**
      * The net-flux change of the given surfaces in every band for emissive-power changes δE at
      * fixed properties ({@link BandNetwork#fluxResponse}, all bands at once). With conjugate
-     * gradients the responses are solved to a tolerance relaxed by
-     * {@link SymmetricBand#RESPONSE_RELAXATION} (1e-7 per surface): they steer Newton steps only.
+     * gradients the responses are solved to the bands' tolerance times {@code relax} (they steer
+     * Newton steps only), from a zero start, and F·x comes from the iterations' own products.
      *
      * @param delta  δE per band and surface (W/m²), not modified
      * @param rows   the surfaces wanted, not modified
+     * @param relax  factor on the conjugate-gradient tolerance (ignored by the direct strategy)
      * @return δq per band, in the order of rows (W/m²)
      */
-    public static double[][] fluxResponses(BandNetwork[] nets, double[][] delta, int[] rows) {
+    public static double[][] fluxResponses(BandNetwork[] nets, double[][] delta, int[] rows, double relax) {
         int nb = nets.length;
         double[][] out = new double[nb][];
         SymmetricBand[] cg = fused(nets);
@@ -70,18 +82,26 @@ public final class NetworkGroup {
         for (int k = 0; k < nb; k++) {
             b[k] = nets[k].responseSource(delta[k]);
         }
-        SymmetricBand.solveTogether(cg, b, x, SymmetricBand.RESPONSE_RELAXATION);
-        // F x on the rows asked for and (for windows) their other faces
-        double[] v = interleave(x, n);
-        double[] w = new double[rows.length * nb];
-        nets[0].operator().multiplyRows(rows, v, nb, w);
+        double[][] fx = new double[nb][n];
+        FusedConjugateGradients.solve(cg, b, x, relax, true, null, null, fx);
         for (int k = 0; k < nb; k++) {
             out[k] = new double[rows.length];
             for (int r = 0; r < rows.length; r++) {
-                out[k][r] = nets[k].response(rows[r], b[k], w[r * nb + k], 0.0); // CG: no windows
+                out[k][r] = nets[k].response(rows[r], b[k], fx[k][rows[r]], 0.0); // CG: no windows
             }
         }
         return out;
+    }
+
+    /**
+     * Gives {@code to} the last radiosities (and their product F·J, which depends on J and F alone)
+     * of {@code from} as the warm start of its next fused solve, when both share one operator.
+     */
+    public static void warmStart(BandNetwork to, BandNetwork from) {
+        if (to.operator() == from.operator() && from.lastRadiosity != null) {
+            to.lastRadiosity = from.lastRadiosity;
+            to.lastIrradiationProduct = from.lastIrradiationProduct;
+        }
     }
 
     /** The bands' CG operators when all bands use conjugate gradients on one F, else null. */

@@ -56,8 +56,9 @@ public final class SolverBenchmark {
         int threads = args.length > 5 ? Integer.parseInt(args[5]) : Runtime.getRuntime().availableProcessors();
         ForkJoinPool pool = new ForkJoinPool(threads);
         List<double[]> points = new ArrayList<>();
-        System.out.printf(Locale.ROOT, "%-8s %-6s %-5s %-14s %-9s %-9s %-9s %-7s %-7s %-8s %s%n", "facets", "unknown",
-                "bands", "solver", "median_s", "min_s", "peak_MB", "est_MB", "newton", "products", "iterations/band");
+        System.out.printf(Locale.ROOT, "%-8s %-6s %-5s %-14s %-9s %-9s %-9s %-7s %-7s %-8s %-8s %s%n", "facets", "unknown",
+                "bands", "solver", "median_s", "min_s", "peak_MB", "est_MB", "newton", "products", "passes",
+                "iterations/band");
         for (int size : sizes) {
             int c = BoxModels.cellsFor(size);
             int n = 6 * c * c;
@@ -86,9 +87,9 @@ public final class SolverBenchmark {
             double median = sorted[runs / 2];
             double cpuPerRun = (cpuNanos() - cpu0) * 1e-9 / runs;
             SolverReport s = last.solver();
-            System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s %-9.3f %-9.3f %-9d %-7d %-7d %-8d %s  (runs %s; cpu %.1f s/run; balance %.3g W)%n",
+            System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s %-9.3f %-9.3f %-9d %-7d %-7d %-8d %-8.1f %s  (runs %s; cpu %.1f s/run; balance %.3g W)%n",
                     n, m, bands, s.strategy(), median, sorted[0], s.peakHeapBytes() >> 20, s.estimatedBytes() >> 20,
-                    s.newtonIterations(), s.krylovProducts(), Arrays.toString(s.bandIterations()), fmt(times),
+                    s.newtonIterations(), s.krylovProducts(), s.operatorPasses(), Arrays.toString(s.bandIterations()), fmt(times),
                     cpuPerRun, last.energyBalanceW());
             points.add(new double[] {n, median});
         }
