@@ -64,6 +64,7 @@ public final class ExitanceCommand implements Runnable {
         }
         out.flush();
         err.flush();
+        SolveProgress.reported();
         return code;
     }
 

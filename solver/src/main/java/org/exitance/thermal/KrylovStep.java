@@ -183,6 +183,7 @@ final class KrylovStep {
 
     /** W J P y: rows scaled by 1/tol, columns by 1/d (a new array; y not modified). */
     private double[] apply(double[] y, double[] diag, double[] tol, double[][] dE, double relax) {
+        SolveMonitor.checkCancelled();
         products++;
         int m = y.length;
         double[] v = new double[m];
