@@ -42,10 +42,7 @@ public final class BandNetwork {
     private final double[] retainedMagnitude;
     final double[] area;
     final RadiositySolver.Prepared prepared;
-    /**
-     * The last fused solve's J and its product F·J (NetworkGroup), the warm start of the next
-     * conjugate-gradient solve of this band; null before the first.
-     */
+    /** The last fused solve's J and F·J (NetworkGroup): the next CG solve's warm start; null before. */
     double[] lastRadiosity;
     double[] lastIrradiationProduct;
 
@@ -261,21 +258,10 @@ public final class BandNetwork {
         double[] b = responseSource(deltaEmissive);
         double[] x = new double[n];
         prepared.solve(b, x);
-        // F x on the rows asked for and their windows' other faces
         int[] slot = new int[n];
-        java.util.Arrays.fill(slot, -1);
-        int[] need = new int[2 * rows.length];
-        int count = 0;
-        for (int i : rows) {
-            for (int r : new int[] {i, other[i]}) {
-                if (r >= 0 && slot[r] < 0) {
-                    slot[r] = count;
-                    need[count++] = r;
-                }
-            }
-        }
-        double[] fx = new double[count];
-        op.multiplyRows(java.util.Arrays.copyOf(need, count), x, 1, fx);
+        int[] need = NodeSensitivities.withOtherFaces(rows, other, slot); // the rows and their windows' other faces
+        double[] fx = new double[need.length];
+        op.multiplyRows(need, x, 1, fx);
         double[] out = new double[rows.length];
         for (int r = 0; r < rows.length; r++) {
             int i = rows[r];
@@ -336,19 +322,11 @@ public final class BandNetwork {
     }
 
     private static double[] difference(double[] a, double[] b) {
-        double[] d = new double[a.length];
-        for (int i = 0; i < d.length; i++) {
-            d[i] = a[i] - b[i];
-        }
-        return d;
+        return java.util.stream.IntStream.range(0, a.length).mapToDouble(i -> a[i] - b[i]).toArray();
     }
 
     private static double[] sum(double[] a, double[] b) {
-        double[] d = new double[a.length];
-        for (int i = 0; i < d.length; i++) {
-            d[i] = Math.abs(a[i]) + Math.abs(b[i]);
-        }
-        return d;
+        return java.util.stream.IntStream.range(0, a.length).mapToDouble(i -> Math.abs(a[i]) + Math.abs(b[i])).toArray();
     }
 
     /** G = F J + H ({@link RadiationOperator#multiply}); arrays not modified, result new. */
