@@ -27,7 +27,6 @@ final class SolveProgress implements SolveMonitor, AutoCloseable {
     private final boolean show;
     private final PrintWriter err;
     private final long start = System.nanoTime();
-    private final SolveMonitor previous;
     private final Thread hook;
     private volatile boolean cancelled;
     private boolean printed;
@@ -46,7 +45,7 @@ final class SolveProgress implements SolveMonitor, AutoCloseable {
         if (this.hook != null) {
             Runtime.getRuntime().addShutdownHook(this.hook);
         }
-        this.previous = SolveMonitor.install(this);
+        SolveMonitor.install(this);
         latest = this;
     }
 
@@ -104,14 +103,14 @@ final class SolveProgress implements SolveMonitor, AutoCloseable {
         }
     }
 
-    /** Ends the progress line, restores the previous monitor and removes the Ctrl-C hook. */
+    /** Ends the progress line, uninstalls this monitor and removes the Ctrl-C hook. */
     @Override
     public synchronized void close() {
         if (printed) {
             err.print("\r" + " ".repeat(width) + "\r");
             err.flush();
         }
-        SolveMonitor.install(previous);
+        SolveMonitor.remove(this);
         if (hook != null) {
             try {
                 Runtime.getRuntime().removeShutdownHook(hook);

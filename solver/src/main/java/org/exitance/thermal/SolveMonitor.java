@@ -38,9 +38,20 @@ public interface SolveMonitor {
      * @return the monitor it replaces
      */
     static SolveMonitor install(SolveMonitor m) {
-        SolveMonitor old = Holder.current;
-        Holder.current = m == null ? NONE : m;
-        return old;
+        synchronized (Holder.class) {
+            SolveMonitor old = Holder.current;
+            Holder.current = m == null ? NONE : m;
+            return old;
+        }
+    }
+
+    /** Puts back {@link #NONE} if {@code m} is still the process's monitor (else leaves the other one). */
+    static void remove(SolveMonitor m) {
+        synchronized (Holder.class) {
+            if (Holder.current == m) {
+                Holder.current = NONE;
+            }
+        }
     }
 
     /** The process's monitor. */
