@@ -55,8 +55,9 @@ public final class BandLoop {
         for (int k = 0; k < nets.length; k++) {
             ExternalIrradiation h = ExternalIrradiation.of(r, bands.get(k), absorption, emissivity[k], tau[k], t);
             external[k] = h;
-            nets[k] = new BandNetwork(r.viewFactors, r.n, r.area, emissivity[k], new WindowCoupling(tau[k], r.otherFace),
-                    h.irradiance(), h.leaving(), h.retained(), h.retainedMagnitude(), solver);
+            nets[k] = new BandNetwork(r.operator, r.viewFactors, r.area, emissivity[k],
+                    new WindowCoupling(tau[k], r.otherFace), h.irradiance(), h.leaving(), h.retained(),
+                    h.retainedMagnitude(), solver);
         }
         return new BandLoop(List.copyOf(bands), emissivity, nets, external);
     }
@@ -84,10 +85,28 @@ public final class BandLoop {
      *
      * @param delta  δE per band and surface (W/m²), not modified
      * @param rows   the surfaces wanted, not modified
+     * @param relax  factor on the conjugate-gradient tolerance of the responses (ignored by LU)
      * @return δq per band, in the order of rows (W/m²)
      */
-    public double[][] fluxResponses(double[][] delta, int[] rows) {
-        return NetworkGroup.fluxResponses(networks, delta, rows);
+    public double[][] fluxResponses(double[][] delta, int[] rows, double relax) {
+        return NetworkGroup.fluxResponses(networks, delta, rows, relax);
+    }
+
+    /**
+     * Starts this loop's iterative band solves from the last radiosities of another loop over the
+     * same enclosure and bands (the previous property update): they differ only by the property
+     * change. Nothing happens when the band counts differ or a band was not solved iteratively.
+     *
+     * @param previous  the earlier loop (not modified; its arrays are shared read only)
+     * @return this loop
+     */
+    public BandLoop warmStartFrom(BandLoop previous) {
+        if (previous != null && previous.networks.length == networks.length) {
+            for (int k = 0; k < networks.length; k++) {
+                NetworkGroup.warmStart(networks[k], previous.networks[k]);
+            }
+        }
+        return this;
     }
 
     /** Per band, the most linear-solver iterations of any solve so far (a new array). */

@@ -4,6 +4,7 @@ import java.util.List;
 import org.exitance.model.Enclosure;
 import org.exitance.model.EnclosureSurface;
 import org.exitance.model.ExternalSource;
+import org.exitance.network.RadiationOperator;
 
 /**
  * The arrays of an enclosure that the band loop reads, derived once per solve. Units: areas in
@@ -20,6 +21,11 @@ public final class RadiativeArrays {
     public final int n;
     /** F, N×N row-major; shared with {@link Enclosure#matrix()}, read only. */
     public final double[] viewFactors;
+    /**
+     * F as the operator the iterative band solves use ({@link RadiationOperator}): the dense
+     * {@link #viewFactors} wrapped, not copied. One per solve, so its pass count is the solve's.
+     */
+    public final RadiationOperator operator;
     /** A_i (m²). */
     public final double[] area;
     /** F_i,env = max(0, 1 − Σ_j F_ij) with an environment, else 0. */
@@ -39,6 +45,7 @@ public final class RadiativeArrays {
         this.enclosure = enclosure;
         this.n = enclosure.size();
         this.viewFactors = enclosure.matrix().sharedRowMajor();
+        this.operator = RadiationOperator.dense(viewFactors, n);
         this.area = new double[n];
         this.environmentFactor = new double[n];
         for (int i = 0; i < n; i++) {

@@ -15,9 +15,11 @@ public final class ExitCodes {
     public static final int NO_CONVERGENCE = 3;
     /** {@code verify}: at least one validation check failed. */
     public static final int CHECK_FAILED = 4;
+    /** Interrupted by Ctrl-C (SIGINT) during a solve: 128 + 2, as shells report it. */
+    public static final int INTERRUPTED = 130;
 
     static final String HELP = "Exit codes: 0 success; 2 bad input (message names file and JSON path);"
-            + " 3 no convergence, or view-factor tolerance not met; 4 a validation check failed (verify); 1 internal error.";
+            + " 3 no convergence, or view-factor tolerance not met; 4 a validation check failed (verify); 130 interrupted (Ctrl-C); 1 internal error.";
 
     private ExitCodes() {
     }

@@ -19,6 +19,7 @@ import picocli.CommandLine.Command;
         description = {"Thermal radiation exchange in enclosures whose surfaces are not gray:",
                 "band-wise radiosity network, net heat flows and unknown temperatures."},
         subcommands = {SolveCommand.class, TransientCommand.class, CheckCommand.class, ViewFactorsCommand.class, AuditCommand.class, SensitivityCommand.class, VerifyCommand.class, MaterialCommand.class,
+                BenchCommand.class,
                 CommandLine.HelpCommand.class},
         footer = {"", ExitCodes.HELP, "Documentation: README.md and docs/ in the source tree."})
 public final class ExitanceCommand implements Runnable {
@@ -64,6 +65,7 @@ public final class ExitanceCommand implements Runnable {
         }
         out.flush();
         err.flush();
+        SolveProgress.reported();
         return code;
     }
 

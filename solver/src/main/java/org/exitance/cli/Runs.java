@@ -12,6 +12,7 @@ import org.exitance.result.LoadCaseResult;
 import org.exitance.result.SolveResult;
 import org.exitance.thermal.CaseSolver;
 import org.exitance.thermal.IllPosedCaseException;
+import org.exitance.thermal.SolveCancelledException;
 import org.exitance.thermal.SolveFailedException;
 import org.exitance.thermal.TemperatureSolver;
 import org.exitance.validation.ExpectedReader;
@@ -105,6 +106,9 @@ final class Runs {
         } catch (NetworkConvergenceException e) {
             throw new UserError(c.file() + ": no convergence in a band's radiosity solve: " + e.getMessage()
                     + "; no result reported", ExitCodes.NO_CONVERGENCE);
+        } catch (SolveCancelledException e) {
+            throw new UserError(c.file() + ": interrupted (Ctrl-C): the solve stopped; no result written",
+                    ExitCodes.INTERRUPTED);
         }
     }
 }

@@ -76,7 +76,7 @@ final class SolveCommand implements Callable<Integer> {
                     + " Default: chosen by size and bands (docs/theory.md).")
     private String solver;
 
-    @Option(names = {"-q", "--quiet"}, description = "Do not print warnings on standard error.")
+    @Option(names = {"-q", "--quiet"}, description = "Do not print warnings or progress on standard error.")
     private boolean quiet;
 
     @Mixin
@@ -97,10 +97,13 @@ final class SolveCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new UserError("--solver: " + e.getMessage(), ExitCodes.BAD_INPUT);
         }
-        List<LoadCaseResult> results = Runs.solveAll(c, override, loadCase,
-                bandTolerance.fraction(), choice, exports.rule());
+        List<LoadCaseResult> results;
+        List<AuditResult> audits;
+        try (SolveProgress progress = SolveProgress.onStderr(!quiet, spec.commandLine().getErr())) {
+            results = Runs.solveAll(c, override, loadCase, bandTolerance.fraction(), choice, exports.rule());
+            audits = noAudit || gray.on() ? List.of() : audit(c, results);
+        }
         boolean variants = !c.model().loadCases().isEmpty();
-        List<AuditResult> audits = noAudit || gray.on() ? List.of() : audit(c, results);
         if (reportFile != null) {
             Reports.write(reportFile, force, org.exitance.report.html.HtmlReport.solve(Reports.caseOf(caseFile, c),
                     results, audits));

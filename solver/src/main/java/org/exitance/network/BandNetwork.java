@@ -28,7 +28,10 @@ package org.exitance.network;
  */
 public final class BandNetwork {
     final int n;
+    /** F as a dense array, or null when the network works from {@link #op} alone. */
     final double[] f;
+    /** F as an operator: every F product of this class and of the fused band solves. */
+    final RadiationOperator op;
     final double[] eps;
     private final double[] rho;
     final double[] tau;
@@ -39,6 +42,9 @@ public final class BandNetwork {
     private final double[] retainedMagnitude;
     final double[] area;
     final RadiositySolver.Prepared prepared;
+    /** The last fused solve's J and F·J (NetworkGroup): the next CG solve's warm start; null before. */
+    double[] lastRadiosity;
+    double[] lastIrradiationProduct;
 
     /**
      * @param viewFactors          F, N×N row-major (not modified, not copied)
@@ -81,7 +87,22 @@ public final class BandNetwork {
     public BandNetwork(double[] viewFactors, int n, double[] areasM2, double[] emissivity, WindowCoupling windows,
                        double[] externalIrradiation, double[] externalReflected, double[] externalRetained,
                        double[] externalMagnitude, RadiositySolver solver) {
-        this.n = n;
+        this(RadiationOperator.dense(viewFactors, n), viewFactors, areasM2, emissivity, windows, externalIrradiation,
+                externalReflected, externalRetained, externalMagnitude, solver);
+    }
+
+    /**
+     * A band over a {@link RadiationOperator}; the other arguments as above.
+     *
+     * @param operator     F as an operator (shared, not modified)
+     * @param viewFactors  F, N×N row-major (shared, not modified), or null when the strategy works from
+     *                     the operator alone (conjugate gradients)
+     */
+    public BandNetwork(RadiationOperator operator, double[] viewFactors, double[] areasM2, double[] emissivity,
+                       WindowCoupling windows, double[] externalIrradiation, double[] externalReflected,
+                       double[] externalRetained, double[] externalMagnitude, RadiositySolver solver) {
+        this.op = operator;
+        this.n = operator.size();
         this.f = viewFactors;
         this.eps = emissivity.clone();
         this.rho = new double[n];
@@ -97,7 +118,7 @@ public final class BandNetwork {
             rho[i] = Math.max(0.0, 1.0 - eps[i] - tau[i]);
         }
         this.area = areasM2.clone();
-        this.prepared = solver.prepare(f, n, rho, area, windows);
+        this.prepared = solver.prepare(op, f, rho, area, windows);
     }
 
     /**
@@ -153,9 +174,9 @@ public final class BandNetwork {
         return prepared;
     }
 
-    /** The view factors (shared). */
-    double[] viewFactors() {
-        return f;
+    /** The view-factor operator (shared). */
+    RadiationOperator operator() {
+        return op;
     }
 
     /** ε_i δE_i (a new array; not modified). */
@@ -237,10 +258,14 @@ public final class BandNetwork {
         double[] b = responseSource(deltaEmissive);
         double[] x = new double[n];
         prepared.solve(b, x);
+        int[] slot = new int[n];
+        int[] need = NodeSensitivities.withOtherFaces(rows, other, slot); // the rows and their windows' other faces
+        double[] fx = new double[need.length];
+        op.multiplyRows(need, x, 1, fx);
         double[] out = new double[rows.length];
         for (int r = 0; r < rows.length; r++) {
             int i = rows[r];
-            out[r] = response(i, b, rowTimes(i, x), other[i] >= 0 ? rowTimes(other[i], x) : 0.0);
+            out[r] = response(i, b, fx[slot[i]], other[i] >= 0 ? fx[slot[other[i]]] : 0.0);
         }
         return out;
     }
@@ -248,16 +273,6 @@ public final class BandNetwork {
     /** Iterations of the last linear solve of this band. */
     public int lastIterations() {
         return prepared.lastIterations();
-    }
-
-    /** (F x)_i; x not modified. */
-    private double rowTimes(int i, double[] x) {
-        double s = 0;
-        int row = i * n;
-        for (int k = 0; k < n; k++) {
-            s += f[row + k] * x[k];
-        }
-        return s;
     }
 
     /**
@@ -307,25 +322,20 @@ public final class BandNetwork {
     }
 
     private static double[] difference(double[] a, double[] b) {
-        double[] d = new double[a.length];
-        for (int i = 0; i < d.length; i++) {
-            d[i] = a[i] - b[i];
-        }
-        return d;
+        return java.util.stream.IntStream.range(0, a.length).mapToDouble(i -> a[i] - b[i]).toArray();
     }
 
     private static double[] sum(double[] a, double[] b) {
-        double[] d = new double[a.length];
-        for (int i = 0; i < d.length; i++) {
-            d[i] = Math.abs(a[i]) + Math.abs(b[i]);
-        }
-        return d;
+        return java.util.stream.IntStream.range(0, a.length).mapToDouble(i -> Math.abs(a[i]) + Math.abs(b[i])).toArray();
     }
 
-    /** G = F J + H, rows in parallel; arrays not modified, result new. */
+    /** G = F J + H ({@link RadiationOperator#multiply}); arrays not modified, result new. */
     private double[] irradiationFrom(double[] j, double[] external) {
         double[] g = new double[n];
-        java.util.stream.IntStream.range(0, n).parallel().forEach(i -> g[i] = external[i] + rowTimes(i, j));
+        op.multiply(j, 1, g);
+        for (int i = 0; i < n; i++) {
+            g[i] += external[i];
+        }
         return g;
     }
 

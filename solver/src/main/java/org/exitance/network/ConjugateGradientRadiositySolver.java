@@ -63,24 +63,16 @@ public final class ConjugateGradientRadiositySolver implements RadiositySolver {
     /** Opaque enclosures only: a window's coupling breaks the symmetry this method needs. */
     @Override
     public Prepared prepare(double[] f, int n, double[] rho, double[] area, WindowCoupling windows) {
+        return prepare(RadiationOperator.dense(f, n), f, rho, area, windows);
+    }
+
+    /** Works from the operator's products alone; the dense array is not used (may be null). */
+    @Override
+    public Prepared prepare(RadiationOperator op, double[] f, double[] rho, double[] area, WindowCoupling windows) {
         if (!windows.isEmpty()) {
             throw new IllegalArgumentException("conjugate gradients need a symmetric radiosity matrix; an enclosure"
                     + " with windows needs the direct solver (RadiositySolver.forSize)");
         }
-        return new SymmetricBand(f, n, rho.clone(), area.clone(), relativeTolerance, maxIterations);
-    }
-
-    /**
-     * Solves several bands of the same enclosure together: each band runs its own conjugate
-     * gradients, but every iteration multiplies F with all active bands' search directions in one
-     * pass over F ({@link FusedProduct}). Each band's numbers are the same as when it is solved
-     * alone.
-     *
-     * @param bands  prepared bands sharing one view-factor array
-     * @param b      right-hand side per band, not modified
-     * @param j      receives J per band; modified
-     */
-    static void solveTogether(SymmetricBand[] bands, double[][] b, double[][] j) {
-        SymmetricBand.solveTogether(bands, b, j, 1.0);
+        return new SymmetricBand(op, rho.clone(), area.clone(), relativeTolerance, maxIterations);
     }
 }

@@ -5,8 +5,8 @@ import java.util.stream.IntStream;
 /**
  * The networks of all bands of one property update, which share one view-factor array: solves
  * and flux responses of every band at once. When every band uses conjugate gradients the bands
- * iterate together and each pass over F serves all of them ({@link FusedProduct}: the memory
- * traffic of one product for B bands); otherwise the bands are solved side by side in parallel.
+ * iterate together and each pass over F serves all of them ({@link RadiationOperator#multiply}: for the
+ * dense matrix, the memory traffic of one product for B bands); otherwise the bands are solved side by side in parallel.
  * Either way each band's numbers are those of its own solve, whatever the thread count.
  */
 public final class NetworkGroup {
@@ -34,14 +34,25 @@ public final class NetworkGroup {
         for (int k = 0; k < nb; k++) {
             b[k] = nets[k].source(emissive[k]);
         }
-        SymmetricBand.solveTogether(cg, b, j, 1.0);
-        double[] fj = product(nets[0].viewFactors(), n, j);
+        double[][] start = new double[nb][];
+        double[][] startFj = new double[nb][];
+        boolean warm = true;
+        for (int k = 0; k < nb; k++) {
+            start[k] = nets[k].lastRadiosity;
+            startFj[k] = nets[k].lastIrradiationProduct;
+            warm &= start[k] != null;
+        }
+        FusedConjugateGradients.solve(cg, b, j, 1.0, false, warm ? start : null, warm ? startFj : null, null);
+        // the residual check and the net fluxes use a fresh product F·J (not the recurrence)
+        double[] fj = product(nets[0].operator(), n, j);
         for (int k = 0; k < nb; k++) {
             double[] col = new double[n];
             for (int i = 0; i < n; i++) {
                 col[i] = fj[i * nb + k];
             }
             states[k] = nets[k].finish(emissive[k], b[k], j[k], col);
+            nets[k].lastRadiosity = j[k];
+            nets[k].lastIrradiationProduct = col;
         }
         return states;
     }
@@ -49,14 +60,15 @@ public final class NetworkGroup {
     /**
      * The net-flux change of the given surfaces in every band for emissive-power changes δE at
      * fixed properties ({@link BandNetwork#fluxResponse}, all bands at once). With conjugate
-     * gradients the responses are solved to a tolerance relaxed by
-     * {@link SymmetricBand#RESPONSE_RELAXATION} (1e-7 per surface): they steer Newton steps only.
+     * gradients the responses are solved to the bands' tolerance times {@code relax} (they steer
+     * Newton steps only), from a zero start, and F·x comes from the iterations' own products.
      *
      * @param delta  δE per band and surface (W/m²), not modified
      * @param rows   the surfaces wanted, not modified
+     * @param relax  factor on the conjugate-gradient tolerance (ignored by the direct strategy)
      * @return δq per band, in the order of rows (W/m²)
      */
-    public static double[][] fluxResponses(BandNetwork[] nets, double[][] delta, int[] rows) {
+    public static double[][] fluxResponses(BandNetwork[] nets, double[][] delta, int[] rows, double relax) {
         int nb = nets.length;
         double[][] out = new double[nb][];
         SymmetricBand[] cg = fused(nets);
@@ -70,25 +82,33 @@ public final class NetworkGroup {
         for (int k = 0; k < nb; k++) {
             b[k] = nets[k].responseSource(delta[k]);
         }
-        SymmetricBand.solveTogether(cg, b, x, SymmetricBand.RESPONSE_RELAXATION);
-        // F x on the rows asked for and (for windows) their other faces
-        double[] v = interleave(x, n);
-        double[] w = new double[rows.length * nb];
-        FusedProduct.multiplyRows(nets[0].viewFactors(), n, rows, v, nb, w);
+        double[][] fx = new double[nb][n];
+        FusedConjugateGradients.solve(cg, b, x, relax, true, null, null, fx);
         for (int k = 0; k < nb; k++) {
             out[k] = new double[rows.length];
             for (int r = 0; r < rows.length; r++) {
-                out[k][r] = nets[k].response(rows[r], b[k], w[r * nb + k], 0.0); // CG: no windows
+                out[k][r] = nets[k].response(rows[r], b[k], fx[k][rows[r]], 0.0); // CG: no windows
             }
         }
         return out;
+    }
+
+    /**
+     * Gives {@code to} the last radiosities (and their product F·J, which depends on J and F alone)
+     * of {@code from} as the warm start of its next fused solve, when both share one operator.
+     */
+    public static void warmStart(BandNetwork to, BandNetwork from) {
+        if (to.operator() == from.operator() && from.lastRadiosity != null) {
+            to.lastRadiosity = from.lastRadiosity;
+            to.lastIrradiationProduct = from.lastIrradiationProduct;
+        }
     }
 
     /** The bands' CG operators when all bands use conjugate gradients on one F, else null. */
     private static SymmetricBand[] fused(BandNetwork[] nets) {
         SymmetricBand[] cg = new SymmetricBand[nets.length];
         for (int k = 0; k < nets.length; k++) {
-            if (!(nets[k].prepared() instanceof SymmetricBand s) || s.f != nets[0].viewFactors()) {
+            if (!(nets[k].prepared() instanceof SymmetricBand s) || s.op != nets[0].operator()) {
                 return null;
             }
             cg[k] = s;
@@ -97,9 +117,9 @@ public final class NetworkGroup {
     }
 
     /** F · [j_0 … j_B−1] as N×B row-major. */
-    private static double[] product(double[] f, int n, double[][] j) {
+    private static double[] product(RadiationOperator op, int n, double[][] j) {
         double[] w = new double[n * j.length];
-        FusedProduct.multiply(f, n, interleave(j, n), j.length, w);
+        op.multiply(interleave(j, n), j.length, w);
         return w;
     }
 

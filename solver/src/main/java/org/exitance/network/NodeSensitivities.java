@@ -35,20 +35,9 @@ final class NodeSensitivities {
         net.prepared.solveBlock(x, m, x);
         // the rows of F X needed: every face, and a window face's other face
         int[] slot = new int[n];
-        java.util.Arrays.fill(slot, -1);
-        int[] rows = new int[2 * n];
-        int count = 0;
-        for (int[] faces : nodeFaces) {
-            for (int i : faces) {
-                for (int r : new int[] {i, other[i]}) {
-                    if (r >= 0 && slot[r] < 0) {
-                        slot[r] = count;
-                        rows[count++] = r;
-                    }
-                }
-            }
-        }
-        double[] fx = rowsTimesBlock(net.f, n, java.util.Arrays.copyOf(rows, count), x, m);
+        int[] rows = withOtherFaces(java.util.Arrays.stream(nodeFaces).flatMapToInt(java.util.Arrays::stream).toArray(),
+                other, slot);
+        double[] fx = rowsTimesBlock(net.f, n, rows, x, m);
         double[] out = new double[m * m];
         IntStream.range(0, m).parallel().forEach(a -> {
             int row = a * m;
@@ -69,6 +58,29 @@ final class NodeSensitivities {
             }
         });
         return out;
+    }
+
+    /**
+     * The surfaces {@code faces} and their windows' other faces, each once, in order of first
+     * appearance (a new array).
+     *
+     * @param faces  surfaces, not modified
+     * @param other  per surface its other face or −1, not modified
+     * @param slot   length N; receives each listed surface's position in the result, −1 elsewhere (modified)
+     */
+    static int[] withOtherFaces(int[] faces, int[] other, int[] slot) {
+        java.util.Arrays.fill(slot, -1);
+        int[] rows = new int[2 * faces.length];
+        int count = 0;
+        for (int i : faces) {
+            for (int r : new int[] {i, other[i]}) {
+                if (r >= 0 && slot[r] < 0) {
+                    slot[r] = count;
+                    rows[count++] = r;
+                }
+            }
+        }
+        return java.util.Arrays.copyOf(rows, count);
     }
 
     /**

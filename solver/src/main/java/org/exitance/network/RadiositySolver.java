@@ -50,6 +50,24 @@ public interface RadiositySolver {
      */
     Prepared prepare(double[] viewFactors, int n, double[] reflectivity, double[] areasM2, WindowCoupling windows);
 
+    /**
+     * Prepares the operator of one band from a {@link RadiationOperator}. Strategies that work from
+     * products alone (conjugate gradients) use the operator; the direct strategy factors the dense
+     * array.
+     *
+     * @param operator     F as an operator, not modified
+     * @param viewFactors  F, N×N row-major, not modified; may be null for a strategy that works from
+     *                     the operator alone
+     * @throws IllegalArgumentException if the strategy needs the dense array and it is null
+     */
+    default Prepared prepare(RadiationOperator operator, double[] viewFactors, double[] reflectivity,
+                             double[] areasM2, WindowCoupling windows) {
+        if (viewFactors == null) {
+            throw new IllegalArgumentException(name() + " needs the dense view-factor matrix");
+        }
+        return prepare(viewFactors, operator.size(), reflectivity, areasM2, windows);
+    }
+
     /** A band operator ready to solve. */
     interface Prepared {
         /**

@@ -136,6 +136,7 @@ public final class SolveJsonWriter {
                 perBand.add(k);
             }
             so.put("krylovProducts", s.krylovProducts());
+            so.put("operatorPasses", Math.round(s.operatorPasses() * 100) / 100.0);
             so.put("estimatedMemory_B", s.estimatedBytes());
         }
         ArrayNode w = root.putArray("warnings");

@@ -15,6 +15,9 @@ package org.exitance.result;
  * @param bandIterations         per band of the final band set, the most iterations of any of its
  *                               linear solves (1 for a direct solve); copied, never null
  * @param krylovProducts         Jacobian–vector products of Newton–Krylov in total (0 for direct)
+ * @param operatorPasses         passes over the view-factor operator by the iterative F products
+ *                               (a product of all N rows counts 1, whatever the number of bands; the
+ *                               LU paths' triangular solves are not counted)
  * @param estimatedBytes         the memory estimated before the solve (bytes; 0 when not recorded)
  * @param peakHeapBytes          the JVM's peak heap use measured during the solve (bytes; 0 when
  *                               not recorded): the whole JVM's, so other work in the same process counts
@@ -22,7 +25,7 @@ package org.exitance.result;
 public record SolverReport(String linearSolver, int newtonIterations, int propertyIterations,
                            double residualW, double lastTemperatureStepK, int maxLinearIterations,
                            double maxLinearResidual, String strategy, int[] bandIterations, int krylovProducts,
-                           long estimatedBytes, long peakHeapBytes) {
+                           double operatorPasses, long estimatedBytes, long peakHeapBytes) {
 
     public SolverReport {
         bandIterations = bandIterations == null ? new int[0] : bandIterations.clone();
@@ -33,7 +36,7 @@ public record SolverReport(String linearSolver, int newtonIterations, int proper
     public SolverReport(String linearSolver, int newtonIterations, int propertyIterations, double residualW,
                         double lastTemperatureStepK, int maxLinearIterations, double maxLinearResidual) {
         this(linearSolver, newtonIterations, propertyIterations, residualW, lastTemperatureStepK, maxLinearIterations,
-                maxLinearResidual, "", new int[0], 0, 0, 0);
+                maxLinearResidual, "", new int[0], 0, 0, 0, 0);
     }
 
     /** Per-band iteration counts (a copy). */
@@ -43,10 +46,10 @@ public record SolverReport(String linearSolver, int newtonIterations, int proper
     }
 
     /** This report with the strategy, per-band iterations, products and memory figures set. */
-    public SolverReport withRun(String strategy, int[] bandIterations, int krylovProducts, long estimatedBytes,
-                                long peakHeapBytes) {
+    public SolverReport withRun(String strategy, int[] bandIterations, int krylovProducts, double operatorPasses,
+                                long estimatedBytes, long peakHeapBytes) {
         return new SolverReport(linearSolver, newtonIterations, propertyIterations, residualW, lastTemperatureStepK,
-                maxLinearIterations, maxLinearResidual, strategy, bandIterations, krylovProducts, estimatedBytes,
-                peakHeapBytes);
+                maxLinearIterations, maxLinearResidual, strategy, bandIterations, krylovProducts, operatorPasses,
+                estimatedBytes, peakHeapBytes);
     }
 }

@@ -12,18 +12,34 @@ import org.exitance.bands.BandLoop;
  * <p>Scaling: rows are divided by the nodes' heat tolerances ({@link NodeBalance}), so residual
  * norms are in units of "tolerances"; columns are preconditioned by the diagonal
  * {@code d_a = Σ_k Σ_{i∈a} A_i ε_ik dE_ik/dT + Σ hA + Σ G} (the emission, 4εσAT³ for a gray surface,
- * plus convection and links). GMRES stops when the linear residual is below
- * {@link #RELATIVE} of the Newton residual or below {@link #ABSOLUTE} tolerances, whichever is larger.
- * Bands are solved in band order and summed in band order, so the product does not depend on
- * the thread count.
+ * plus convection and links). Bands are solved in band order and summed in band order, so the
+ * product does not depend on the thread count.
+ *
+ * <p><b>Inexact Newton.</b> GMRES stops when the linear residual is below η times the Newton
+ * residual or below {@link #ABSOLUTE} tolerances, whichever is larger, with the forcing term η of
+ * Eisenstat and Walker (SIAM J. Sci. Comput. 17, 1996, choice 2: {@code η_k = γ (‖R_k‖/‖R_k−1‖)²},
+ * γ = 0.9, safeguarded by {@code γ η_k−1²} when that exceeds 0.1), kept between {@link #RELATIVE}
+ * and {@link #ETA_MAX}: loose far from the solution, where a precise step is wasted, and tight as
+ * Newton converges, which keeps its fast local convergence (Kelley 2003, §3.2.3). The band
+ * solves behind each product (conjugate gradients) are solved to a tolerance of {@code η/100}
+ * per surface, within [1e-7, 1e-4] ({@link #innerTolerance}): a product need only be as
+ * accurate as the step it serves. A restart cycle that converges ends on GMRES's own residual
+ * estimate; only a restart forms the true residual (one more product).
  */
 final class KrylovStep {
     /** Krylov vectors kept before a restart. */
     static final int RESTART = 60;
     /** Products allowed per Newton step. */
     static final int MAX_PRODUCTS = 20 * RESTART;
+    /** The tightest forcing term. */
     static final double RELATIVE = 1e-6;
+    /** The loosest forcing term (the first step of each Newton solve). */
+    static final double ETA_MAX = 0.1;
     static final double ABSOLUTE = 1e-2;
+    private static final double GAMMA = 0.9;
+
+    private double lastNorm = Double.NaN;
+    private double lastEta;
 
     private final Problem p;
     private final BandLoop loop;
@@ -73,10 +89,12 @@ final class KrylovStep {
         for (int a = 0; a < m; a++) {
             rhs[a] = -bal.residualW()[a] / tol[a];
         }
-        double target = Math.max(RELATIVE * norm(rhs), ABSOLUTE);
+        double beta = norm(rhs);
+        double eta = forcing(beta);
+        double relax = innerTolerance(eta) / SolverChoice.CG_TOLERANCE;
+        double target = Math.max(eta * beta, ABSOLUTE);
         double[] y = new double[m]; // preconditioned unknowns: δT = y / d
         double[] r = rhs.clone();
-        double beta = norm(r);
         while (beta > target && products < MAX_PRODUCTS) {
             int k = Math.min(RESTART, MAX_PRODUCTS - products);
             double[][] v = new double[k + 1][];
@@ -88,7 +106,7 @@ final class KrylovStep {
             v[0] = scaled(r, 1 / beta);
             int j = 0;
             for (; j < k && Math.abs(g[j]) > target; j++) {
-                double[] w = apply(v[j], diag, tol, dE);
+                double[] w = apply(v[j], diag, tol, dE, relax);
                 for (int i = 0; i <= j; i++) { // modified Gram–Schmidt
                     h[i][j] = dot(w, v[i]);
                     axpy(-h[i][j], v[i], w);
@@ -122,14 +140,14 @@ final class KrylovStep {
             for (int i = 0; i < j; i++) {
                 axpy(c[i], v[i], y);
             }
-            double[] ay = apply(y, diag, tol, dE);
+            if (j == 0 || j < k) {
+                break; // converged within the cycle (GMRES's estimate |g_j| ≤ target), or no progress
+            }
+            double[] ay = apply(y, diag, tol, dE, relax);
             for (int a = 0; a < m; a++) {
                 r[a] = rhs[a] - ay[a];
             }
             beta = norm(r);
-            if (j == 0) {
-                break;
-            }
         }
         double[] dx = new double[m];
         for (int a = 0; a < m; a++) {
@@ -141,23 +159,50 @@ final class KrylovStep {
         return dx;
     }
 
+    /** The forcing term of the class doc for a Newton residual of norm {@code norm} (tolerance units). */
+    private double forcing(double norm) {
+        double eta = ETA_MAX;
+        if (!Double.isNaN(lastNorm) && lastNorm > 0) {
+            double ratio = norm / lastNorm;
+            eta = GAMMA * ratio * ratio;
+            double safeguard = GAMMA * lastEta * lastEta;
+            if (safeguard > 0.1) {
+                eta = Math.max(eta, safeguard);
+            }
+        }
+        eta = Math.min(ETA_MAX, Math.max(RELATIVE, eta));
+        lastNorm = norm;
+        lastEta = eta;
+        return eta;
+    }
+
+    /** Per-surface tolerance of the band solves behind the products of a step with forcing term η. */
+    static double innerTolerance(double eta) {
+        return Math.min(1e-4, Math.max(1e-7, 1e-2 * eta));
+    }
+
     /** W J P y: rows scaled by 1/tol, columns by 1/d (a new array; y not modified). */
-    private double[] apply(double[] y, double[] diag, double[] tol, double[][] dE) {
+    private double[] apply(double[] y, double[] diag, double[] tol, double[][] dE, double relax) {
+        SolveMonitor.checkCancelled();
         products++;
         int m = y.length;
         double[] v = new double[m];
         for (int a = 0; a < m; a++) {
             v[a] = y[a] / diag[a];
         }
-        double[] jv = product(v, dE);
+        double[] jv = product(v, dE, relax);
         for (int a = 0; a < m; a++) {
             jv[a] /= tol[a];
         }
         return jv;
     }
 
-    /** J v (W) for node temperature changes v (K); all bands at once, summed in band order. */
-    double[] product(double[] v, double[][] dE) {
+    /**
+     * J v (W) for node temperature changes v (K); all bands at once, summed in band order.
+     *
+     * @param relax  factor on the conjugate-gradient tolerance of the band solves
+     */
+    double[] product(double[] v, double[][] dE, double relax) {
         int n = p.area.length;
         int nb = loop.bands().size();
         double[][] de = new double[nb][n];
@@ -168,7 +213,7 @@ final class KrylovStep {
                 }
             }
         }
-        double[][] dq = loop.fluxResponses(de, rows);
+        double[][] dq = loop.fluxResponses(de, rows, relax);
         double[] out = new double[v.length];
         for (int k = 0; k < nb; k++) {
             for (int r = 0; r < rows.length; r++) {

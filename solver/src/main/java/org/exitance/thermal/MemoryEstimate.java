@@ -12,8 +12,9 @@ package org.exitance.thermal;
  *   <li>direct: the blocked right-hand sides of one band, 8N·m, and the node sensitivities of
  *       every band, 8m² each, plus the m×m Jacobian and its LU, 16m²;</li>
  *   <li>newton-krylov and iterative: the GMRES basis, 8m·(restart + 2);</li>
- *   <li>vectors per band and surface (states, emissive powers, properties): about 40 doubles
- *       each, 320·N·B, and a fixed 64 MB for the JVM's own needs.</li>
+ *   <li>vectors per band and surface (states, emissive powers, properties, the conjugate-gradient
+ *       vectors of the fused solves and the warm starts kept from the last solve and property
+ *       update): about 48 doubles each, 384·N·B, and a fixed 64 MB for the JVM's own needs.</li>
  * </ul>
  *
  * <p>The figure is the live data: a heap of that size suffices (the benchmark runs the box at
@@ -37,7 +38,7 @@ public final class MemoryEstimate {
     public static long bytes(int n, int unknown, int bands, SolverChoice choice) {
         long nn = (long) n * n;
         long mm = (long) unknown * unknown;
-        long total = 8 * nn + FIXED + 320L * n * bands;
+        long total = 8 * nn + FIXED + 384L * n * bands;
         switch (choice) {
             case DIRECT -> total += 8 * nn * bands + 8L * n * unknown + 8 * mm * bands + 16 * mm;
             case NEWTON_KRYLOV -> total += 8 * nn * bands + 8L * unknown * (KrylovStep.RESTART + 2);

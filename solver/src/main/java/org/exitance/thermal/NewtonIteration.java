@@ -92,6 +92,8 @@ final class NewtonIteration {
             t = trial;
             bal = next;
             counters.residualW = bal.largestW();
+            SolveMonitor.current().newtonStep(loop.bands().size(), counters.newtonIterations, counters.residualW);
+            SolveMonitor.checkCancelled();
             checkFloor(t, bal.residualW(), counters.newtonIterations);
             if (bal.scaledNorm() <= 1 && stepK <= settings.temperatureToleranceK()) {
                 return t;

@@ -33,10 +33,13 @@ final class PropertyLoop {
         this.choice = choice;
     }
 
+    /** The last band loop of {@link #converge}, whose radiosities warm-start the next loop's solves. */
+    private BandLoop last;
+
     /** The band loop (properties and networks) at temperatures t (K, not modified). */
     BandLoop at(List<Band> bands, double[] t) {
         return BandLoop.prepare(p.radiative, bands, BandProperties.emissivities(p.enc.surfaces(), bands, t), t,
-                absorption, linear);
+                absorption, linear).warmStartFrom(last);
     }
 
     /**
@@ -57,7 +60,8 @@ final class PropertyLoop {
             counters.propertyIterations++;
             double[][] eps = BandProperties.emissivities(p.enc.surfaces(), bands, t);
             Posedness.requireEmission(p, eps);
-            BandLoop loop = BandLoop.prepare(p.radiative, bands, eps, t, absorption, linear);
+            BandLoop loop = BandLoop.prepare(p.radiative, bands, eps, t, absorption, linear).warmStartFrom(last);
+            last = loop;
             double[] before = t.clone();
             t = newton.solve(loop, t);
             counters.addLinear(loop);

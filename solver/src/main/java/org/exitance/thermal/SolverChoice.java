@@ -22,15 +22,14 @@ import org.exitance.network.RadiositySolver;
  * </ul>
  *
  * <p><b>The default rule</b> ({@link #forCase}), from the benchmark in docs/performance.md (closed
- * box, a third of the facets unknown; CPU seconds for 1 / 8 bands at 1,944 facets: direct 5.8 / 78,
- * newton-krylov 2.8 / 37, iterative 3.7 / 17): direct up to {@link #DIRECT_LIMIT} facets, where
- * the three cost about the same and the exact Jacobian is the most robust; above it iterative
- * when the case has {@link #FUSED_BANDS} or more bands (the bands' conjugate gradients share each
- * pass over F) or more than {@link #FACTOR_LIMIT} facets (B factorizations of 2N³/3 flops
- * outgrow the CG passes), else newton-krylov. An enclosure with a window never gets iterative
- * (conjugate gradients cannot solve its coupling): direct up to the limit, newton-krylov above.
- * When the chosen path's memory estimate ({@link MemoryEstimate}) exceeds the heap, iterative is
- * chosen if the case allows it.
+ * box, a third of the facets unknown): direct up to {@link #DIRECT_LIMIT} facets, where the three
+ * cost about the same and the exact Jacobian is the most robust; above it iterative, whatever the
+ * number of bands: since its passes over F were cut (warm starts, forcing terms, products from the
+ * iterations' own recurrences) it is the cheapest path from one band on (1,944 facets, 1 band: 1.6
+ * CPU s against 4.2 for newton-krylov; 4,056 facets: 4.2 against 24.7; 8 bands: 7.2 against
+ * about 37 at 1,944). An enclosure with a window never gets iterative (conjugate gradients cannot
+ * solve its coupling): direct up to the limit, newton-krylov above. When the chosen path's memory
+ * estimate ({@link MemoryEstimate}) exceeds the heap, iterative is chosen if the case allows it.
  */
 public enum SolverChoice {
     DIRECT("direct"),
@@ -39,11 +38,6 @@ public enum SolverChoice {
 
     /** Above this many surfaces (facets) the default rule leaves the direct path. */
     public static final int DIRECT_LIMIT = 500;
-    /** From this many bands the default rule prefers iterative above {@link #DIRECT_LIMIT}. */
-    public static final int FUSED_BANDS = 4;
-    /** Above this many surfaces the default rule prefers iterative whatever the bands. */
-    public static final int FACTOR_LIMIT = 3000;
-
     /** Relative (per-surface, in watts) tolerance of the conjugate-gradient band solves. */
     static final double CG_TOLERANCE = 1e-13;
 
@@ -96,7 +90,7 @@ public enum SolverChoice {
         SolverChoice c;
         if (n <= DIRECT_LIMIT) {
             c = DIRECT;
-        } else if (windows || bands < FUSED_BANDS && n <= FACTOR_LIMIT) {
+        } else if (windows) {
             c = NEWTON_KRYLOV;
         } else {
             c = ITERATIVE;

@@ -170,7 +170,8 @@ public final class TemperatureSolver {
         SolveResult assembled = new ResultAssembler(radiationCase, band.name())
                 .assemble(p, bandSet, loop, states, t, counters);
         SolveResult.Builder rb = assembled.toBuilder().solver(assembled.solver().withRun(how.label(),
-                counters.bandIterations, counters.krylovProducts, estimate, PeakHeap.bytes()));
+                counters.bandIterations, counters.krylovProducts, p.radiative.operator.passes(), estimate,
+                PeakHeap.bytes()));
         if (pairs.applies(enc.size())) {
             rb.pairExchange(PairExchangeAssembler.of(p, loop, t));
         }

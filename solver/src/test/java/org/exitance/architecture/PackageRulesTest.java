@@ -48,6 +48,7 @@ class PackageRulesTest {
         ALLOWED.put("sensitivity", List.of("spectral", "model", "network", "bands", "result", "thermal"));
         ALLOWED.put("audit", List.of("spectral", "spectral.source", "model", "bands", "result", "thermal"));
         ALLOWED.put("properties", List.of("spectral", "spectral.source", "model"));
+        ALLOWED.put("bench", List.of("spectral", "model", "bands", "result", "thermal"));
         ALLOWED.put("cases", List.of("spectral", "spectral.source", "model", "conduction", "timeline", "geometry.."));
         ALLOWED.put("pipeline", List.of("spectral", "spectral.source", "model", "bands", "thermal", "result", "cases",
                 "geometry.."));

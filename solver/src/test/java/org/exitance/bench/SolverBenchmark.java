@@ -8,14 +8,8 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.ForkJoinPool;
-import org.exitance.bands.ExternalAbsorption;
-import org.exitance.model.RadiationCase;
 import org.exitance.network.DenseTiming;
-import org.exitance.result.SolveResult;
-import org.exitance.result.SolverReport;
-import org.exitance.thermal.MemoryEstimate;
 import org.exitance.thermal.SolverChoice;
-import org.exitance.thermal.TemperatureSolver;
 
 /**
  * Benchmark of the temperature solve on closed-box models ({@link BoxModels}, invented data), run
@@ -25,7 +19,8 @@ import org.exitance.thermal.TemperatureSolver;
  *   scaling CHOICE BANDS SIZES [runs] [threads]   time, peak heap and growth exponent of a solve
  *   dense N FILE [threads]                        export one band system (A, b) and time the dense path on it
  * </pre>
- * CHOICE: direct, newton-krylov, iterative or auto (the default rule). SIZES: comma-separated
+ * CHOICE: direct, newton-krylov, iterative or auto (the default rule). The scaling scenario is
+ * {@code exitance bench} ({@link BenchRun}) with a thread count and without the warm-up. SIZES: comma-separated
  * facet counts (each rounded to 6c²). A size whose memory estimate exceeds the heap is skipped
  * with the estimate printed.
  */
@@ -55,72 +50,29 @@ public final class SolverBenchmark {
         int runs = args.length > 4 ? Integer.parseInt(args[4]) : 3;
         int threads = args.length > 5 ? Integer.parseInt(args[5]) : Runtime.getRuntime().availableProcessors();
         ForkJoinPool pool = new ForkJoinPool(threads);
-        List<double[]> points = new ArrayList<>();
-        System.out.printf(Locale.ROOT, "%-8s %-6s %-5s %-14s %-9s %-9s %-9s %-7s %-7s %-8s %s%n", "facets", "unknown",
-                "bands", "solver", "median_s", "min_s", "peak_MB", "est_MB", "newton", "products", "iterations/band");
+        List<BenchRun.Point> points = new ArrayList<>();
+        System.out.printf(Locale.ROOT, "%-8s %-6s %-5s %-14s %-9s %-9s %-9s %-7s %-7s %-8s %-8s%n", "facets", "unknown",
+                "bands", "solver", "median_s", "min_s", "peak_MB", "est_MB", "newton", "products", "passes");
+        long heap = Runtime.getRuntime().maxMemory();
         for (int size : sizes) {
-            int c = BoxModels.cellsFor(size);
-            int n = 6 * c * c;
-            int m = (n + 2) / 3;
-            SolverChoice how = choice != null ? choice
-                    : SolverChoice.forCase(n, m, bands, false, Runtime.getRuntime().maxMemory());
-            long est = MemoryEstimate.bytes(n, m, bands, how);
-            if (est > Runtime.getRuntime().maxMemory()) {
-                System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s skipped: estimate %d MB > heap %d MB%n", n, m, bands,
-                        how.label(), est >> 20, Runtime.getRuntime().maxMemory() >> 20);
+            BenchRun.Point p = pool.submit(() -> BenchRun.run(size, bands, choice, runs, heap)).get();
+            points.add(p);
+            if (p.skipped()) {
+                System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s skipped: estimate %d MB > heap %d MB%n", p.facets(),
+                        p.unknown(), bands, p.strategy(), p.estimateBytes() >> 20, heap >> 20);
                 continue;
             }
-            RadiationCase rc = BoxModels.box(size, bands);
-            double[] times = new double[runs];
-            SolveResult last = null;
-            long cpu0 = cpuNanos();
-            for (int r = 0; r < runs; r++) {
-                System.gc();
-                long t0 = System.nanoTime();
-                last = pool.submit(() -> new TemperatureSolver(rc, how, ExternalAbsorption.SOURCE_SPECTRUM)
-                        .solve(rc.bands())).get();
-                times[r] = (System.nanoTime() - t0) * 1e-9;
-            }
-            double[] sorted = times.clone();
-            Arrays.sort(sorted);
-            double median = sorted[runs / 2];
-            double cpuPerRun = (cpuNanos() - cpu0) * 1e-9 / runs;
-            SolverReport s = last.solver();
-            System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s %-9.3f %-9.3f %-9d %-7d %-7d %-8d %s  (runs %s; cpu %.1f s/run; balance %.3g W)%n",
-                    n, m, bands, s.strategy(), median, sorted[0], s.peakHeapBytes() >> 20, s.estimatedBytes() >> 20,
-                    s.newtonIterations(), s.krylovProducts(), Arrays.toString(s.bandIterations()), fmt(times),
-                    cpuPerRun, last.energyBalanceW());
-            points.add(new double[] {n, median});
+            System.out.printf(Locale.ROOT, "%-8d %-6d %-5d %-14s %-9.3f %-9.3f %-9d %-7d %-7d %-8d %-8.1f  (cpu %.1f s/run;"
+                    + " balance %.3g W)%n", p.facets(), p.unknown(), bands, p.strategy(), p.medianSeconds(),
+                    p.minSeconds(), p.peakHeapBytes() >> 20, p.estimateBytes() >> 20, p.newtonSteps(), p.products(),
+                    p.passes(), p.cpuSeconds(), p.balanceW());
         }
-        if (points.size() >= 2) {
+        double e = BenchRun.exponent(points);
+        if (!Double.isNaN(e)) {
             System.out.printf(Locale.ROOT, "fitted growth exponent (time ~ N^p, least squares over the sizes above): p = %.2f%n",
-                    exponent(points));
+                    e);
         }
         pool.shutdown();
-    }
-
-    /** CPU time of the whole process so far (ns): on a shared machine, the work done, not the waiting. */
-    static long cpuNanos() {
-        return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
-                .getOperatingSystemMXBean()).getProcessCpuTime();
-    }
-
-    /** Least-squares slope of log t against log N. */
-    static double exponent(List<double[]> pts) {
-        double sx = 0;
-        double sy = 0;
-        double sxx = 0;
-        double sxy = 0;
-        for (double[] p : pts) {
-            double x = Math.log(p[0]);
-            double y = Math.log(p[1]);
-            sx += x;
-            sy += y;
-            sxx += x * x;
-            sxy += x * y;
-        }
-        int k = pts.size();
-        return (k * sxy - sx * sy) / (k * sxx - sx * sx);
     }
 
     /**

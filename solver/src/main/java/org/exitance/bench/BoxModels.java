@@ -14,7 +14,8 @@ import org.exitance.spectral.SpectralEmissivity;
 import org.exitance.spectral.TabulatedEmissivity;
 
 /**
- * Closed-box models for benchmarks of the solver alone (invented data). A unit cube with c × c
+ * Closed-box models for benchmarks of the solver alone (invented data: {@code exitance bench} and
+ * the benchmark beside the tests). A unit cube with c × c
  * square cells on each face, N = 6c² facets. The view factors are synthetic but exactly reciprocal
  * and closed: the point-to-point kernel between cell centres, {@code S_ij = A_i A_j cosθ_i cosθ_j /
  * (π r²)} (Siegel &amp; Howell, 5th ed., the differential view factor between two small areas;
@@ -31,7 +32,7 @@ public final class BoxModels {
     }
 
     /** Cells per face edge for about n facets. */
-    static int cellsFor(int facets) {
+    public static int cellsFor(int facets) {
         return Math.max(1, (int) Math.round(Math.sqrt(facets / 6.0)));
     }
 
@@ -41,7 +42,7 @@ public final class BoxModels {
      * @param c  cells per face edge
      * @param area  receives the facet areas (m²); length 6c², modified
      */
-    static double[] viewFactors(int c, double[] area) {
+    public static double[] viewFactors(int c, double[] area) {
         int n = 6 * c * c;
         double[][] p = new double[n][];
         double[][] nrm = new double[n][];
@@ -85,15 +86,17 @@ public final class BoxModels {
         java.util.Arrays.fill(d, 1.0);
         double[] sd = new double[n];
         for (int sweep = 0; sweep < 200; sweep++) {
-            double worst = 0;
-            for (int i = 0; i < n; i++) {
+            java.util.stream.IntStream.range(0, n).parallel().forEach(i -> {
                 double sum = 0;
                 int row = i * n;
                 for (int j = 0; j < n; j++) {
                     sum += s[row + j] * d[j];
                 }
-                sd[i] = sum;
-                worst = Math.max(worst, Math.abs(d[i] * sum / area[i] - 1));
+                sd[i] = sum; // each row one sum in a fixed order: the same whatever the threads
+            });
+            double worst = 0;
+            for (int i = 0; i < n; i++) {
+                worst = Math.max(worst, Math.abs(d[i] * sd[i] / area[i] - 1));
             }
             if (worst < 1e-13) {
                 break;
