@@ -1,5 +1,6 @@
 package org.exitance.geometry.viewfactor;
 
+import org.exitance.geometry.Patch;
 import org.exitance.geometry.bvh.TriangleBvh;
 
 /**
@@ -49,6 +50,10 @@ final class PairEvaluator {
     /** Pairs with an exact curved side, or null for a scene of plain polygons. */
     private final CurvedPairs curved;
     private final int[] owners = new int[MAX_OCCLUDERS];
+    /** Facets found by the last {@link #blocked} that may block the pair ([0, blockers) of {@link #owners}; −1: too many). */
+    private int blockers;
+    private final int[] solids = new int[16];
+    private final CoaxialPairs coaxial = new CoaxialPairs();
     private final Poly p = new Poly();
     private final Poly q = new Poly();
     private final double[] scratch = new double[3 * Poly.MAX_VERTICES];
@@ -84,6 +89,10 @@ final class PairEvaluator {
         double s = curved.exchangeArea(i, p, i, q);
         lastError = curved.lastError;
         if (blocked(i, i)) {
+            double v = coaxialPair(i, i);
+            if (!Double.isNaN(v)) {
+                return v;
+            }
             // something inside the patch's own solid may hide part of it from itself: anything
             // between 0 and the unobstructed value, said so in the estimate
             counters[CURVED_ON_POLYGONS]++;
@@ -109,7 +118,7 @@ final class PairEvaluator {
             return 0;
         }
         if (blocked(i, j)) {
-            return Double.NaN;
+            return coaxialPair(i, j);
         }
         if (kind == CurvedPairs.PARTIAL) {
             counters[QUADRATURE]++;
@@ -127,7 +136,8 @@ final class PairEvaluator {
 
     /**
      * Whether an occluder may block the exact pair (p, q loaded): the hull of the two polygons,
-     * widened by both patches' sagittas, holds a facet that does not bound a region containing
+     * widened by both patches' sagittas and the largest sagitta of any facet (an exact occluder
+     * lies within that of its polygon), holds a facet that does not bound a region containing
      * both.
      */
     private boolean blocked(int i, int j) {
@@ -135,17 +145,56 @@ final class PairEvaluator {
             return false;
         }
         shaft.build(p, q);
-        int found = occluders.collect(shaft.planes, shaft.count, shaft.tolerance + t.sagitta[i] + t.sagitta[j], i, j,
-                owners);
+        // widened (a negative tolerance: a facet counts unless it is that far outside a plane) by
+        // both patches' sagittas and by the most an exact occluder bulges out of its polygon
+        int found = occluders.collect(shaft.planes, shaft.count,
+                shaft.tolerance - (t.sagitta[i] + t.sagitta[j] + t.maxSagitta), i, j, owners);
+        blockers = found;
         if (found < 0) {
             return true;
         }
+        blockers = 0;
         for (int k = 0; k < found; k++) {
             if (!curved.cannotBlock(owners[k], i, p, j, q)) {
-                return true;
+                owners[blockers++] = owners[k];
             }
         }
-        return false;
+        return blockers > 0;
+    }
+
+    /**
+     * A pair of exact patches of revolution blocked only by round solids on their axis
+     * ({@link CoaxialPairs}), after {@link #blocked} found the blockers; NaN when it is not such a
+     * pair (the polygon methods then take it).
+     */
+    private double coaxialPair(int i, int j) {
+        Patch a = t.patch[i], b = t.patch[j];
+        if (blockers <= 0 || t.round == null || !CoaxialPairs.revolution(a) || !CoaxialPairs.revolution(b)) {
+            return Double.NaN;
+        }
+        int n = 0;
+        for (int k = 0; k < blockers; k++) {
+            int s = t.round.solidOf[owners[k]];
+            if (s < 0) {
+                return Double.NaN;
+            }
+            boolean known = false;
+            for (int m = 0; m < n; m++) {
+                known |= solids[m] == s;
+            }
+            if (!known) {
+                if (n == solids.length || !t.round.admits(s, a, t.sceneSize) || !t.round.admits(s, b, t.sceneSize)) {
+                    return Double.NaN;
+                }
+                solids[n++] = s;
+            }
+        }
+        double tol = curved.relativeTolerance() * Math.min(t.exactArea[i], t.exactArea[j]);
+        double v = coaxial.exchangeArea(a, b, t.round, solids, n, tol);
+        lastError = coaxial.lastError;
+        counters[CURVED_EXACT]++;
+        counters[v == 0 ? HIDDEN : PARTIAL]++;
+        return v;
     }
 
     /**
