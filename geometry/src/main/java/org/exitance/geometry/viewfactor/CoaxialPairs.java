@@ -65,14 +65,15 @@ final class CoaxialPairs {
     }
 
     /**
+     * Sets the pair and the solids in the way; call before {@link #coverage} and
+     * {@link #exchangeArea}.
+     *
      * @param a first patch, PLANE or CONE (not modified)
      * @param b second patch on the same axis (a itself for a concave patch seeing itself)
      * @param rs the scene's round solids
      * @param solids indices of the solids in the way, [0, n) (not modified)
-     * @param tol absolute tolerance (m²)
-     * @return A_a F_ab (m²)
      */
-    double exchangeArea(Patch a, Patch b, RoundSolids rs, int[] solids, int n, double tol) {
+    void prepare(Patch a, Patch b, RoundSolids rs, int[] solids, int n) {
         pa = a;
         pb = b;
         oax = a.frame(0);
@@ -101,6 +102,56 @@ final class CoaxialPairs {
             sol[3 * ns + 2] = Math.max(za, zb);
             ns++;
         }
+    }
+
+    /**
+     * For a prepared pair whose solids span its heights ({@link RoundSolids#admits}): a segment
+     * between points at radii ρ_x, ρ_y outside the circle r and azimuths ψ apart misses it exactly
+     * when |ψ| (mod 2π, in [0, π]) ≤ acos(r/ρ_x) + acos(r/ρ_y) (tangent lines from both points),
+     * which grows with both radii; so comparing the pair's range of |ψ| with that limit at the
+     * smallest and largest radii decides the whole pair when it can.
+     *
+     * @return SEEN (nothing in the way anywhere), HIDDEN (every segment blocked) or PARTIAL
+     */
+    int coverage() {
+        double lo = b0 - a1, hi = b1 - a0;
+        double dLo = contains(lo, hi, 0) ? 0 : Math.min(wrapped(lo), wrapped(hi));
+        double dHi = contains(lo, hi, Math.PI) ? Math.PI : Math.max(wrapped(lo), wrapped(hi));
+        double ra = Math.min(radius(pa, pa.u0()), radius(pa, pa.u1())), rA = Math.max(radius(pa, pa.u0()), radius(pa, pa.u1()));
+        double rb = Math.min(radius(pb, pb.u0()), radius(pb, pb.u1())), rB = Math.max(radius(pb, pb.u0()), radius(pb, pb.u1()));
+        boolean seen = true, hidden = false;
+        for (int k = 0; k < ns; k++) {
+            double r = sol[3 * k];
+            double least = Math.acos(Math.min(1, r / ra)) + Math.acos(Math.min(1, r / rb));
+            double most = Math.acos(Math.min(1, r / rA)) + Math.acos(Math.min(1, r / rB));
+            seen &= dHi <= least;
+            hidden |= dLo >= most;
+        }
+        return hidden ? HIDDEN : seen ? SEEN : PARTIAL;
+    }
+
+    static final int SEEN = 0, HIDDEN = 1, PARTIAL = 2;
+
+    private static double radius(Patch p, double u) {
+        return p.kind() == Patch.Kind.PLANE ? u : p.shapeA() + p.shapeB() * u;
+    }
+
+    /** |ψ| reduced to [0, π] (rad). */
+    private static double wrapped(double psi) {
+        return Math.abs(psi - TWO_PI * Math.rint(psi / TWO_PI));
+    }
+
+    /** Whether [lo, hi] holds c + 2πk for some integer k. */
+    private static boolean contains(double lo, double hi, double c) {
+        return Math.floor((hi - c) / TWO_PI) >= Math.ceil((lo - c) / TWO_PI);
+    }
+
+    /**
+     * @param tol absolute tolerance (m²)
+     * @return A_a F_ab of the prepared pair (m²)
+     */
+    double exchangeArea(double tol) {
+        Patch a = pa, b = pb;
         evaluations = 0;
         outerError = 0;
         double du = a.u1() - a.u0(), dv = b.u1() - b.u0();

@@ -86,13 +86,19 @@ final class PairEvaluator {
         p.load(t, i);
         q.load(t, i);
         lastError = 0;
+        int coverage = blocked(i, i) ? coaxialCoverage(i, i) : CoaxialPairs.SEEN;
+        if (coverage == CoaxialPairs.PARTIAL) {
+            return coaxialPair(i, i);
+        }
+        if (coverage == CoaxialPairs.HIDDEN) {
+            counters[CURVED_EXACT]++;
+            counters[HIDDEN]++;
+            lastError = 0;
+            return 0;
+        }
         double s = curved.exchangeArea(i, p, i, q);
         lastError = curved.lastError;
-        if (blocked(i, i)) {
-            double v = coaxialPair(i, i);
-            if (!Double.isNaN(v)) {
-                return v;
-            }
+        if (coverage < 0) {
             // something inside the patch's own solid may hide part of it from itself: anything
             // between 0 and the unobstructed value, said so in the estimate
             counters[CURVED_ON_POLYGONS]++;
@@ -117,7 +123,16 @@ final class PairEvaluator {
             counters[CURVED_EXACT]++;
             return 0;
         }
-        if (blocked(i, j)) {
+        int coverage = blocked(i, j) ? coaxialCoverage(i, j) : CoaxialPairs.SEEN;
+        if (coverage < 0) {
+            return Double.NaN;
+        }
+        if (coverage == CoaxialPairs.HIDDEN) {
+            counters[HIDDEN]++;
+            counters[CURVED_EXACT]++;
+            return 0;
+        }
+        if (coverage == CoaxialPairs.PARTIAL) {
             return coaxialPair(i, j);
         }
         if (kind == CurvedPairs.PARTIAL) {
@@ -163,20 +178,21 @@ final class PairEvaluator {
     }
 
     /**
-     * A pair of exact patches of revolution blocked only by round solids on their axis
-     * ({@link CoaxialPairs}), after {@link #blocked} found the blockers; NaN when it is not such a
-     * pair (the polygon methods then take it).
+     * A pair of exact patches of revolution blocked only by round solids on their axis that span
+     * its heights, after {@link #blocked} found the blockers: prepares {@link #coaxial} and returns
+     * its {@link CoaxialPairs#coverage}, or −1 when it is not such a pair (the polygon methods
+     * then take it).
      */
-    private double coaxialPair(int i, int j) {
+    private int coaxialCoverage(int i, int j) {
         Patch a = t.patch[i], b = t.patch[j];
         if (blockers <= 0 || t.round == null || !CoaxialPairs.revolution(a) || !CoaxialPairs.revolution(b)) {
-            return Double.NaN;
+            return -1;
         }
         int n = 0;
         for (int k = 0; k < blockers; k++) {
             int s = t.round.solidOf[owners[k]];
             if (s < 0) {
-                return Double.NaN;
+                return -1;
             }
             boolean known = false;
             for (int m = 0; m < n; m++) {
@@ -184,13 +200,18 @@ final class PairEvaluator {
             }
             if (!known) {
                 if (n == solids.length || !t.round.admits(s, a, t.sceneSize) || !t.round.admits(s, b, t.sceneSize)) {
-                    return Double.NaN;
+                    return -1;
                 }
                 solids[n++] = s;
             }
         }
-        double tol = curved.relativeTolerance() * Math.min(t.exactArea[i], t.exactArea[j]);
-        double v = coaxial.exchangeArea(a, b, t.round, solids, n, tol);
+        coaxial.prepare(a, b, t.round, solids, n);
+        return coaxial.coverage();
+    }
+
+    /** A_i F_ij of a PARTIAL coaxial pair (prepared by {@link #coaxialCoverage}); sets {@link #lastError}. */
+    private double coaxialPair(int i, int j) {
+        double v = coaxial.exchangeArea(curved.relativeTolerance() * Math.min(t.exactArea[i], t.exactArea[j]));
         lastError = coaxial.lastError;
         counters[CURVED_EXACT]++;
         counters[v == 0 ? HIDDEN : PARTIAL]++;
