@@ -15,45 +15,35 @@ import org.exitance.geometry.Patch;
  * B = cos θ_y r and R = r², each of the form α + β cos ψ.
  *
  * <ul>
- *   <li>Inner, over ψ, exact visibility: the segment x → y meets the solid cylinder (r, z0..z1)
- *       when the parameter interval where its horizontal projection lies within r overlaps the
- *       one where its height lies in [z0, z1]. That changes only where the line touches the circle
- *       r (cos ψ = [r² ± √((ρ_x² − r²)(ρ_y² − r²))]/(ρ_x ρ_y)) or passes through the rim of an end
- *       (|p(t_k)| = r at the fixed t_k of the end's height, linear in cos ψ). The ψ range is cut
- *       there, at the horizons (A = 0, B = 0), at w's kinks and at ψ = 0 (mod 2π), one point per
- *       piece decides whether it is seen, and seen pieces are integrated by adaptive Gauss.</li>
+ *   <li>Inner, over ψ, with exact visibility: {@link CoaxialAzimuths}. The segment x → y meets
+ *       the solid cylinder (r, z0..z1) when the parameter interval where its horizontal
+ *       projection lies within r overlaps the one where its height lies in [z0, z1].</li>
  *   <li>Outer, over (u, v): 6 × 6 Gauss cells halved in the direction whose halves disagree
- *       more, as in {@link PartialPairs}. Two patches of one surface sharing a u range have a kink
- *       along u = v (points meet there), so that square is split into two triangles mapped to
- *       squares with the diagonal on an edge.</li>
+ *       more, as in {@link PartialPairs}. Where the two patches meet (a wall on an annulus) the
+ *       integrand grows like 1/d toward that corner, and two patches of one surface sharing a u
+ *       range have a kink along u = v; such squares are split from the corner into two
+ *       triangles mapped to squares (Jacobian σ), which removes both.</li>
  * </ul>
  * Mutable scratch; one instance per thread.
  */
 final class CoaxialPairs {
 
-    private static final int N = 6, M = 8, MAX_DEPTH = 40;
+    private static final int N = 6, MAX_DEPTH = 40;
     private static final double[] GN = GaussLegendre.nodes(N), WN = GaussLegendre.weights(N);
     private static final double[] GL = GaussLegendre.nodes(N - 2), WL = GaussLegendre.weights(N - 2);
-    private static final double[] GM = GaussLegendre.nodes(M), WM = GaussLegendre.weights(M);
-    private static final double TWO_PI = 2 * Math.PI, NOISE = 1e-12;
     /** Kernel evaluations per pair after which cells are accepted as they are (the differences stay in the estimate). */
     static final long BUDGET = 40_000_000L;
     static final int RECT = 0, LOWER = 1, UPPER = 2;
 
     private Patch pa, pb;
     private double oax, oay, oaz, e3x, e3y, e3z;
-    private double sB, a0, a1, b0, b1;
-    private final double[] sol = new double[3 * 16];
-    private int ns;
-    private final double[] ring = new double[16], cuts = new double[256], cosines = new double[64];
-    private double rhoX, zX, nrX, nzX, jX, rhoY, zY, nrY, nzY, jY;
-    /** A = pA − bA (1 − cos ψ), B = pB − bB (1 − cos ψ): their values at ψ = 0 and slopes in cos ψ. */
-    private double pA, bA, pB, bB, dRho, dz2;
+    private double sB;
+    private final double[] ring = new double[16];
+    private final CoaxialAzimuths psi = new CoaxialAzimuths();
     private int mode;
     /** The corner and the signed sides of the current triangle pair (LOWER, UPPER). */
     private double cu, cv, hu, hv;
     private double innerTol, outerError;
-    private long evaluations;
     /** Error estimate of the last call (m²). */
     double lastError;
     /** Kernel evaluations of the last call. */
@@ -62,6 +52,43 @@ final class CoaxialPairs {
     /** @return true for a patch this class integrates: a plane annular sector or a cone or cylinder band */
     static boolean revolution(Patch p) {
         return p != null && p.kind() != Patch.Kind.SPHERE;
+    }
+
+    /** Most round solids in the way of one pair. */
+    static final int MAX_SOLIDS = 16;
+    private final int[] solids = new int[MAX_SOLIDS];
+
+    /**
+     * Prepares the pair (i, j) if it is one this class takes: both exact patches of revolution,
+     * every blocker a member of a round solid that {@link RoundSolids#admits} both.
+     *
+     * @param blockers facets that may block the pair, [0, count) (not modified)
+     * @return −1 when it is not such a pair, else {@link #coverage}
+     */
+    int coverage(FacetTable t, int i, int j, int[] blockers, int count) {
+        Patch a = t.patch[i], b = t.patch[j];
+        if (t.round == null || !revolution(a) || !revolution(b)) {
+            return -1;
+        }
+        int n = 0;
+        for (int k = 0; k < count; k++) {
+            int s = t.round.solidOf[blockers[k]];
+            if (s < 0) {
+                return -1;
+            }
+            boolean known = false;
+            for (int m = 0; m < n; m++) {
+                known |= solids[m] == s;
+            }
+            if (!known) {
+                if (n == MAX_SOLIDS || !t.round.admits(s, a, t.sceneSize) || !t.round.admits(s, b, t.sceneSize)) {
+                    return -1;
+                }
+                solids[n++] = s;
+            }
+        }
+        prepare(a, b, t.round, solids, n);
+        return coverage();
     }
 
     /**
@@ -83,67 +110,35 @@ final class CoaxialPairs {
         e3y = a.frame(10);
         e3z = a.frame(11);
         sB = Math.signum(b.frame(9) * e3x + b.frame(10) * e3y + b.frame(11) * e3z);
-        a0 = a.phi0();
-        a1 = a.phi1();
         double beta = Math.atan2(b.frame(3) * a.frame(6) + b.frame(4) * a.frame(7) + b.frame(5) * a.frame(8),
                 b.frame(3) * a.frame(3) + b.frame(4) * a.frame(4) + b.frame(5) * a.frame(5));
         double g0 = beta + sB * b.phi0(), g1 = beta + sB * b.phi1();
-        b0 = Math.min(g0, g1);
-        b1 = Math.max(g0, g1);
-        ns = 0;
+        psi.set(a.phi0(), a.phi1(), Math.min(g0, g1), Math.max(g0, g1), BUDGET);
         for (int k = 0; k < n; k++) {
             int o = RoundSolids.FIELDS * solids[k];
             double[] d = rs.data;
             double s = Math.signum(d[o + 3] * e3x + d[o + 4] * e3y + d[o + 5] * e3z);
             double off = (d[o] - oax) * e3x + (d[o + 1] - oay) * e3y + (d[o + 2] - oaz) * e3z;
             double za = off + s * d[o + 7], zb = off + s * d[o + 8];
-            sol[3 * ns] = d[o + 6];
-            sol[3 * ns + 1] = Math.min(za, zb);
-            sol[3 * ns + 2] = Math.max(za, zb);
-            ns++;
+            psi.addSolid(d[o + 6], Math.min(za, zb), Math.max(za, zb));
         }
     }
 
     /**
-     * For a prepared pair whose solids span its heights ({@link RoundSolids#admits}): a segment
-     * between points at radii ρ_x, ρ_y outside the circle r and azimuths ψ apart misses it exactly
-     * when |ψ| (mod 2π, in [0, π]) ≤ acos(r/ρ_x) + acos(r/ρ_y) (tangent lines from both points),
-     * which grows with both radii; so comparing the pair's range of |ψ| with that limit at the
-     * smallest and largest radii decides the whole pair when it can.
+     * For a prepared pair whose solids span its heights ({@link RoundSolids#admits}): see
+     * {@link CoaxialAzimuths#coverage}.
      *
-     * @return SEEN (nothing in the way anywhere), HIDDEN (every segment blocked) or PARTIAL
+     * @return SEEN, HIDDEN or PARTIAL
      */
     int coverage() {
-        double lo = b0 - a1, hi = b1 - a0;
-        double dLo = contains(lo, hi, 0) ? 0 : Math.min(wrapped(lo), wrapped(hi));
-        double dHi = contains(lo, hi, Math.PI) ? Math.PI : Math.max(wrapped(lo), wrapped(hi));
-        double ra = Math.min(radius(pa, pa.u0()), radius(pa, pa.u1())), rA = Math.max(radius(pa, pa.u0()), radius(pa, pa.u1()));
-        double rb = Math.min(radius(pb, pb.u0()), radius(pb, pb.u1())), rB = Math.max(radius(pb, pb.u0()), radius(pb, pb.u1()));
-        boolean seen = true, hidden = false;
-        for (int k = 0; k < ns; k++) {
-            double r = sol[3 * k];
-            double least = Math.acos(Math.min(1, r / ra)) + Math.acos(Math.min(1, r / rb));
-            double most = Math.acos(Math.min(1, r / rA)) + Math.acos(Math.min(1, r / rB));
-            seen &= dHi <= least;
-            hidden |= dLo >= most;
-        }
-        return hidden ? HIDDEN : seen ? SEEN : PARTIAL;
+        double ra = radius(pa, pa.u0()), rA = radius(pa, pa.u1()), rb = radius(pb, pb.u0()), rB = radius(pb, pb.u1());
+        return psi.coverage(Math.min(ra, rA), Math.max(ra, rA), Math.min(rb, rB), Math.max(rb, rB));
     }
 
-    static final int SEEN = 0, HIDDEN = 1, PARTIAL = 2;
+    static final int SEEN = CoaxialAzimuths.SEEN, HIDDEN = CoaxialAzimuths.HIDDEN, PARTIAL = CoaxialAzimuths.PARTIAL;
 
     private static double radius(Patch p, double u) {
         return p.kind() == Patch.Kind.PLANE ? u : p.shapeA() + p.shapeB() * u;
-    }
-
-    /** |ψ| reduced to [0, π] (rad). */
-    private static double wrapped(double psi) {
-        return Math.abs(psi - TWO_PI * Math.rint(psi / TWO_PI));
-    }
-
-    /** Whether [lo, hi] holds c + 2πk for some integer k. */
-    private static boolean contains(double lo, double hi, double c) {
-        return Math.floor((hi - c) / TWO_PI) >= Math.ceil((lo - c) / TWO_PI);
     }
 
     /**
@@ -152,7 +147,6 @@ final class CoaxialPairs {
      */
     double exchangeArea(double tol) {
         Patch a = pa, b = pb;
-        evaluations = 0;
         outerError = 0;
         double du = a.u1() - a.u0(), dv = b.u1() - b.u0();
         innerTol = 0.1 * tol / (du * dv);
@@ -175,7 +169,7 @@ final class CoaxialPairs {
         } else {
             s = rectangle(a.u0(), a.u1(), b.u0(), b.u1(), 0.9 * tol);
         }
-        lastEvaluations = evaluations;
+        lastEvaluations = psi.evaluations;
         lastError = outerError + innerTol * du * dv;
         return Math.max(0, s);
     }
@@ -256,7 +250,7 @@ final class CoaxialPairs {
         boolean splitS = ds >= dt;
         double h1 = splitS ? s1h : t1h, h2 = splitS ? s2h : t2h;
         double diff = Math.max(ds, dt);
-        if (diff <= tol || depth >= MAX_DEPTH || evaluations > BUDGET) {
+        if (diff <= tol || depth >= MAX_DEPTH || psi.evaluations > BUDGET) {
             outerError += diff;
             return h1 + h2;
         }
@@ -291,182 +285,13 @@ final class CoaxialPairs {
     /** J_a(u) J_b(v) (1/π) ∫ w A⁺ B⁺ V / R² dψ. */
     private double inner(double u, double v) {
         pa.ring(u, ring, 0);
-        rhoX = ring[3];
-        nrX = ring[4];
-        nzX = ring[5];
-        jX = ring[6];
-        zX = height();
+        double rhoX = ring[3], nrX = ring[4], nzX = ring[5], jX = ring[6], zX = height();
         pb.ring(v, ring, 0);
-        rhoY = ring[3];
-        nrY = ring[4];
-        nzY = sB * ring[5];
-        jY = ring[6];
-        zY = height();
+        double rhoY = ring[3], nrY = ring[4], nzY = sB * ring[5], jY = ring[6], zY = height();
         if (!(jX > 0 && jY > 0)) {
             return 0;
         }
-        double dz = zY - zX;
-        dRho = rhoX - rhoY;
-        dz2 = dz * dz;
-        pA = nrX * (rhoY - rhoX) + nzX * dz;
-        bA = nrX * rhoY;
-        pB = nrY * (rhoX - rhoY) - nzY * dz;
-        bB = nrY * rhoX;
-        double lo = b0 - a1, hi = b1 - a0;
-        int n = 0;
-        cuts[n++] = lo;
-        cuts[n++] = hi;
-        n = add(b0 - a0, lo, hi, n);
-        n = add(b1 - a1, lo, hi, n);
-        for (int k = -2; k <= 2; k++) {
-            n = add(Math.PI * k, lo, hi, n);
-        }
-        // where the points come close, the kernel peaks at ψ = 0 (mod 2π) with a width of about
-        // δ: panels graded geometrically from there, so that no Gauss rule steps over the peak
-        double q2 = rhoX * rhoY, delta = Math.sqrt(dRho * dRho + dz2) / Math.sqrt(Math.max(q2, 1e-300));
-        if (delta < 0.1) {
-            for (int k = -1; k <= 1; k++) {
-                for (double g = Math.max(delta, 1e-12); g < 0.5; g *= 4) {
-                    n = add(TWO_PI * k + g, lo, hi, n);
-                    n = add(TWO_PI * k - g, lo, hi, n);
-                }
-            }
-        }
-        int nc = 0;
-        if (bA != 0) {
-            cosines[nc++] = 1 - pA / bA;
-        }
-        if (bB != 0) {
-            cosines[nc++] = 1 - pB / bB;
-        }
-        nc = events(nc, dz);
-        for (int c = 0; c < nc; c++) {
-            double cv = cosines[c];
-            if (cv > -1 && cv < 1) {
-                double th = Math.acos(cv);
-                for (int k = -2; k <= 2; k++) {
-                    n = add(th + TWO_PI * k, lo, hi, n);
-                    n = add(-th + TWO_PI * k, lo, hi, n);
-                }
-            }
-        }
-        java.util.Arrays.sort(cuts, 0, n);
-        double total = 0, tol = innerTol * Math.PI / (jX * jY) / (hi - lo);
-        for (int k = 0; k + 1 < n; k++) {
-            double p = cuts[k], q = cuts[k + 1];
-            if (q - p <= 1e-14) {
-                continue;
-            }
-            double mid = 0.5 * (p + q), c = Math.cos(mid);
-            if (pA - bA * (1 - c) > 0 && pB - bB * (1 - c) > 0 && weight(mid) > 0 && visible(mid, dz)) {
-                double whole = rule(p, q);
-                total += adaptPsi(p, q, whole, tol * (q - p), 0);
-            }
-        }
-        return total * jX * jY / Math.PI;
-    }
-
-    private int add(double v, double lo, double hi, int n) {
-        if (v > lo && v < hi && n < cuts.length) {
-            cuts[n++] = v;
-        }
-        return n;
-    }
-
-    /** Appends the cosines of ψ where the visibility through each solid can change. @return new count */
-    private int events(int nc, double dz) {
-        double q = rhoX * rhoY;
-        for (int k = 0; k < ns; k++) {
-            double r = sol[3 * k];
-            if (rhoX > r && rhoY > r && q > 0) {
-                double root = Math.sqrt((rhoX * rhoX - r * r) * (rhoY * rhoY - r * r));
-                cosines[nc++] = (r * r + root) / q;
-                cosines[nc++] = (r * r - root) / q;
-            }
-            if (dz != 0 && q > 0) {
-                for (int e = 1; e <= 2; e++) {
-                    double t = (sol[3 * k + e] - zX) / dz;
-                    if (t > 0 && t < 1) {
-                        double u = 1 - t;
-                        cosines[nc++] = (r * r - u * u * rhoX * rhoX - t * t * rhoY * rhoY) / (2 * t * u * q);
-                    }
-                }
-            }
-        }
-        return nc;
-    }
-
-    /** Whether the segment from x (azimuth 0) to y at azimuth ψ misses every solid. */
-    private boolean visible(double psi, double dz) {
-        double c = Math.cos(psi), s = Math.sin(psi);
-        double dx = rhoY * c - rhoX, dy = rhoY * s;
-        double a2 = dx * dx + dy * dy, b2 = rhoX * dx;
-        for (int k = 0; k < ns; k++) {
-            double r = sol[3 * k], c2 = rhoX * rhoX - r * r;
-            double lo, hi;
-            if (a2 <= 1e-300) {
-                if (c2 >= 0) {
-                    continue;
-                }
-                lo = 0;
-                hi = 1;
-            } else {
-                double disc = b2 * b2 - a2 * c2;
-                if (disc <= 0) {
-                    continue;
-                }
-                double sq = Math.sqrt(disc);
-                lo = Math.max(0, (-b2 - sq) / a2);
-                hi = Math.min(1, (-b2 + sq) / a2);
-            }
-            double zlo, zhi;
-            if (dz == 0) {
-                if (!(zX > sol[3 * k + 1] && zX < sol[3 * k + 2])) {
-                    continue;
-                }
-                zlo = 0;
-                zhi = 1;
-            } else {
-                double ta = (sol[3 * k + 1] - zX) / dz, tb = (sol[3 * k + 2] - zX) / dz;
-                zlo = Math.max(0, Math.min(ta, tb));
-                zhi = Math.min(1, Math.max(ta, tb));
-            }
-            if (Math.min(hi, zhi) - Math.max(lo, zlo) > 1e-12) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /** Length of a's azimuths φ whose partner φ + ψ lies on b (rad). */
-    private double weight(double psi) {
-        return Math.max(0, Math.min(a1, b1 - psi) - Math.max(a0, b0 - psi));
-    }
-
-    private double adaptPsi(double p, double q, double whole, double tol, int depth) {
-        double m = 0.5 * (p + q);
-        double x = rule(p, m), y = rule(m, q);
-        if (Math.abs(x + y - whole) <= Math.max(tol, NOISE * Math.abs(x + y)) || depth >= MAX_DEPTH
-                || evaluations > BUDGET) {
-            return x + y;
-        }
-        return adaptPsi(p, m, x, 0.5 * tol, depth + 1) + adaptPsi(m, q, y, 0.5 * tol, depth + 1);
-    }
-
-    /** Gauss rule of w A B / R² on [p, q] (a piece where A, B > 0 and everything is seen). */
-    private double rule(double p, double q) {
-        evaluations += M;
-        double s = 0, len = q - p;
-        double cross = 4 * rhoX * rhoY;
-        for (int k = 0; k < M; k++) {
-            double psi = p + len * GM[k];
-            double half = Math.sin(0.5 * psi), vers = 2 * half * half;
-            // 1 − cos ψ = 2 sin²(ψ/2) and R = (ρx − ρy)² + Δz² + 4 ρx ρy sin²(ψ/2): no
-            // cancellation where the points meet
-            double r2 = dRho * dRho + dz2 + cross * half * half;
-            double f = (pA - bA * vers) * (pB - bB * vers);
-            s += WM[k] * weight(psi) * Math.max(0, f) / (r2 * r2);
-        }
-        return s * len;
+        double tol = innerTol * Math.PI / (jX * jY);
+        return psi.integral(rhoX, zX, nrX, nzX, rhoY, zY, nrY, nzY, tol) * jX * jY / Math.PI;
     }
 }

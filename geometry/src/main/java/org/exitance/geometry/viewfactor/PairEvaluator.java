@@ -1,6 +1,5 @@
 package org.exitance.geometry.viewfactor;
 
-import org.exitance.geometry.Patch;
 import org.exitance.geometry.bvh.TriangleBvh;
 
 /**
@@ -52,7 +51,6 @@ final class PairEvaluator {
     private final int[] owners = new int[MAX_OCCLUDERS];
     /** Facets found by the last {@link #blocked} that may block the pair ([0, blockers) of {@link #owners}; −1: too many). */
     private int blockers;
-    private final int[] solids = new int[16];
     private final CoaxialPairs coaxial = new CoaxialPairs();
     private final Poly p = new Poly();
     private final Poly q = new Poly();
@@ -184,29 +182,7 @@ final class PairEvaluator {
      * then take it).
      */
     private int coaxialCoverage(int i, int j) {
-        Patch a = t.patch[i], b = t.patch[j];
-        if (blockers <= 0 || t.round == null || !CoaxialPairs.revolution(a) || !CoaxialPairs.revolution(b)) {
-            return -1;
-        }
-        int n = 0;
-        for (int k = 0; k < blockers; k++) {
-            int s = t.round.solidOf[owners[k]];
-            if (s < 0) {
-                return -1;
-            }
-            boolean known = false;
-            for (int m = 0; m < n; m++) {
-                known |= solids[m] == s;
-            }
-            if (!known) {
-                if (n == solids.length || !t.round.admits(s, a, t.sceneSize) || !t.round.admits(s, b, t.sceneSize)) {
-                    return -1;
-                }
-                solids[n++] = s;
-            }
-        }
-        coaxial.prepare(a, b, t.round, solids, n);
-        return coaxial.coverage();
+        return blockers <= 0 ? -1 : coaxial.coverage(t, i, j, owners, blockers);
     }
 
     /** A_i F_ij of a PARTIAL coaxial pair (prepared by {@link #coaxialCoverage}); sets {@link #lastError}. */
