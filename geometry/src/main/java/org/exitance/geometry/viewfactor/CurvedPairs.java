@@ -52,6 +52,11 @@ final class CurvedPairs {
         return c;
     }
 
+    /** @return the target error of a pair relative to the smaller exact area */
+    double relativeTolerance() {
+        return relativeTolerance;
+    }
+
     /** @return true if facet i or j carries an exact patch */
     boolean involved(int i, int j) {
         return t.patch[i] != null || t.patch[j] != null;

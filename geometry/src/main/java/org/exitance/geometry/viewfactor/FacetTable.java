@@ -24,6 +24,8 @@ final class FacetTable {
     final org.exitance.geometry.Patch[] patch;
     /** Distance bound between a curved facet's patch and its polygon (m; 0 for plain polygons). */
     final double[] sagitta;
+    /** The largest sagitta of any facet (m): how far an exact occluder may bulge out of its polygon. */
+    final double maxSagitta;
     /** True if any facet carries a patch. */
     final boolean curved;
     final double[] centroid;
@@ -38,6 +40,8 @@ final class FacetTable {
     /** Length of the diagonal of the scene's bounding box (m). */
     final double sceneSize;
     final AreaRules rules;
+    /** Round solids made of the facets' exact patches, or null for a scene of plain polygons. */
+    final RoundSolids round;
 
     FacetTable(Scene scene, int maxRuleOrder) {
         List<Facet> facets = scene.facets();
@@ -89,6 +93,11 @@ final class FacetTable {
             }
         }
         curved = anyPatch;
+        double ms = 0;
+        for (double v : sagitta) {
+            ms = Math.max(ms, v);
+        }
+        maxSagitta = ms;
         double[] lo = {Double.MAX_VALUE, Double.MAX_VALUE, Double.MAX_VALUE};
         double[] hi = {-Double.MAX_VALUE, -Double.MAX_VALUE, -Double.MAX_VALUE};
         for (int k = 0; k < xyz.length; k++) {
@@ -97,6 +106,7 @@ final class FacetTable {
         }
         sceneSize = Math.sqrt(sq(hi[0] - lo[0]) + sq(hi[1] - lo[1]) + sq(hi[2] - lo[2]));
         rules = new AreaRules(this, maxRuleOrder);
+        round = anyPatch ? new RoundSolids(this, sceneSize) : null;
     }
 
     /** SplitMix64 finaliser (Steele, Lea &amp; Flood, OOPSLA 2014). */

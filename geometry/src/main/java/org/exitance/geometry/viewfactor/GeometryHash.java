@@ -16,7 +16,7 @@ import org.exitance.geometry.Surface;
 public final class GeometryHash {
 
     /** Changes whenever the algorithm changes results. */
-    static final String FORMAT = "exitance-viewfactor-3"; // 2: shadow projection; 3: exact curved patches
+    static final String FORMAT = "exitance-viewfactor-4"; // 2: shadow projection; 3: exact curved patches; 4: round solids in the way
 
     private GeometryHash() {
     }

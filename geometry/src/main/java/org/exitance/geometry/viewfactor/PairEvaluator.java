@@ -49,6 +49,9 @@ final class PairEvaluator {
     /** Pairs with an exact curved side, or null for a scene of plain polygons. */
     private final CurvedPairs curved;
     private final int[] owners = new int[MAX_OCCLUDERS];
+    /** Facets found by the last {@link #blocked} that may block the pair ([0, blockers) of {@link #owners}; −1: too many). */
+    private int blockers;
+    private final CoaxialPairs coaxial = new CoaxialPairs();
     private final Poly p = new Poly();
     private final Poly q = new Poly();
     private final double[] scratch = new double[3 * Poly.MAX_VERTICES];
@@ -81,6 +84,16 @@ final class PairEvaluator {
         p.load(t, i);
         q.load(t, i);
         lastError = 0;
+        int coverage = blocked(i, i) ? coaxialCoverage(i, i) : CoaxialPairs.SEEN;
+        if (coverage == CoaxialPairs.PARTIAL) {
+            return coaxialPair(i, i);
+        }
+        if (coverage == CoaxialPairs.HIDDEN) {
+            counters[CURVED_EXACT]++;
+            counters[HIDDEN]++;
+            lastError = 0;
+            return 0;
+        }
         double s = curved.exchangeArea(i, p, i, q);
         lastError = curved.lastError;
         if (Double.isNaN(s)) {
@@ -90,7 +103,7 @@ final class PairEvaluator {
             lastError = t.exactArea[i];
             return 0;
         }
-        if (blocked(i, i)) {
+        if (coverage < 0) {
             // something inside the patch's own solid may hide part of it from itself: anything
             // between 0 and the unobstructed value, said so in the estimate
             counters[CURVED_ON_POLYGONS]++;
@@ -116,8 +129,17 @@ final class PairEvaluator {
             counters[CURVED_EXACT]++;
             return 0;
         }
-        if (blocked(i, j)) {
+        int coverage = blocked(i, j) ? coaxialCoverage(i, j) : CoaxialPairs.SEEN;
+        if (coverage < 0) {
             return Double.NaN;
+        }
+        if (coverage == CoaxialPairs.HIDDEN) {
+            counters[HIDDEN]++;
+            counters[CURVED_EXACT]++;
+            return 0;
+        }
+        if (coverage == CoaxialPairs.PARTIAL) {
+            return coaxialPair(i, j);
         }
         if (kind == CurvedPairs.PARTIAL) {
             counters[QUADRATURE]++;
@@ -138,7 +160,8 @@ final class PairEvaluator {
 
     /**
      * Whether an occluder may block the exact pair (p, q loaded): the hull of the two polygons,
-     * widened by both patches' sagittas, holds a facet that does not bound a region containing
+     * widened by both patches' sagittas and the largest sagitta of any facet (an exact occluder
+     * lies within that of its polygon), holds a facet that does not bound a region containing
      * both.
      */
     private boolean blocked(int i, int j) {
@@ -146,17 +169,40 @@ final class PairEvaluator {
             return false;
         }
         shaft.build(p, q);
-        int found = occluders.collect(shaft.planes, shaft.count, shaft.tolerance + t.sagitta[i] + t.sagitta[j], i, j,
-                owners);
+        // widened (a negative tolerance: a facet counts unless it is that far outside a plane) by
+        // both patches' sagittas and by the most an exact occluder bulges out of its polygon
+        int found = occluders.collect(shaft.planes, shaft.count,
+                shaft.tolerance - (t.sagitta[i] + t.sagitta[j] + t.maxSagitta), i, j, owners);
+        blockers = found;
         if (found < 0) {
             return true;
         }
+        blockers = 0;
         for (int k = 0; k < found; k++) {
             if (!curved.cannotBlock(owners[k], i, p, j, q)) {
-                return true;
+                owners[blockers++] = owners[k];
             }
         }
-        return false;
+        return blockers > 0;
+    }
+
+    /**
+     * A pair of exact patches of revolution blocked only by round solids on their axis that span
+     * its heights, after {@link #blocked} found the blockers: prepares {@link #coaxial} and returns
+     * its {@link CoaxialPairs#coverage}, or −1 when it is not such a pair (the polygon methods
+     * then take it).
+     */
+    private int coaxialCoverage(int i, int j) {
+        return blockers <= 0 ? -1 : coaxial.coverage(t, i, j, owners, blockers);
+    }
+
+    /** A_i F_ij of a PARTIAL coaxial pair (prepared by {@link #coaxialCoverage}); sets {@link #lastError}. */
+    private double coaxialPair(int i, int j) {
+        double v = coaxial.exchangeArea(curved.relativeTolerance() * Math.min(t.exactArea[i], t.exactArea[j]));
+        lastError = coaxial.lastError;
+        counters[CURVED_EXACT]++;
+        counters[v == 0 ? HIDDEN : PARTIAL]++;
+        return v;
     }
 
     /**

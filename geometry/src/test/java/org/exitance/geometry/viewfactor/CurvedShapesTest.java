@@ -181,8 +181,39 @@ class CurvedShapesTest {
                 * (Math.sqrt((a + 2) * (a + 2) - 4 * rr * rr) * Math.acos(b / (rr * a)) + b * Math.asin(1 / rr) - Math.PI * a / 2));
     }
 
+    /**
+     * The outer of two concentric cylinders of equal length to itself, the inner one in the way,
+     * by the definition reduced to one integral as in {@link #innerToOuterByIntegration}: for two
+     * points of the outer at azimuths 0 and φ, cos θ r = r2 (1 − cos φ) at both ends and
+     * D = 2 r2² (1 − cos φ); the chord misses the inner cylinder when |φ| &lt; 2 acos(r1/r2), so
+     * F_22 = (r2³ / (π L)) ∫ (1 − cos φ)² G(D) dφ over that range.
+     */
+    static double outerToItselfByIntegration(double r1, double r2, double len) {
+        double lim = 2 * Math.acos(r1 / r2);
+        return new IterativeLegendreGaussIntegrator(16, 1e-14, 1e-15).integrate(Integer.MAX_VALUE, phi -> {
+            double d = 2 * r2 * r2 * (1 - Math.cos(phi)), sd = Math.sqrt(d);
+            double g = 2 * (len * (len / (2 * d * (d + len * len)) + Math.atan(len / sd) / (2 * d * sd))
+                    - (1 / (2 * d) - 1 / (2 * (d + len * len))));
+            return Math.pow(1 - Math.cos(phi), 2) * g;
+        }, -lim, lim) * r2 * r2 * r2 / (Math.PI * len);
+    }
+
+    /**
+     * Inner surface of the outer of two concentric cylinders of equal length to itself, R = r2/r1,
+     * H = L/r1 (Howell's catalog; Siegel &amp; Howell 4th ed. Appendix C; from memory, hence verified
+     * by {@link #outerToItselfByIntegration}): F_22 = 1 − 1/R + (2/πR) atan(2√(R² − 1)/H)
+     * − (H/2πR){(√(4R² + H²)/H) asin[(4(R² − 1) + (H²/R²)(R² − 2))/(H² + 4(R² − 1))]
+     * − asin((R² − 2)/R²) + (π/2)(√(4R² + H²)/H − 1)}.
+     */
+    static double outerToItself(double r1, double r2, double len) {
+        double rr = r2 / r1, hh = len / r1, q = rr * rr, s = Math.sqrt(4 * q + hh * hh);
+        return 1 - 1 / rr + 2 / (Math.PI * rr) * Math.atan(2 * Math.sqrt(q - 1) / hh) - hh / (2 * Math.PI * rr)
+                * (s / hh * Math.asin((4 * (q - 1) + hh * hh / q * (q - 2)) / (hh * hh + 4 * (q - 1)))
+                        - Math.asin((q - 2) / q) + Math.PI / 2 * (s / hh - 1));
+    }
+
     @Test
-    void concentricCylindersInnerToOuterAndToTheEndAnnuli() {
+    void concentricCylindersOfEqualLengthInnerToOuterOuterToItselfAndToTheEndAnnuli() {
         double r1 = 0.5, r2 = 1, len = 1;
         double f12 = (r2 / r1) * outerToInner(r1, r2, len);
         assertThat(f12).isCloseTo(innerToOuterByIntegration(r1, r2, len), within(1e-10));
@@ -198,5 +229,16 @@ class CurvedShapesTest {
         // the inner sees only the outer and the two ends, equally (closure and symmetry; Siegel & Howell 4th ed. §4)
         assertThat(r.surfaceFactor(0, 2)).isCloseTo((1 - f12) / 2, within(1e-6 * (1 - f12) / 2));
         assertThat(r.surfaceFactor(0, 3)).isCloseTo((1 - f12) / 2, within(1e-6 * (1 - f12) / 2));
+        // the outer sees itself past the inner cylinder (exact visibility through a round body)
+        double f22 = outerToItself(r1, r2, len);
+        assertThat(f22).isCloseTo(outerToItselfByIntegration(r1, r2, len), within(1e-10));
+        assertThat(outerToItself(r1, r2, 10)).isCloseTo(outerToItselfByIntegration(r1, r2, 10), within(1e-10));
+        assertThat(r.surfaceFactor(1, 1)).isCloseTo(f22, within(1e-6 * f22));
+        // and each end annulus: F_2e = (1 − F_21 − F_22)/2 (closure and symmetry; Siegel & Howell 4th ed. §4)
+        double f2e = (1 - f12 * r1 / r2 - f22) / 2;
+        assertThat(r.surfaceFactor(1, 2)).isCloseTo(f2e, within(1e-6 * f2e));
+        assertThat(r.surfaceFactor(1, 3)).isCloseTo(f2e, within(1e-6 * f2e));
+        assertThat(r.methodCounts().curvedOnPolygons()).isZero();
+        assertThat(r.maxRowErrorEstimate()).isLessThan(1e-5);
     }
 }
