@@ -28,8 +28,14 @@ final class Reports {
         if (c.viewFactors() != null) {
             facts.add("View factors: " + (c.shortfall() == null ? "within" : "NOT within") + " the tolerance "
                     + org.exitance.report.Numbers.small(c.viewFactorTolerance()) + " on facet rows (estimated error "
-                    + org.exitance.report.Numbers.small(c.viewFactors().maxRowErrorEstimate()) + ", largest row-sum"
-                    + " deviation " + org.exitance.report.Numbers.small(c.viewFactors().maxRowSumDeviation()) + ")");
+                    + org.exitance.report.Numbers.small(c.viewFactors().maxRowErrorEstimate()) + ", "
+                    + (d.environment() == null
+                            ? "largest |1 − Σ F| of a facet row "
+                                    + org.exitance.report.Numbers.small(c.viewFactors().maxRowSumDeviation())
+                            // open: the rows leave their remainder to the environment, so only an excess is an error
+                            : "largest excess of a facet row above 1 "
+                                    + org.exitance.report.Numbers.small(c.viewFactors().maxRowSumExcess()))
+                    + ")");
         }
         return new ReportCase(caseFile.toString(), d.title(), d.notes(), d.materials(), materialOf, sources,
                 d.environment() == null ? Double.NaN : d.environment().temperatureK(),
