@@ -18,6 +18,9 @@ interface RowProductKernel {
      */
     void rows(double[] f, int n, int ia, int ib, double[] v, int b, double[] w, int oa, int ob);
 
+    /** A short name for reports and benchmarks ("vector 8 × 64-bit", "scalar"). */
+    String describe();
+
     /** The fastest kernel this JVM can run ({@link VectorKernels}). */
     static RowProductKernel best() {
         return Best.KERNEL;

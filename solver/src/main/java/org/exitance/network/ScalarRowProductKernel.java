@@ -47,7 +47,7 @@ final class ScalarRowProductKernel implements RowProductKernel {
     }
 
     @Override
-    public String toString() {
+    public String describe() {
         return "scalar";
     }
 }

@@ -45,7 +45,7 @@ final class VectorRowProductKernel implements RowProductKernel {
     }
 
     @Override
-    public String toString() {
+    public String describe() {
         return "vector " + L + " × 64-bit";
     }
 }

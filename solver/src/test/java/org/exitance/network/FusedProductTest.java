@@ -21,7 +21,7 @@ class FusedProductTest {
     @ParameterizedTest
     @CsvSource({"1, 1", "7, 3", "64, 8", "101, 11", "130, 16"})
     void everyEntryIsTheSameChainWhateverTheKernelThreadsOrColumns(int n, int b) throws Exception {
-        assertThat(RowProductKernel.best().toString()).startsWith("vector");
+        assertThat(RowProductKernel.best().describe()).startsWith("vector");
         Random r = new Random(31L * n + b);
         double[] f = new double[n * n];
         for (int i = 0; i < f.length; i++) {

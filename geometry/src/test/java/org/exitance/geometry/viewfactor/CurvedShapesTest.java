@@ -241,4 +241,33 @@ class CurvedShapesTest {
         assertThat(r.methodCounts().curvedOnPolygons()).isZero();
         assertThat(r.maxRowErrorEstimate()).isLessThan(1e-5);
     }
+
+    /**
+     * A cavity 1 µm high and 0.15 m in radius (found by the case fuzz harness: it ran for hours):
+     * its wall patches are 2·10⁵ times wider than high, beyond what the contour integral resolves
+     * within its budget. The answer must come in seconds, say that the tolerance is not met, and
+     * stay sane: rows within their estimated error and within 5 % of 1 (the solver refuses a row
+     * more than 5 % above 1; the wall's self term is given up to 0, not left at a runaway value)
+     * and base to lid the coaxial-disc closed form (Howell's catalogue C-41, as verified above).
+     */
+    @Test
+    @org.junit.jupiter.api.Timeout(120)
+    void aDegenerateCavitySaysItsToleranceIsNotMetInsteadOfRunningForHours() {
+        double r = 0.15, h = 1e-6;
+        ViewFactorResult res = compute(Scene.of(Enclosures.cylindricalCavity(Vec3.ZERO, Vec3.Z, r, h, 16, 4, 2)));
+        assertThat(res.maxRowErrorEstimate()).isGreaterThan(1e-5); // the default facet-row tolerance
+        assertThat(res.methodCounts().curvedOnPolygons()).isPositive();
+        double[] row = new double[res.facetCount()];
+        for (int i = 0; i < res.facetCount(); i++) {
+            res.copyFacetRow(i, row);
+            double sum = 0;
+            for (double v : row) {
+                assertThat(v).isFinite().isGreaterThanOrEqualTo(0);
+                sum += v;
+            }
+            assertThat(sum).as("row %d", i).isCloseTo(1, within(Math.min(0.05, res.maxRowErrorEstimate())));
+        }
+        double fbl = ClosedForms.coaxialDiscs(r, r, h);
+        assertThat(res.surfaceFactor(1, 2)).isCloseTo(fbl, within(1e-6 * fbl));
+    }
 }
