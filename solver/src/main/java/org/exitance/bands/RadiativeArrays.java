@@ -19,11 +19,16 @@ public final class RadiativeArrays {
     public final Enclosure enclosure;
     /** N. */
     public final int n;
-    /** F, N×N row-major; shared with {@link Enclosure#matrix()}, read only. */
+    /**
+     * F, N×N row-major; shared with {@link Enclosure#matrix()}, read only. Null when the
+     * enclosure holds its view factors compressed: then only {@link #operator} exists, and only
+     * the iterative paths can solve it.
+     */
     public final double[] viewFactors;
     /**
      * F as the operator the iterative band solves use ({@link RadiationOperator}): the dense
-     * {@link #viewFactors} wrapped, not copied. One per solve, so its pass count is the solve's.
+     * {@link #viewFactors} wrapped, not copied, or the compressed operator. One per solve, so its
+     * pass count is the solve's.
      */
     public final RadiationOperator operator;
     /** A_i (m²). */
@@ -44,8 +49,13 @@ public final class RadiativeArrays {
     public RadiativeArrays(Enclosure enclosure, List<ExternalSource> sources) {
         this.enclosure = enclosure;
         this.n = enclosure.size();
-        this.viewFactors = enclosure.matrix().sharedRowMajor();
-        this.operator = RadiationOperator.dense(viewFactors, n);
+        if (enclosure.matrix().isDense()) {
+            this.viewFactors = enclosure.matrix().sharedRowMajor();
+            this.operator = RadiationOperator.dense(viewFactors, n);
+        } else {
+            this.viewFactors = null;
+            this.operator = new CompressedRadiationOperator(enclosure.matrix().products());
+        }
         this.area = new double[n];
         this.environmentFactor = new double[n];
         for (int i = 0; i < n; i++) {

@@ -15,9 +15,24 @@ import org.exitance.geometry.viewfactor.ViewFactorOptions;
  * @param tolerance     target of the facet rows of the view factors: the estimated error of every
  *                      row, and for a closed geometry its deviation from 1, must stay within it
  *                      ({@code options.tolerance}, default {@value #DEFAULT_TOLERANCE})
+ * @param storage       how the facet view factors are held
  */
 public record CaseGeometry(Scene scene, ViewFactorOptions options, List<String> notes, boolean solveOnFacets,
-        double tolerance) {
+        double tolerance, Storage storage) {
+
+    /**
+     * How the facet view factors are held ({@code options.storage}): the dense N×N matrix, a
+     * compressed operator (hierarchical low-rank blocks, docs/view-factors.md), or the size rule.
+     */
+    public enum Storage {
+        AUTO, DENSE, COMPRESSED
+    }
+
+    /** With the default storage ({@link Storage#AUTO}). */
+    public CaseGeometry(Scene scene, ViewFactorOptions options, List<String> notes, boolean solveOnFacets,
+            double tolerance) {
+        this(scene, options, notes, solveOnFacets, tolerance, Storage.AUTO);
+    }
 
     /** Default view-factor tolerance. */
     public static final double DEFAULT_TOLERANCE = 1e-5;
@@ -32,6 +47,6 @@ public record CaseGeometry(Scene scene, ViewFactorOptions options, List<String> 
      */
     public CaseGeometry withTolerance(double tol) {
         return new CaseGeometry(scene, options.withPairTolerance(Math.min(options.pairTolerance(), Math.max(1e-12, tol / 100))),
-                notes, solveOnFacets, tol);
+                notes, solveOnFacets, tol, storage);
     }
 }

@@ -63,7 +63,17 @@ final class GeometryReader {
                 default -> throw r.error("must be \"surfaces\" or \"facets\", got \"" + r.text() + "\"");
             };
         }
-        CaseGeometry cg = new CaseGeometry(scene, options, notes, onFacets, CaseGeometry.DEFAULT_TOLERANCE);
+        CaseGeometry.Storage storage = CaseGeometry.Storage.AUTO;
+        if (g.has("options") && g.field("options").has("storage")) {
+            JsonCursor r = g.field("options").field("storage");
+            storage = switch (r.text()) {
+                case "auto" -> CaseGeometry.Storage.AUTO;
+                case "dense" -> CaseGeometry.Storage.DENSE;
+                case "compressed" -> CaseGeometry.Storage.COMPRESSED;
+                default -> throw r.error("must be \"auto\", \"dense\" or \"compressed\", got \"" + r.text() + "\"");
+            };
+        }
+        CaseGeometry cg = new CaseGeometry(scene, options, notes, onFacets, CaseGeometry.DEFAULT_TOLERANCE, storage);
         if (g.has("options") && g.field("options").has("tolerance")) {
             cg = cg.withTolerance(g.field("options").field("tolerance").positiveWithin(Limits.VIEW_FACTOR_TOLERANCE));
         }
@@ -251,7 +261,8 @@ final class GeometryReader {
     }
 
     private static ViewFactorOptions options(JsonCursor o) throws CaseException {
-        o.allowOnly("threads", "tolerance", "pairTolerance", "obstruction", "closure", "visibilityOrder", "resolution");
+        o.allowOnly("threads", "tolerance", "pairTolerance", "obstruction", "closure", "visibilityOrder", "resolution",
+                "storage");
         ViewFactorOptions v = ViewFactorOptions.defaults();
         if (o.has("threads")) {
             v = v.withThreads(o.field("threads").wholeWithin(Limits.THREADS));

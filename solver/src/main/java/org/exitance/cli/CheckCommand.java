@@ -47,7 +47,7 @@ final class CheckCommand implements Callable<Integer> {
                 + Numbers.temperature(e.environment().temperatureK()) + " K"));
         double worstRow = 0;
         double worstRec = 0;
-        for (int i = 0; i < e.size(); i++) {
+        for (int i = 0; i < e.size() && e.matrix().isDense(); i++) {
             double sum = 0;
             for (int j = 0; j < e.size(); j++) {
                 sum += e.viewFactor(i, j);
@@ -59,8 +59,12 @@ final class CheckCommand implements Callable<Integer> {
             }
             worstRow = Math.max(worstRow, e.environment() == null ? Math.abs(1 - sum) : Math.max(0, sum - 1));
         }
-        out.println("  view factors: worst row-sum error " + Numbers.small(worstRow)
-                + ", worst relative reciprocity error " + Numbers.small(worstRec));
+        if (e.matrix().isDense()) {
+            out.println("  view factors: worst row-sum error " + Numbers.small(worstRow)
+                    + ", worst relative reciprocity error " + Numbers.small(worstRec));
+        } else {
+            out.println("  view factors: " + e.matrix().products().description());
+        }
         BandSet given = CaseSolver.givenBands(c.model(), null);
         BandSet bands = given != null ? given : org.exitance.bands.DefaultBandRule.derive(c.model());
         List<Band> list = bands.bands();

@@ -82,6 +82,10 @@ final class ExportOptions {
             throw new UserError(c.file() + ": --vtk needs a case with a \"geometry\" (it writes the facets)",
                     ExitCodes.BAD_INPUT);
         }
+        if (conductance && !c.model().enclosure().matrix().isDense()) {
+            throw new UserError(c.file() + ": --conductance needs the pair exchange, which needs the dense facet view"
+                    + " factors; this model holds them compressed (geometry.options.storage)", ExitCodes.BAD_INPUT);
+        }
         if (csvDir != null && rule().applies(c.model().enclosure().size())) {
             OutputTarget.check(csvDir.resolve(PAIRS), force);
         }

@@ -85,11 +85,32 @@ final class Runs {
                     + (names.isEmpty() ? " (the case has none)" : " (the case has: " + String.join(", ", names) + ")"),
                     ExitCodes.BAD_INPUT);
         }
+        requireDenseWhereNeeded(c, choice, pairs);
         if (choice == org.exitance.thermal.SolverChoice.ITERATIVE && c.model().enclosure().hasWindows()) {
             throw new UserError(c.file() + ": --solver iterative: the enclosure has windows, whose coupling conjugate"
                     + " gradients cannot solve (use direct or newton-krylov)", ExitCodes.BAD_INPUT);
         }
         return guarded(c, () -> CaseSolver.solveAll(c.model(), override, only, bandTolerance, choice, pairs));
+    }
+
+    /**
+     * A model whose facet view factors are held compressed has no N×N matrix: only the iterative
+     * solver works on it, and the pair exchange (built from dense Gebhart factors) does not exist.
+     */
+    static void requireDenseWhereNeeded(PreparedCase c, org.exitance.thermal.SolverChoice choice,
+                                        org.exitance.thermal.PairExchangeRule pairs) {
+        if (c.model().enclosure().matrix().isDense()) {
+            return;
+        }
+        if (choice != null && choice != org.exitance.thermal.SolverChoice.ITERATIVE) {
+            throw new UserError(c.file() + ": --solver " + choice.label() + ": the facet view factors are held"
+                    + " compressed (geometry.options.storage), which only the iterative solver can use", ExitCodes.BAD_INPUT);
+        }
+        if (pairs == org.exitance.thermal.PairExchangeRule.SURFACES || pairs == org.exitance.thermal.PairExchangeRule.FACETS) {
+            throw new UserError(c.file() + ": --exchange: the pair exchange needs the dense facet view factors, and this"
+                    + " model holds them compressed (geometry.options.storage; use --exchange auto or off)",
+                    ExitCodes.BAD_INPUT);
+        }
     }
 
     static <T> T guarded(PreparedCase c, java.util.function.Supplier<T> work) {

@@ -112,16 +112,18 @@ final class ViewFactorsCommand implements Callable<Integer> {
         t.render(0).forEach(out::println);
         out.println("  (Leaving: the share that leaves the geometry, to the environment in a solve)");
         out.println();
-        out.println("Closure (facet rows): largest |1 − Σ F| " + Numbers.small(v.maxRowSumDeviation()) + " (row "
-                + v.worstRow() + "); largest excess above 1 " + Numbers.small(v.maxRowSumExcess())
-                + "; largest reciprocity error " + Numbers.small(v.maxReciprocityError()));
+        out.println("Closure (facet rows" + (v.compressed() ? ", before the scaling" : "") + "): largest |1 − Σ F| "
+                + Numbers.small(v.maxRowSumDeviation()) + " (row " + v.worstRow() + "); largest excess above 1 "
+                + Numbers.small(v.maxRowSumExcess()) + "; largest reciprocity error "
+                + (v.compressed() ? "none (one stored triangle)" : Numbers.small(v.maxReciprocityError())));
         out.println("Error estimate: largest facet row " + Numbers.small(v.maxRowErrorEstimate())
-                + " (sum of its pairs' estimates)");
+                + (v.compressed() ? " (compression and closure, from exact rows sampled, plus the pairs' own estimates)"
+                : " (sum of its pairs' estimates)"));
         out.println("Tolerance " + Numbers.small(c.viewFactorTolerance()) + " on facet rows: "
                 + (c.shortfall() == null ? "met" : "NOT met (" + c.shortfall() + ")"));
         out.println("Methods: " + v.methodSummary());
         out.println("Closure enforcement: " + v.smoothing());
-        out.println("Geometry hash: " + v.geometryHash());
+        out.println("Geometry hash: " + v.geometryHash().replace("-compressed", " (compressed operator)"));
     }
 
     private static void writeCsv(ComputedViewFactors v, PrintStream ps) {

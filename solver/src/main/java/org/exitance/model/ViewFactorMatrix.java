@@ -9,14 +9,57 @@ package org.exitance.model;
  * caller must not touch it afterwards). Every layer above (the enclosure, the solver's arrays,
  * the band networks) shares this one array read-only, through {@link #sharedRowMajor()}: at
  * 10,000 facets one copy is 800 MB, so no layer makes its own.
+ *
+ * <p>Past the dense wall the matrix is held compressed ({@link #compressed}): only its products
+ * exist ({@link #products()}), and what needs single entries or the whole array ({@link #get},
+ * {@link #sharedRowMajor}, {@link #toRows}) throws {@link DenseOnly}; the layers that would call
+ * them refuse such a model first, with a message for the user.
  */
 public final class ViewFactorMatrix {
     private final int n;
     private final double[] data;
+    private final ViewFactorProducts products;
+    private double[] rowSums;
 
     private ViewFactorMatrix(double[] data, int n) {
         this.n = n;
         this.data = data;
+        this.products = null;
+    }
+
+    private ViewFactorMatrix(ViewFactorProducts products) {
+        this.n = products.size();
+        this.data = null;
+        this.products = products;
+    }
+
+    /** What needs the entries of a matrix that is held compressed. */
+    public static final class DenseOnly extends UnsupportedOperationException {
+        private static final long serialVersionUID = 1L;
+
+        DenseOnly(String what) {
+            super(what + " needs the dense view-factor matrix, which this model holds compressed"
+                    + " (geometry.options.storage)");
+        }
+    }
+
+    /**
+     * A matrix held as a compressed operator (not copied).
+     *
+     * @param products the operator; shared, not modified
+     */
+    public static ViewFactorMatrix compressed(ViewFactorProducts products) {
+        return new ViewFactorMatrix(products);
+    }
+
+    /** Whether the entries are held (false: only products, {@link #products()}). */
+    public boolean isDense() {
+        return products == null;
+    }
+
+    /** The compressed operator, or null for a dense matrix. */
+    public ViewFactorProducts products() {
+        return products;
     }
 
     /**
@@ -59,11 +102,22 @@ public final class ViewFactorMatrix {
 
     /** F_ij. */
     public double get(int i, int j) {
+        if (data == null) {
+            throw new DenseOnly("a single view factor");
+        }
         return data[i * n + j];
     }
 
     /** Σ_j F_ij, summed in column order. */
     public double rowSum(int i) {
+        if (data == null) {
+            synchronized (this) {
+                if (rowSums == null) {
+                    rowSums = products.rowSums();
+                }
+            }
+            return rowSums[i];
+        }
         double s = 0;
         int row = i * n;
         for (int j = 0; j < n; j++) {
@@ -77,11 +131,17 @@ public final class ViewFactorMatrix {
      * networks, linear solvers) that must not copy 8·N² bytes.
      */
     public double[] sharedRowMajor() {
+        if (data == null) {
+            throw new DenseOnly("the row-major view-factor array");
+        }
         return data;
     }
 
     /** A copy as rows. */
     public double[][] toRows() {
+        if (data == null) {
+            throw new DenseOnly("the view-factor matrix as rows");
+        }
         double[][] out = new double[n][n];
         for (int i = 0; i < n; i++) {
             System.arraycopy(data, i * n, out[i], 0, n);
@@ -93,6 +153,9 @@ public final class ViewFactorMatrix {
     public ViewFactorMatrix permuted(int[] order) {
         if (order.length != n) {
             throw new IllegalArgumentException("permutation of length " + order.length + " for " + n + " surfaces");
+        }
+        if (data == null) {
+            return new ViewFactorMatrix(new PermutedProducts(products, order));
         }
         double[] d = new double[data.length];
         for (int a = 0; a < n; a++) {

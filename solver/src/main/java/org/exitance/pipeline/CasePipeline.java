@@ -61,7 +61,7 @@ public final class CasePipeline {
             RadiationCase model = surfaceModel(d, f, SourceIncidence.place(d.sources(), null, null));
             return new PreparedCase(d, model, warnings, null, null, Double.NaN);
         }
-        ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets());
+        ComputedViewFactors computed = ViewFactorStage.obtain(d.file(), g, request, g.solveOnFacets(), open);
         String shortfall = ViewFactorAccuracy.shortfall(computed, open, g.tolerance());
         if (shortfall != null) {
             warnings.add(shortfall);

@@ -23,6 +23,7 @@ import java.util.List;
  * @param seconds             compute time (s); 0 when loaded from the cache
  * @param fromCache           whether the numbers came from the cache
  * @param facets              facet-level view factors when the case is solved on facets, else null
+ *                            (their {@code compressed} operator when the geometry is held compressed)
  */
 public record ComputedViewFactors(List<String> surfaceNames, double[] areasM2, double[][] matrix,
                                   double[] environmentFactors, int facetCount, double maxRowSumDeviation,
@@ -32,18 +33,36 @@ public record ComputedViewFactors(List<String> surfaceNames, double[] areasM2, d
                                   boolean fromCache, FacetFactors facets) {
 
     /**
-     * Facet-level view factors.
+     * Facet-level view factors: the dense matrix, or the compressed operator.
      *
      * @param areasM2      facet areas (m²), scene order
      * @param surfaceIndex index into surfaceNames of each facet's surface
-     * @param matrix       F between facets, row-major n × n
+     * @param matrix       F between facets, row-major n × n; null when held compressed
+     * @param compressed   F between facets as a compressed operator (scene order); null when dense
      */
-    public record FacetFactors(double[] areasM2, int[] surfaceIndex, double[] matrix) {
+    public record FacetFactors(double[] areasM2, int[] surfaceIndex, double[] matrix,
+                               org.exitance.model.ViewFactorProducts compressed) {
+        /** Dense facet factors. */
+        public FacetFactors(double[] areasM2, int[] surfaceIndex, double[] matrix) {
+            this(areasM2, surfaceIndex, matrix, null);
+        }
+
+        /** Facet factors held as a compressed operator. */
+        static FacetFactors compressed(double[] areasM2, int[] surfaceIndex,
+                                       org.exitance.model.ViewFactorProducts operator) {
+            return new FacetFactors(areasM2, surfaceIndex, null, operator);
+        }
+
         public int count() {
             return areasM2.length;
         }
     }
     public ComputedViewFactors {
         surfaceNames = List.copyOf(surfaceNames);
+    }
+
+    /** Whether the view factors came from a compressed operator (no dense facet matrix exists). */
+    public boolean compressed() {
+        return geometryHash.endsWith("-compressed");
     }
 }

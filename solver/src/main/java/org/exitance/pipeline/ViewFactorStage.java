@@ -70,7 +70,18 @@ public final class ViewFactorStage {
      */
     static ComputedViewFactors obtain(Path caseFile, CaseGeometry g, Request req, boolean facets)
             throws CaseException {
-        String hash = org.exitance.geometry.viewfactor.GeometryHash.of(g.scene(), g.options());
+        return obtain(caseFile, g, req, facets, false);
+    }
+
+    /**
+     * @param open whether an environment takes what the rows leave (a compressed operator is then
+     *             not closed by scaling)
+     */
+    static ComputedViewFactors obtain(Path caseFile, CaseGeometry g, Request req, boolean facets, boolean open)
+            throws CaseException {
+        boolean compressed = CompressedStage.chosen(g);
+        String hash = org.exitance.geometry.viewfactor.GeometryHash.of(g.scene(), g.options())
+                + (compressed ? "-compressed" : "");
         Path cache = cacheFile(caseFile);
         boolean useCache = req.useCache() && !facets;
         if (useCache) {
@@ -78,6 +89,13 @@ public final class ViewFactorStage {
             if (hit != null) {
                 return hit;
             }
+        }
+        if (compressed) {
+            ComputedViewFactors out = CompressedStage.compute(caseFile, g, req, open, facets);
+            if (useCache) {
+                write(cache, out);
+            }
+            return out;
         }
         int n = g.scene().facetCount();
         try {

@@ -6,7 +6,7 @@ package org.exitance.thermal;
  * rest depends on the {@link SolverChoice}:
  *
  * <ul>
- *   <li>F: 8N²;</li>
+ *   <li>F: 8N², or the compressed operator's bytes;</li>
  *   <li>direct and newton-krylov: one LU factor per band, 8N² each (all bands' factors live
  *       while the band loop of a property update does);</li>
  *   <li>direct: the blocked right-hand sides of one band, 8N·m, and the node sensitivities of
@@ -36,9 +36,17 @@ public final class MemoryEstimate {
      * @return the estimated peak bytes of the solve, F included
      */
     public static long bytes(int n, int unknown, int bands, SolverChoice choice) {
+        return bytes(n, unknown, bands, choice, 8L * n * n);
+    }
+
+    /**
+     * As {@link #bytes(int, int, int, SolverChoice)} with F held in {@code viewFactorBytes} (a
+     * compressed operator's own size instead of 8N²).
+     */
+    public static long bytes(int n, int unknown, int bands, SolverChoice choice, long viewFactorBytes) {
         long nn = (long) n * n;
         long mm = (long) unknown * unknown;
-        long total = 8 * nn + FIXED + 384L * n * bands;
+        long total = viewFactorBytes + FIXED + 384L * n * bands;
         switch (choice) {
             case DIRECT -> total += 8 * nn * bands + 8L * n * unknown + 8 * mm * bands + 16 * mm;
             case NEWTON_KRYLOV -> total += 8 * nn * bands + 8L * unknown * (KrylovStep.RESTART + 2);

@@ -154,10 +154,18 @@ public final class TemperatureSolver {
         List<Band> bands = bandSet.bands();
         double[] t = start;
         Counters counters = new Counters();
-        SolverChoice how = choice != null ? choice : SolverChoice.forCase(enc.size(), p.unknown.length, bands.size(),
-                enc.hasWindows(), Runtime.getRuntime().maxMemory());
+        boolean compressed = !enc.matrix().isDense();
+        SolverChoice how = choice != null ? choice : compressed ? SolverChoice.ITERATIVE
+                : SolverChoice.forCase(enc.size(), p.unknown.length, bands.size(), enc.hasWindows(),
+                        Runtime.getRuntime().maxMemory());
+        if (compressed && (how != SolverChoice.ITERATIVE || linear != null)) {
+            throw new IllegalArgumentException("the view factors are held compressed: only the iterative solver"
+                    + " (conjugate gradients on the operator) can solve this model, not " + how.label());
+        }
         RadiositySolver band = linear != null ? linear : how.radiositySolver(enc.size());
-        long estimate = MemoryEstimate.bytes(enc.size(), p.unknown.length, bands.size(), how);
+        long estimate = compressed
+                ? MemoryEstimate.bytes(enc.size(), p.unknown.length, bands.size(), how, enc.matrix().products().memoryBytes())
+                : MemoryEstimate.bytes(enc.size(), p.unknown.length, bands.size(), how);
         PeakHeap.reset();
         PropertyLoop properties = new PropertyLoop(p, radiationCase.settings(), band, absorption, how);
         if (grayStart && p.unknown.length > 0 && bands.size() > 1) {
@@ -172,7 +180,7 @@ public final class TemperatureSolver {
         SolveResult.Builder rb = assembled.toBuilder().solver(assembled.solver().withRun(how.label(),
                 counters.bandIterations, counters.krylovProducts, p.radiative.operator.passes(), estimate,
                 PeakHeap.bytes()));
-        if (pairs.applies(enc.size())) {
+        if (pairs.applies(enc.size()) && !compressed) { // the command line refuses an explicit request first
             rb.pairExchange(PairExchangeAssembler.of(p, loop, t));
         }
         SolveResult r = rb.build();

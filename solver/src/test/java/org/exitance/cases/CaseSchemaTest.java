@@ -64,7 +64,7 @@ class CaseSchemaTest {
 
     @TestFactory
     Stream<DynamicTest> everyShippedCaseIsValid() {
-        return ShippedCases.all().stream().map(f -> DynamicTest.dynamicTest(f.getFileName().toString(),
+        return Stream.concat(ShippedCases.all().stream(), ShippedCases.large().stream()).map(f -> DynamicTest.dynamicTest(f.getFileName().toString(),
                 () -> assertThat(errors(Files.readString(f))).as(f.toString()).isEmpty()));
     }
 

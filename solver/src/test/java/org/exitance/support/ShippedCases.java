@@ -47,6 +47,12 @@ public final class ShippedCases {
             "two-band-parallel-plates.json",
             "window-between-black-plates.json");
 
+    /**
+     * The benchmark cases of cases/large, by name: too large for the test suite to solve (the
+     * tests read and validate them; docs/performance.md gives their runs).
+     */
+    public static final List<String> LARGE = List.of("closed-box-50k-facets.json");
+
     private ShippedCases() {
     }
 
@@ -68,6 +74,11 @@ public final class ShippedCases {
     /** The pinned validation cases, after checking that cases/validation holds exactly these case files. */
     public static List<Path> validation() {
         return pinned(root().resolve("cases").resolve("validation"), VALIDATION);
+    }
+
+    /** The pinned benchmark cases, after checking that cases/large holds exactly these case files. */
+    public static List<Path> large() {
+        return pinned(root().resolve("cases").resolve("large"), LARGE);
     }
 
     /** Demo and validation cases, checked as above. */

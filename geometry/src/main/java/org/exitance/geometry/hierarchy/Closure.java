@@ -25,6 +25,10 @@ final class Closure {
     int iterations;
     double maxDeviation;
     double rowError;
+    /** max_i |Σ_j K̃_ij − A_i| / A_i before any scaling: the raw closure error of the compressed entries. */
+    double rawRowError = Double.NaN;
+    /** The facet (scene order) of the largest raw row error. */
+    int rawWorst;
     /** Why closure was not applied, or null. */
     String refused;
 
@@ -45,7 +49,14 @@ final class Closure {
                     refused = "a facet sees nothing (row sum " + sum + " m²): not a closed enclosure";
                     return;
                 }
-                rowError = Math.max(rowError, Math.abs(sum - op.area[p]) / op.area[p]);
+                double e = Math.abs(sum - op.area[p]) / op.area[p];
+                if (iterations == 0 && e > rowError) {
+                    rawWorst = op.tree.perm[p];
+                }
+                rowError = Math.max(rowError, e);
+            }
+            if (iterations == 0) {
+                rawRowError = rowError;
             }
             if (rowError <= ROW_TOLERANCE) {
                 break;

@@ -116,6 +116,75 @@ public final class CompressedOperator {
         }
     }
 
+    /**
+     * Selected rows of F' V, each row of K̃ formed from its blocks (O(N · rank) per row) and applied
+     * to V. For many rows (more than N/16) one full product is cheaper and is used instead.
+     *
+     * @param rows facets whose rows are wanted (scene order); not modified
+     * @param v N × b row-major in scene facet order; not modified
+     * @param b columns
+     * @param out rows.length × b row-major, row r for facet rows[r]; overwritten
+     */
+    public void multiplyViewFactorRows(int[] rows, double[] v, int b, double[] out) {
+        int n = size();
+        if (rows.length > n / 16) {
+            double[] all = new double[n * b];
+            multiplyViewFactors(v, b, all);
+            for (int r = 0; r < rows.length; r++) {
+                System.arraycopy(all, rows[r] * b, out, r * b, b);
+            }
+            return;
+        }
+        double[] x = new double[n * b];
+        for (int q = 0; q < n; q++) {
+            int j = tree.perm[q];
+            for (int c = 0; c < b; c++) {
+                x[q * b + c] = scale[q] * v[j * b + c];
+            }
+        }
+        double[] row = new double[n];
+        for (int r = 0; r < rows.length; r++) {
+            int p = positionOf[rows[r]];
+            java.util.Arrays.fill(row, 0);
+            addRow(p, row);
+            double f = scale[p] / area[p];
+            for (int c = 0; c < b; c++) {
+                double s = 0;
+                for (int q = 0; q < n; q++) {
+                    s += row[q] * x[q * b + c];
+                }
+                out[r * b + c] = f * s;
+            }
+        }
+    }
+
+    /**
+     * @return F'_ii, the self view factor of facet i (scene order): 0 for a flat facet, the
+     *         share a concave patch sends to itself
+     */
+    public double diagonal(int i) {
+        int p = positionOf[i];
+        int leaf = leafOf(p);
+        int node = tree.leaves[leaf];
+        for (int code : contributions[leaf]) {
+            Block blk = blocks.get(code >> 1);
+            if (blk.s == node && blk.t == node && blk.dense != null) {
+                int q = p - tree.start[node];
+                return scale[p] * scale[p] * blk.dense[q * blk.n + q] / area[p];
+            }
+        }
+        return 0;
+    }
+
+    /** @return Σ_j F'_ij per facet (scene order, a new array): 1 in a closed enclosure after closure */
+    public double[] rowSums() {
+        int n = size();
+        double[] one = new double[n], y = new double[n];
+        java.util.Arrays.fill(one, 1);
+        multiplyViewFactors(one, 1, y);
+        return y;
+    }
+
     /** y = K̃ x in tree order (no closure scaling); x not modified, y overwritten. */
     void multiplyTree(double[] x, int b, double[] y) {
         java.util.Arrays.fill(y, 0, size() * b, 0);

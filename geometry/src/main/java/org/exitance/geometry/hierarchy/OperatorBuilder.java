@@ -79,6 +79,7 @@ public final class OperatorBuilder {
         }
         if (closure.refused != null) {
             closure.rowError = rowSumError(op);
+            closure.rawRowError = closure.rowError;
         }
         RowSampler sample = new RowSampler(src, op, o.sampledRows(), threads);
         op.report = report(op, blocks, o, closure, sample, (System.nanoTime() - t0) * 1e-9, threads);
@@ -219,7 +220,8 @@ public final class OperatorBuilder {
         }
         return new OperatorReport(op.size(), near, far, zero, denseFar, far == 0 ? 0 : minRank,
                 far == 0 ? 0 : (double) rankSum / far, maxRank, op.bytes(), evaluations + sample.evaluations,
-                o.tolerance(), o.eta(), c.refused, c.iterations, c.maxDeviation, c.rowError, sample.rows,
-                sample.maxError, sample.rmsError, sample.estimate(c.maxDeviation), seconds, threads);
+                o.tolerance(), o.eta(), c.refused, c.iterations, c.maxDeviation, c.rowError, c.rawRowError, c.rawWorst, sample.rows,
+                sample.maxError, sample.rmsError, sample.estimate(c.maxDeviation), 2 * sample.maxPairError, seconds,
+                threads);
     }
 }

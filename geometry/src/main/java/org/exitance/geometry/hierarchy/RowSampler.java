@@ -21,6 +21,8 @@ final class RowSampler {
 
     final int rows;
     double maxError, rmsError;
+    /** Largest sampled Σ_j of the pair evaluator's own error estimates of a row (dimensionless). */
+    double maxPairError;
     long evaluations;
 
     RowSampler(PairSource src, CompressedOperator op, int wanted, int threads) {
@@ -28,21 +30,25 @@ final class RowSampler {
         int leaves = op.tree.leaves.length;
         rows = Math.min(wanted, leaves);
         double[] err = new double[rows];
+        double[] pairErr = new double[rows];
         ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
         try {
             pool.submit(() -> IntStream.range(0, rows).parallel().forEach(k -> {
                 int leaf = (int) ((long) k * leaves / rows);
                 int node = op.tree.leaves[leaf];
                 int p = op.tree.start[node] + (int) ((leaf * 7919L + op.tree.size(node) / 2) % op.tree.size(node));
-                err[k] = rowError(src.newPairs(), op, p);
+                double[] e = rowError(src.newPairs(), op, p);
+                err[k] = e[0];
+                pairErr[k] = e[1];
             })).join();
         } finally {
             pool.shutdown();
         }
         double s = 0;
-        for (double e : err) {
-            maxError = Math.max(maxError, e);
-            s += e * e;
+        for (int k = 0; k < rows; k++) {
+            maxError = Math.max(maxError, err[k]);
+            maxPairError = Math.max(maxPairError, pairErr[k]);
+            s += err[k] * err[k];
         }
         rmsError = rows == 0 ? 0 : Math.sqrt(s / rows);
         evaluations = (long) rows * n;
@@ -53,17 +59,21 @@ final class RowSampler {
         return 2 * maxError + 2 * maxScaleDeviation + maxScaleDeviation * maxScaleDeviation;
     }
 
-    /** @return Σ_j |F'_pj − F_pj| for the row at tree position p */
-    static double rowError(PairSource.Pairs pairs, CompressedOperator op, int p) {
+    /**
+     * @return {Σ_j |F'_pj − F_pj|, Σ_j of the evaluator's error estimates of F_pj} for the row at
+     *         tree position p (a new array)
+     */
+    static double[] rowError(PairSource.Pairs pairs, CompressedOperator op, int p) {
         int n = op.size();
         double[] row = new double[n];
         op.addRow(p, row);
         int[] perm = op.tree.perm;
-        double e = 0;
+        double e = 0, pe = 0;
         for (int q = 0; q < n; q++) {
             double exact = pairs.exchangeArea(perm[p], perm[q]);
             e += Math.abs(op.scale[p] * row[q] * op.scale[q] - exact);
+            pe += pairs.lastError();
         }
-        return e / op.area[p];
+        return new double[] {e / op.area[p], pe / op.area[p]};
     }
 }
