@@ -17,7 +17,7 @@ import org.exitance.geometry.hierarchy.OperatorReport;
 /**
  * The view factors of a large geometry as a compressed operator (docs/view-factors.md,
  * "Compressed operator"), never forming the N×N facet matrix: built by {@link OperatorBuilder}
- * with the block tolerance a tenth of the case's view-factor tolerance, closed by symmetric
+ * with the block tolerance a hundredth of the case's view-factor tolerance, closed by symmetric
  * scaling when the geometry is closed. The surface matrix is formed from it by products with the
  * surfaces' indicator vectors (A_S F_ST = Σ_{i∈S} (K' e_T)_i), so reports and the surface solve
  * read it as they read the dense path's.
@@ -32,6 +32,13 @@ final class CompressedStage {
      * 10,086 facets already took 55 s of its 60 s target (docs/performance.md).
      */
     static final int AUTO_ABOVE = 12_000;
+    /**
+     * The block tolerance of cross approximation as a share of the case's view-factor tolerance.
+     * A tenth was not enough: a 100,000-facet box of elongated facets (200 × 200 × 25 cells) had a
+     * sampled row error of 6.0e-6 and a closure change of 8.6e-6 at block tolerance 1e-6, an
+     * estimate of 2.1e-5 against the default tolerance 1e-5; a hundredth meets it (docs/performance.md).
+     */
+    static final double BLOCK_SHARE = 0.01;
     /** Surface columns per product when the surface matrix is formed. */
     private static final int COLUMNS = 32;
 
@@ -54,7 +61,7 @@ final class CompressedStage {
      */
     static ComputedViewFactors compute(Path caseFile, CaseGeometry g, ViewFactorStage.Request req, boolean open,
                                        boolean facets) throws CaseException {
-        double blockTolerance = Math.min(0.01, Math.max(1e-12, g.tolerance() / 10));
+        double blockTolerance = Math.min(0.01, Math.max(1e-12, g.tolerance() * BLOCK_SHARE));
         OperatorOptions o = OperatorOptions.defaults().withTolerance(blockTolerance).withClosed(!open)
                 .withThreads(g.options().threads());
         CompressedOperator op;
@@ -115,10 +122,13 @@ final class CompressedStage {
         }
         String methods = String.format(Locale.ROOT, "compressed operator: %d near blocks (exact), %d far blocks by"
                 + " cross approximation (ranks %d..%d, mean %.1f), %d exchanging nothing; %d pair evaluations"
-                + " (%.2f%% of the dense matrix's); %.1f MB (dense: %.1f MB); reciprocal by symmetric storage",
+                + " (%.2f%% of the dense matrix's); %.1f MB (dense: %.1f MB); reciprocal by symmetric storage;"
+                + " row error estimate %.2e from %d exact rows (largest sampled %.2e, doubled, plus the closure's"
+                + " change) and %.2e of the pairs' own estimates",
                 r.nearBlocks(), r.farBlocks() + r.denseFarBlocks(), r.minRank(), r.maxRank(), r.meanRank(),
                 r.zeroBlocks(), r.evaluations(), 100.0 * r.evaluations() / Math.max(1, 0.5 * n * (n - 1.0)),
-                r.bytes() / 1e6, r.denseBytes() / 1e6);
+                r.bytes() / 1e6, r.denseBytes() / 1e6, r.errorEstimate(), r.sampledRows(), r.maxRowError(),
+                r.pairErrorEstimate());
         String smoothing = r.closureNote() == null ? String.format(Locale.ROOT,
                 "closure by symmetric scaling: raw row error %.3g, largest change %.3g, in %d products",
                 r.rawRowSumError(), 2 * r.maxScaleDeviation() + r.maxScaleDeviation() * r.maxScaleDeviation(),

@@ -24,7 +24,9 @@ public final class ViewFactorAccuracy {
         if (v.maxRowErrorEstimate() > tolerance) {
             return "view-factor tolerance " + tol + " not met: the estimated error of a facet row is "
                     + String.format(Locale.ROOT, "%.3g", v.maxRowErrorEstimate())
-                    + "; refine the facets near obstructions or raise geometry.options.tolerance";
+                    + (v.compressed() ? "; it comes from the compressed operator (its blocks built to a hundredth of"
+                    + " the tolerance): hold the view factors dense (geometry.options.storage) or raise"
+                    + " geometry.options.tolerance" : "; refine the facets near obstructions or raise geometry.options.tolerance");
         }
         if (v.maxRowSumExcess() > tolerance) {
             return "view-factor tolerance " + tol + " not met: a facet row sums to "

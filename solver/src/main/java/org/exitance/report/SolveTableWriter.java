@@ -247,5 +247,13 @@ public final class SolveTableWriter {
                 + " W; linear residual " + Numbers.small(s.maxLinearResidual())
                 + (s.strategy().isEmpty() ? "" : " (" + s.strategy() + ", most band-solve iterations "
                 + java.util.Arrays.stream(s.bandIterations()).max().orElse(0) + ")"));
+        if (s.estimatedBytes() >= LARGE_BYTES) {
+            out.println(String.format(java.util.Locale.ROOT, "Memory: %.0f MB estimated before the solve, peak heap %.0f MB"
+                    + " (view factors included; the peak counts garbage not yet collected)", s.estimatedBytes() / 1e6,
+                    s.peakHeapBytes() / 1e6));
+        }
     }
+
+    /** From this estimated solve memory on, the text states the estimate and the measured peak. */
+    static final long LARGE_BYTES = 256L << 20;
 }

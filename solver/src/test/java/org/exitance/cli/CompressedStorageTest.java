@@ -36,6 +36,12 @@ class CompressedStorageTest {
 
     /** The cube's case: floor hot, roof, front, back fixed, the side walls adiabatic (a third of the facets). */
     static ObjectNode cube(String storage, int threads, boolean reversedSurfaces) throws Exception {
+        return cube(storage, threads, reversedSurfaces, 0.6);
+    }
+
+    /** @param coldEmissivity ε of roof, front and back (0.02: nearly perfectly reflecting, ρ → 1) */
+    static ObjectNode cube(String storage, int threads, boolean reversedSurfaces, double coldEmissivity)
+            throws Exception {
         String surfaces = "{\"name\": \"floor\", \"material\": \"hot\", \"temperature_K\": 1200},"
                 + "{\"name\": \"roof\", \"material\": \"cold\", \"temperature_K\": 500},"
                 + "{\"name\": \"front\", \"material\": \"cold\", \"temperature_K\": 700},"
@@ -43,7 +49,7 @@ class CompressedStorageTest {
                 + "{\"name\": \"side_walls\", \"material\": \"refractory\", \"adiabatic\": true,"
                 + " \"initialTemperature_K\": 900}";
         ObjectNode c = (ObjectNode) JSON.readTree("{\"title\": \"cube on facets (invented test data)\","
-                + "\"materials\": {\"hot\": {\"emissivity\": 0.85}, \"cold\": {\"emissivity\": 0.6},"
+                + "\"materials\": {\"hot\": {\"emissivity\": 0.85}, \"cold\": {\"emissivity\": " + coldEmissivity + "},"
                 + " \"refractory\": {\"emissivity\": 0.45}},"
                 + "\"geometry\": {\"parts\": [{\"box\": {\"min_m\": [0, 0, 0], \"max_m\": [1, 1, 1], \"divisions\": ["
                 + DIVISIONS + ", " + DIVISIONS + ", " + DIVISIONS + "], \"facing\": \"inward\", \"faces\": {\"bottom\":"
@@ -94,6 +100,20 @@ class CompressedStorageTest {
      */
     @Test
     void theCompressedSolveGivesTheDenseAnswerWithinItsStatedRowError() {
+        agreeWithinTheStatedRowError(dense, compressed);
+    }
+
+    /** The same with walls that reflect 98 % (ρ → 1: conjugate gradients converge slowly, and must still). */
+    @Test
+    void nearlyPerfectReflectorsToo() throws Exception {
+        JsonNode d = solve(write("dense-shiny.json", cube("dense", 0, false, 0.02)), "--no-audit");
+        JsonNode c = solve(write("compressed-shiny.json", cube("compressed", 0, false, 0.02)), "--no-audit");
+        agreeWithinTheStatedRowError(d, c);
+        assertThat(c.get("solver").get("maxLinearIterations").asInt())
+                .isGreaterThan(compressed.get("solver").get("maxLinearIterations").asInt());
+    }
+
+    private static void agreeWithinTheStatedRowError(JsonNode dense, JsonNode compressed) {
         assertThat(compressed.get("solver").get("strategy").asText()).isEqualTo("iterative");
         double estimate = compressed.get("viewFactorAccuracy").get("maxRowErrorEstimate").asDouble();
         assertThat(estimate).isPositive().isLessThan(1e-5);
