@@ -27,11 +27,12 @@ import org.exitance.geometry.hierarchy.OperatorReport;
  */
 final class CompressedStage {
     /**
-     * Facets from which {@code auto} storage compresses: at 12,000 facets the dense matrix is
-     * 1.15 GB per copy (the facet solve keeps up to three), while the measured dense solve of
-     * 10,086 facets already took 55 s of its 60 s target (docs/performance.md).
+     * Facets from which {@code auto} storage compresses. Measured through the tool on the closed
+     * benchmark cube, one band, a third unknown, no audit (docs/performance.md): at 4,056 facets
+     * dense 15.7 s and 0.86 GB resident against compressed 20.8 s and 0.64 GB; at 10,086 dense
+     * 50.9 s and 2.06 GB against compressed 36.0 s and 0.65 GB. The paths cross between the two.
      */
-    static final int AUTO_ABOVE = 12_000;
+    static final int AUTO_ABOVE = 8_000;
     /**
      * The block tolerance of cross approximation as a share of the case's view-factor tolerance.
      * A tenth was not enough: a 100,000-facet box of elongated facets (200 × 200 × 25 cells) had a

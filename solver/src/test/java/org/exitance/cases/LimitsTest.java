@@ -135,7 +135,7 @@ class LimitsTest {
     void aModelTooLargeForAnyHeapIsRefusedOnTheCommandLineWithExitTwo() {
         // 2 (300·300 + 300·20 + 300·20) = 204,000 facets would exceed the facet limit; 2 (200·200 + 2·200·25)
         // = 100,000 facets is the limit itself, and their matrix (8e10 bytes) exceeds any test heap
-        // held dense on request: compressed (the default from 12,000 facets) they would fit
+        // held dense on request: compressed (the default from 8,000 facets) they would fit
         ObjectNode c = boxCase(200, 200, 25);
         ((ObjectNode) c.get("geometry")).putObject("options").put("storage", "dense");
         Path file = RepoCases.write(dir, "too-large.json", c);

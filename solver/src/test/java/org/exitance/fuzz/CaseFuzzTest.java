@@ -31,7 +31,8 @@ import org.junit.jupiter.api.io.TempDir;
  * OBJ files they refer to are mutated many times ({@link JsonMutator}, {@link SideFileMutator})
  * and each mutant is run through the command line in process (reader, geometry, solver, writers).
  * Every run must keep the promises of {@link RunJudge} within a time limit. Geometry is made cheap
- * first (division counts at most 2, 4 around an axis), so that mutants stay fast to solve.
+ * first (division counts at most 2, 4 around an axis), so that mutants stay fast to solve. A case
+ * solved on facets is mutated twice over, once with its facet view factors held compressed.
  *
  * <p>System properties: {@code exitance.fuzz.seed} (default {@value #DEFAULT_SEED}),
  * {@code exitance.fuzz.count} (default {@value #DEFAULT_COUNT}), {@code exitance.fuzz.only} (one
@@ -225,6 +226,13 @@ class CaseFuzzTest {
                     List<String> sideKeys = new ArrayList<>();
                     findFileKeys(tree, "", sideKeys);
                     out.add(new Base(p.getFileName().toString(), to, tree, sideKeys));
+                    if (tree.at("/geometry/options/resolution").asText().equals("facets")) {
+                        // the same case with its facet view factors held compressed (geometry.options.storage)
+                        ObjectNode compressed = tree.deepCopy();
+                        ((ObjectNode) compressed.at("/geometry/options")).put("storage", "compressed");
+                        out.add(new Base(p.getFileName().toString().replace(".json", "-compressed.json"), to,
+                                compressed, sideKeys));
+                    }
                 }
             }
         }
