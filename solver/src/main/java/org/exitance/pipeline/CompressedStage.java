@@ -137,7 +137,7 @@ final class CompressedStage {
         String hash = org.exitance.geometry.viewfactor.GeometryHash.of(g.scene(), g.options()) + "-compressed";
         return new ComputedViewFactors(names, surfaceArea, matrix, env, n, deviation, Math.max(0, excess), 0,
                 worstName(names, surfaceOf, worst), r.totalErrorEstimate(), methods, smoothing, hash, r.buildSeconds(),
-                false, facets ? ComputedViewFactors.FacetFactors.compressed(facetArea, surfaceOf,
+                false, facets ? ComputedViewFactors.FacetFactors.ofOperator(facetArea, surfaceOf,
                         new OperatorProducts(op)) : null);
     }
 

@@ -48,7 +48,7 @@ public record ComputedViewFactors(List<String> surfaceNames, double[] areasM2, d
         }
 
         /** Facet factors held as a compressed operator. */
-        static FacetFactors compressed(double[] areasM2, int[] surfaceIndex,
+        static FacetFactors ofOperator(double[] areasM2, int[] surfaceIndex,
                                        org.exitance.model.ViewFactorProducts operator) {
             return new FacetFactors(areasM2, surfaceIndex, null, operator);
         }

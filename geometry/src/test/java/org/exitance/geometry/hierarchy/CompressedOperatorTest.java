@@ -13,6 +13,7 @@ import org.exitance.geometry.Surface;
 import org.exitance.geometry.Vec3;
 import org.exitance.geometry.shape.Enclosures;
 import org.exitance.geometry.shape.Facing;
+import org.exitance.geometry.shape.Shapes;
 import org.exitance.geometry.viewfactor.ClosedForms;
 import org.exitance.geometry.viewfactor.ProgressListener;
 import org.exitance.geometry.viewfactor.ViewFactorCalculator;
@@ -157,6 +158,61 @@ class CompressedOperatorTest {
         assertThat(relativeProductError(op, f, 2, 4)).isLessThan(op.report().tolerance());
         assertThat(max(rowErrors(op, f))).as("measured worst row (l1)").isLessThan(op.report().errorEstimate());
         assertRowsSumToOne(op);
+    }
+
+    /**
+     * The self factors of exact concave patches (the wall of a closed cylinder, 16 × 2 patches),
+     * read from the near blocks, are the dense matrix's (closure scaling included, within the
+     * stated estimate); flat patches give 0.
+     */
+    @Test
+    void selfFactorsOfConcavePatchesComeFromTheNearBlocks() {
+        List<Surface> s = new ArrayList<>();
+        s.add(new Surface("wall", Shapes.cylinderWall(Vec3.ZERO, Vec3.Z, 0.5, 1, 16, 2,
+                Facing.INWARD)));
+        s.add(new Surface("base", Shapes.disc(Vec3.ZERO, Vec3.Z, 0.5, 1, 8)));
+        s.add(new Surface("lid", Shapes.disc(new Vec3(0, 0, 1), new Vec3(0, 0, -1), 0.5, 1,
+                8)));
+        Scene cylinder = Scene.of(s);
+        ViewFactorOptions vf = ViewFactorOptions.defaults();
+        double[] f = dense(ViewFactorCalculator.compute(cylinder, vf, ProgressListener.NONE));
+        CompressedOperator op = OperatorBuilder.build(cylinder, vf, options().withLeafSize(8), ProgressListener.NONE);
+        int n = op.size(), concave = 0;
+        for (int i = 0; i < n; i++) {
+            assertThat(op.diagonal(i)).as("F_ii of facet %d", i).isCloseTo(f[i * n + i],
+                    within(op.report().errorEstimate()));
+            concave += f[i * n + i] > 1e-3 ? 1 : 0;
+        }
+        assertThat(concave).isEqualTo(32);
+    }
+
+    /**
+     * Selected rows of F'V, formed row by row from the blocks (few rows) or picked from one full
+     * product (many rows), equal the full product's rows to rounding.
+     */
+    @Test
+    void selectedRowsAreTheFullProductsRows() {
+        int n = closedOp.size(), b = 3;
+        double[] v = new double[n * b];
+        java.util.Random r = new java.util.Random(7);
+        for (int k = 0; k < v.length; k++) {
+            v[k] = r.nextDouble() - 0.5;
+        }
+        double[] full = new double[n * b];
+        closedOp.multiplyViewFactors(v, b, full);
+        for (int count : new int[] {5, n / 2}) {
+            int[] rows = new int[count];
+            for (int k = 0; k < count; k++) {
+                rows[k] = (int) ((k * 7919L) % n);
+            }
+            double[] w = new double[count * b];
+            closedOp.multiplyViewFactorRows(rows, v, b, w);
+            for (int k = 0; k < count; k++) {
+                for (int c = 0; c < b; c++) {
+                    assertThat(w[k * b + c]).isCloseTo(full[rows[k] * b + c], within(1e-13));
+                }
+            }
+        }
     }
 
     @Test
