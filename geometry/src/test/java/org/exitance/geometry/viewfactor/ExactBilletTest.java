@@ -50,6 +50,7 @@ class ExactBilletTest {
         double reference = ClosedForms.coaxialDiscs(R, R, H) - hidden / area;
         assertThat(hidden / area).as("the shadow matters").isGreaterThan(1e-2);
         double f = r.surfaceFactor(surface(r, "lid"), surface(r, "base"));
+        System.out.printf("lid→base %.12f reference %.12f difference %.2e%n", f, reference, f - reference);
         assertThat(Math.abs(f - reference)).as("F lid→base %.10f, reference %.10f", f, reference).isLessThan(1e-6);
     }
 
@@ -69,6 +70,7 @@ class ExactBilletTest {
         double reference = (Math.PI * R * R * (1 - ClosedForms.coaxialDiscs(R, R, H)) - hidden) / wall;
         assertThat(hidden / wall).isGreaterThan(1e-3);
         double f = r.surfaceFactor(surface(r, "wall"), surface(r, "base"));
+        System.out.printf("wall→base %.12f reference %.12f difference %.2e%n", f, reference, f - reference);
         assertThat(Math.abs(f - reference)).as("F wall→base %.10f, reference %.10f", f, reference).isLessThan(1e-6);
     }
 
@@ -89,6 +91,7 @@ class ExactBilletTest {
         double reference = 1 - 2 * toDisc - hidden / wall;
         assertThat(hidden / wall).isGreaterThan(1e-3);
         double f = r.surfaceFactor(surface(r, "wall"), surface(r, "wall"));
+        System.out.printf("wall→wall %.12f reference %.12f difference %.2e%n", f, reference, f - reference);
         assertThat(Math.abs(f - reference)).as("F wall→wall %.10f, reference %.10f", f, reference).isLessThan(1e-6);
     }
 
@@ -111,6 +114,7 @@ class ExactBilletTest {
             }
             worst = Math.max(worst, row);
         }
+        System.out.printf("tenfold tighter: largest row change %.2e, estimate %.2e%n", worst, r.maxRowErrorEstimate());
         assertThat(worst).isPositive().isLessThan(r.maxRowErrorEstimate());
     }
 
