@@ -45,6 +45,33 @@ final class AxialProfile {
         out[off + 6] = plane ? 1 : Math.sqrt(1 + p.shapeB() * p.shapeB());
     }
 
+    /**
+     * The canonical azimuth ranges of a pair: a's [0, α], b's [g0, g1] (either order) shifted by
+     * whole turns to start in [0, 2π) (the integrand is periodic in ψ), and replaced by its mirror
+     * image across the azimuth α/2 (a onto itself, b onto [α − hi, α − lo], the same exchange
+     * area) when that starts earlier; all rounded to 2⁻⁴⁰ rad.
+     *
+     * @param out receives 0, α, lo, hi (rad) (modified)
+     */
+    static void azimuths(double alphaIn, double g0, double g1, double[] out) {
+        double turn = 0x1p-40, alpha = round(alphaIn, turn);
+        double lo = round(wrap(Math.min(g0, g1)), turn), hi = lo + round(Math.abs(g1 - g0), turn);
+        double mirrored = round(wrap(alpha - hi), turn);
+        if (mirrored < lo) {
+            hi = mirrored + (hi - lo);
+            lo = mirrored;
+        }
+        out[0] = 0;
+        out[1] = alpha;
+        out[2] = lo;
+        out[3] = hi;
+    }
+
+    /** @return the angle shifted by whole turns into [0, 2π) (rad) */
+    private static double wrap(double x) {
+        return x - 2 * Math.PI * Math.floor(x / (2 * Math.PI));
+    }
+
     static double rho(double[] q, int off, double u) {
         return q[off] + q[off + 1] * u;
     }
@@ -67,6 +94,18 @@ final class AxialProfile {
     static double tolerance(double tol) {
         int e = Math.getExponent(tol);
         return Math.scalb(Math.rint(Math.scalb(tol, 8 - e)), e - 8);
+    }
+
+    /**
+     * @return the key of the numbers of first and second (all) and of last[0, lastCount) (none
+     *         modified)
+     */
+    static Key key(double[] first, double[] second, double[] last, int lastCount) {
+        double[] v = new double[first.length + second.length + lastCount];
+        System.arraycopy(first, 0, v, 0, first.length);
+        System.arraycopy(second, 0, v, first.length, second.length);
+        System.arraycopy(last, 0, v, first.length + second.length, lastCount);
+        return new Key(v, v.length);
     }
 
     /** The numbers a result depends on, compared bit for bit. Immutable. */

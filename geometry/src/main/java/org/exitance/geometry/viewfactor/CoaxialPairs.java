@@ -126,21 +126,7 @@ final class CoaxialPairs {
         double sB = Math.signum(b.frame(9) * axis[3] + b.frame(10) * axis[4] + b.frame(11) * axis[5]);
         double beta = Math.atan2(b.frame(3) * a.frame(6) + b.frame(4) * a.frame(7) + b.frame(5) * a.frame(8),
                 b.frame(3) * a.frame(3) + b.frame(4) * a.frame(4) + b.frame(5) * a.frame(5));
-        double g0 = beta + sB * b.phi0() - a.phi0(), g1 = beta + sB * b.phi1() - a.phi0(), turn = 0x1p-40;
-        // b's range shifted by whole turns to start in [0, 2π) (the integrand is periodic in ψ)
-        double alpha = AxialProfile.round(a.phi1() - a.phi0(), turn);
-        double lo = AxialProfile.round(wrap(Math.min(g0, g1)), turn), hi = lo + AxialProfile.round(Math.abs(g1 - g0), turn);
-        // and the mirror image across the azimuth α/2 (a onto itself, b onto [α − hi, α − lo]),
-        // which has the same exchange area: the one of the two with the smaller start is taken
-        double mirrored = AxialProfile.round(wrap(alpha - hi), turn);
-        if (mirrored < lo) {
-            hi = mirrored + (hi - lo);
-            lo = mirrored;
-        }
-        azimuths[0] = 0;
-        azimuths[1] = alpha;
-        azimuths[2] = lo;
-        azimuths[3] = hi;
+        AxialProfile.azimuths(a.phi1() - a.phi0(), beta + sB * b.phi0() - a.phi0(), beta + sB * b.phi1() - a.phi0(), azimuths);
         psi.set(azimuths[0], azimuths[1], azimuths[2], azimuths[3], BUDGET);
         double zLo = Double.MAX_VALUE, zHi = -Double.MAX_VALUE, rLo = Double.MAX_VALUE;
         for (int q = 0; q <= B; q += B) {
@@ -168,10 +154,6 @@ final class CoaxialPairs {
         nSolids = n;
     }
 
-    /** @return the angle shifted by whole turns into [0, 2π) (rad) */
-    private static double wrap(double x) {
-        return x - 2 * Math.PI * Math.floor(x / (2 * Math.PI));
-    }
 
     /**
      * For a prepared pair whose solids span its heights ({@link RoundSolids#admits}): see
@@ -193,19 +175,8 @@ final class CoaxialPairs {
      */
     double exchangeArea(double tol) {
         tolerance = AxialProfile.tolerance(tol);
-        int n = 0;
-        double[] key = new double[2 * B + 9 + 3 * nSolids];
-        for (double x : prof) {
-            key[n++] = x;
-        }
-        for (double x : new double[] {pa.u0(), pa.u1(), pb.u0(), pb.u1(), azimuths[0], azimuths[1], azimuths[2], azimuths[3],
-            tolerance}) {
-            key[n++] = x;
-        }
-        for (int k = 0; k < 3 * nSolids; k++) {
-            key[n++] = frameSolids[k];
-        }
-        AxialProfile.Key k = new AxialProfile.Key(key, n);
+        AxialProfile.Key k = AxialProfile.key(prof, new double[] {pa.u0(), pa.u1(), pb.u0(), pb.u1(), azimuths[0],
+            azimuths[1], azimuths[2], azimuths[3], tolerance}, frameSolids, 3 * nSolids);
         double[] known = round.results.get(k);
         if (known != null) {
             lastError = known[1];
