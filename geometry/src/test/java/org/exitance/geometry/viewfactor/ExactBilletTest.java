@@ -119,6 +119,26 @@ class ExactBilletTest {
     }
 
     /**
+     * Congruent pairs share one computed result across threads: the matrix must still be the same
+     * to the last bit on one thread as on two (the results-independent-of-threads rule of this
+     * project, common practice for parallel numerics).
+     */
+    @Test
+    void oneThreadAndTwoGiveTheSameMatrixBitForBit() {
+        ViewFactorResult one = ViewFactorCalculator.compute(Scene.of(ShadowProjectionTest.billetInHotZone(false)),
+                ViewFactorOptions.defaults().withThreads(1), ProgressListener.NONE);
+        ViewFactorResult two = ViewFactorCalculator.compute(Scene.of(ShadowProjectionTest.billetInHotZone(false)),
+                ViewFactorOptions.defaults().withThreads(2), ProgressListener.NONE);
+        int n = one.facetCount();
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                assertThat(two.facetFactor(i, j)).as("F[%d][%d]", i, j).isEqualTo(one.facetFactor(i, j));
+            }
+        }
+        assertThat(two.maxRowErrorEstimate()).isEqualTo(one.maxRowErrorEstimate());
+    }
+
+    /**
      * ∫ over the blocked azimuths ψ ∈ [0, π] of the kernel for x at radius ρ_x, height z_x and y
      * at ρ_y, z_y (the caller doubles it for ψ ∈ [−π, 0]). Visibility by this test's own
      * rule: the segment is blocked when its point nearest the axis among those at the billet's
