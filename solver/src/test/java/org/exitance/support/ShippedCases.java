@@ -34,7 +34,8 @@ public final class ShippedCases {
             "spacecraft-box-geometry.json",
             "spacecraft-box-orbit.json",
             "spacecraft-box-orbits-transient.json",
-            "vacuum-furnace-shield-pack.json");
+            "vacuum-furnace-shield-pack.json",
+            "vacuum-hot-zone-billet.json");
 
     /** The case files of cases/validation, by name. */
     public static final List<String> VALIDATION = List.of(

@@ -135,10 +135,14 @@ final class CoaxialAzimuths {
      * so comparing the pair's range of |ψ| with that limit at the smallest and largest radii
      * decides the whole pair when it can.
      *
+     * Where a solid does not span those heights, only SEEN can be decided so (both patches
+     * outside the circle r, every horizontal projection missing it).
+     *
      * @param ra smallest and {@code rA} largest radius of a (m), likewise rb, rB of b
+     * @param spans whether every solid spans the heights of both patches
      * @return SEEN (nothing in the way anywhere), HIDDEN (every segment blocked) or PARTIAL
      */
-    int coverage(double ra, double rA, double rb, double rB) {
+    int coverage(double ra, double rA, double rb, double rB, boolean spans) {
         double lo = b0 - a1, hi = b1 - a0;
         double dLo = contains(lo, hi, 0) ? 0 : Math.min(wrapped(lo), wrapped(hi));
         double dHi = contains(lo, hi, Math.PI) ? Math.PI : Math.max(wrapped(lo), wrapped(hi));
@@ -147,8 +151,8 @@ final class CoaxialAzimuths {
             double r = sol[3 * k];
             double least = Math.acos(Math.min(1, r / ra)) + Math.acos(Math.min(1, r / rb));
             double most = Math.acos(Math.min(1, r / rA)) + Math.acos(Math.min(1, r / rB));
-            seen &= dHi <= least;
-            hidden |= dLo >= most;
+            seen &= ra >= r && rb >= r && dHi <= least;
+            hidden |= spans && dLo >= most;
         }
         return hidden ? HIDDEN : seen ? SEEN : PARTIAL;
     }

@@ -22,7 +22,10 @@ import org.exitance.geometry.Patch;
  *       more, as in {@link PartialPairs}. Where the two patches meet (a wall on an annulus) the
  *       integrand grows like 1/d toward that corner, and two patches of one surface sharing a u
  *       range have a kink along u = v; such squares are split from the corner into two
- *       triangles mapped to squares (Jacobian σ), which removes both.</li>
+ *       triangles mapped to squares (Jacobian σ), which removes both. Where a solid ends
+ *       between the pair's heights, {@link RimCells} takes each region instead.</li>
+ *   <li>Pairs congruent under a rotation about the axis, or a mirror through it, share one
+ *       result ({@link AxialProfile}, {@link RoundSolids#results}).</li>
  * </ul>
  * Mutable scratch; one instance per thread.
  */
@@ -36,10 +39,20 @@ final class CoaxialPairs {
     static final int RECT = 0, LOWER = 1, UPPER = 2;
 
     private Patch pa, pb;
-    private double oax, oay, oaz, e3x, e3y, e3z;
-    private double sB;
-    private final double[] ring = new double[16];
+    /** a's origin and axis (m), and the profiles of a at 0 and b at {@link AxialProfile#SIZE}. */
+    private final double[] axis = new double[6], prof = new double[2 * AxialProfile.SIZE];
+    private static final int B = AxialProfile.SIZE;
+    private RoundSolids round;
+    private double tolerance;
     private final CoaxialAzimuths psi = new CoaxialAzimuths();
+    private final RimCells rim = new RimCells(this);
+    /** r, z0, z1 of the solids in the way in a's frame (m). */
+    private final double[] frameSolids = new double[3 * MAX_SOLIDS];
+    /** Whether every solid in the way spans the heights of both patches (else {@link RimCells}). */
+    private boolean spans;
+    private int nSolids;
+    /** a0, a1, b0, b1: the azimuth ranges in a's frame (rad). */
+    private final double[] azimuths = new double[4];
     private int mode;
     /** The corner and the signed sides of the current triangle pair (LOWER, UPPER). */
     private double cu, cv, hu, hv;
@@ -103,26 +116,44 @@ final class CoaxialPairs {
     void prepare(Patch a, Patch b, RoundSolids rs, int[] solids, int n) {
         pa = a;
         pb = b;
-        oax = a.frame(0);
-        oay = a.frame(1);
-        oaz = a.frame(2);
-        e3x = a.frame(9);
-        e3y = a.frame(10);
-        e3z = a.frame(11);
-        sB = Math.signum(b.frame(9) * e3x + b.frame(10) * e3y + b.frame(11) * e3z);
+        round = rs;
+        for (int k = 0; k < 3; k++) {
+            axis[k] = a.frame(k);
+            axis[3 + k] = a.frame(9 + k);
+        }
+        AxialProfile.of(a, axis, rs.grid, prof, 0);
+        AxialProfile.of(b, axis, rs.grid, prof, B);
+        double sB = Math.signum(b.frame(9) * axis[3] + b.frame(10) * axis[4] + b.frame(11) * axis[5]);
         double beta = Math.atan2(b.frame(3) * a.frame(6) + b.frame(4) * a.frame(7) + b.frame(5) * a.frame(8),
                 b.frame(3) * a.frame(3) + b.frame(4) * a.frame(4) + b.frame(5) * a.frame(5));
-        double g0 = beta + sB * b.phi0(), g1 = beta + sB * b.phi1();
-        psi.set(a.phi0(), a.phi1(), Math.min(g0, g1), Math.max(g0, g1), BUDGET);
+        AxialProfile.azimuths(a.phi1() - a.phi0(), beta + sB * b.phi0() - a.phi0(), beta + sB * b.phi1() - a.phi0(), azimuths);
+        psi.set(azimuths[0], azimuths[1], azimuths[2], azimuths[3], BUDGET);
+        double zLo = Double.MAX_VALUE, zHi = -Double.MAX_VALUE, rLo = Double.MAX_VALUE;
+        for (int q = 0; q <= B; q += B) {
+            Patch p = q == 0 ? a : b;
+            for (double u : new double[] {p.u0(), p.u1()}) {
+                zLo = Math.min(zLo, AxialProfile.height(prof, q, u));
+                zHi = Math.max(zHi, AxialProfile.height(prof, q, u));
+                rLo = Math.min(rLo, AxialProfile.rho(prof, q, u));
+            }
+        }
+        spans = true;
         for (int k = 0; k < n; k++) {
             int o = RoundSolids.FIELDS * solids[k];
             double[] d = rs.data;
-            double s = Math.signum(d[o + 3] * e3x + d[o + 4] * e3y + d[o + 5] * e3z);
-            double off = (d[o] - oax) * e3x + (d[o + 1] - oay) * e3y + (d[o + 2] - oaz) * e3z;
-            double za = off + s * d[o + 7], zb = off + s * d[o + 8];
+            double s = Math.signum(d[o + 3] * axis[3] + d[o + 4] * axis[4] + d[o + 5] * axis[5]);
+            double off = (d[o] - axis[0]) * axis[3] + (d[o + 1] - axis[1]) * axis[4] + (d[o + 2] - axis[2]) * axis[5];
+            double za = AxialProfile.round(off + s * d[o + 7], rs.grid), zb = AxialProfile.round(off + s * d[o + 8], rs.grid);
             psi.addSolid(d[o + 6], Math.min(za, zb), Math.max(za, zb));
+            frameSolids[3 * k] = d[o + 6];
+            frameSolids[3 * k + 1] = Math.min(za, zb);
+            frameSolids[3 * k + 2] = Math.max(za, zb);
+            double eps = 1e-9 * (Math.abs(zLo) + Math.abs(zHi) + d[o + 6]);
+            spans &= Math.min(za, zb) <= zLo + eps && Math.max(za, zb) >= zHi - eps && rLo >= d[o + 6] - eps;
         }
+        nSolids = n;
     }
+
 
     /**
      * For a prepared pair whose solids span its heights ({@link RoundSolids#admits}): see
@@ -131,23 +162,36 @@ final class CoaxialPairs {
      * @return SEEN, HIDDEN or PARTIAL
      */
     int coverage() {
-        double ra = radius(pa, pa.u0()), rA = radius(pa, pa.u1()), rb = radius(pb, pb.u0()), rB = radius(pb, pb.u1());
-        return psi.coverage(Math.min(ra, rA), Math.max(ra, rA), Math.min(rb, rB), Math.max(rb, rB));
+        double ra = AxialProfile.rho(prof, 0, pa.u0()), rA = AxialProfile.rho(prof, 0, pa.u1());
+        double rb = AxialProfile.rho(prof, B, pb.u0()), rB = AxialProfile.rho(prof, B, pb.u1());
+        return psi.coverage(Math.min(ra, rA), Math.max(ra, rA), Math.min(rb, rB), Math.max(rb, rB), spans);
     }
 
     static final int SEEN = CoaxialAzimuths.SEEN, HIDDEN = CoaxialAzimuths.HIDDEN, PARTIAL = CoaxialAzimuths.PARTIAL;
-
-    private static double radius(Patch p, double u) {
-        return p.kind() == Patch.Kind.PLANE ? u : p.shapeA() + p.shapeB() * u;
-    }
 
     /**
      * @param tol absolute tolerance (m²)
      * @return A_a F_ab of the prepared pair (m²)
      */
     double exchangeArea(double tol) {
+        tolerance = AxialProfile.tolerance(tol);
+        AxialProfile.Key k = AxialProfile.key(prof, new double[] {pa.u0(), pa.u1(), pb.u0(), pb.u1(), azimuths[0],
+            azimuths[1], azimuths[2], azimuths[3], tolerance}, frameSolids, 3 * nSolids);
+        double[] known = round.results.get(k);
+        if (known != null) {
+            lastError = known[1];
+            lastEvaluations = 0;
+            return known[0];
+        }
+        double v = compute(tolerance);
+        round.results.putIfAbsent(k, new double[] {v, lastError});
+        return v;
+    }
+
+    private double compute(double tol) {
         Patch a = pa, b = pb;
         outerError = 0;
+        rim.set(frameSolids, nSolids, azimuths[0], azimuths[1], azimuths[2], azimuths[3]);
         double du = a.u1() - a.u0(), dv = b.u1() - b.u0();
         innerTol = 0.1 * tol / (du * dv);
         double s = 0;
@@ -170,7 +214,7 @@ final class CoaxialPairs {
             s = rectangle(a.u0(), a.u1(), b.u0(), b.u1(), 0.9 * tol);
         }
         lastEvaluations = psi.evaluations;
-        lastError = outerError + innerTol * du * dv;
+        lastError = outerError + rim.error + innerTol * du * dv;
         return Math.max(0, s);
     }
 
@@ -180,20 +224,7 @@ final class CoaxialPairs {
 
     /** Whether a and b have the same circle at every u of [u0, u1] (two patches of one surface). */
     private boolean sameRings(double u0, double u1) {
-        for (double u : new double[] {u0, u1}) {
-            pa.ring(u, ring, 0);
-            double r1 = ring[3], z1 = height();
-            pb.ring(u, ring, 0);
-            double scale = Math.abs(r1) + Math.abs(z1) + 1e-300;
-            if (Math.abs(ring[3] - r1) > 1e-12 * scale || Math.abs(height() - z1) > 1e-12 * scale) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private double height() {
-        return (ring[0] - oax) * e3x + (ring[1] - oay) * e3y + (ring[2] - oaz) * e3z;
+        return meet(u0, u0) && meet(u1, u1);
     }
 
     /**
@@ -224,14 +255,16 @@ final class CoaxialPairs {
 
     /** Whether a's circle at u and b's at v coincide. */
     private boolean meet(double u, double v) {
-        pa.ring(u, ring, 0);
-        double r1 = ring[3], z1 = height();
-        pb.ring(v, ring, 0);
-        double scale = Math.abs(r1) + Math.abs(z1) + Math.abs(ring[3]) + 1e-300;
-        return Math.abs(ring[3] - r1) <= 1e-12 * scale && Math.abs(height() - z1) <= 1e-12 * scale;
+        double r1 = AxialProfile.rho(prof, 0, u), z1 = AxialProfile.height(prof, 0, u);
+        double r2 = AxialProfile.rho(prof, B, v), z2 = AxialProfile.height(prof, B, v);
+        double scale = Math.abs(r1) + Math.abs(z1) + Math.abs(r2) + 1e-300;
+        return Math.abs(r2 - r1) <= 1e-12 * scale && Math.abs(z2 - z1) <= 1e-12 * scale;
     }
 
     private double region(int m, double s0, double s1, double t0, double t1, double tol) {
+        if (!spans) {
+            return rim.region(m, cu, cv, hu, hv, s0, s1, t0, t1, tol);
+        }
         mode = m;
         double whole = cell(s0, s1, t0, t1, GN, WN);
         double lower = cell(s0, s1, t0, t1, GL, WL);
@@ -282,16 +315,27 @@ final class CoaxialPairs {
         return sum * hs * ht;
     }
 
+    /** Kernel evaluations since the pair was prepared. */
+    long evaluations() {
+        return psi.evaluations;
+    }
+
+    /** Writes ρ_x, z_x of a's circle u and ρ_y, z_y of b's circle v (m, a's frame) into out[0..4) (modified). */
+    void radiiHeights(double u, double v, double[] out) {
+        out[0] = AxialProfile.rho(prof, 0, u);
+        out[1] = AxialProfile.height(prof, 0, u);
+        out[2] = AxialProfile.rho(prof, B, v);
+        out[3] = AxialProfile.height(prof, B, v);
+    }
+
     /** J_a(u) J_b(v) (1/π) ∫ w A⁺ B⁺ V / R² dψ. */
-    private double inner(double u, double v) {
-        pa.ring(u, ring, 0);
-        double rhoX = ring[3], nrX = ring[4], nzX = ring[5], jX = ring[6], zX = height();
-        pb.ring(v, ring, 0);
-        double rhoY = ring[3], nrY = ring[4], nzY = sB * ring[5], jY = ring[6], zY = height();
+    double inner(double u, double v) {
+        double rhoX = AxialProfile.rho(prof, 0, u), zX = AxialProfile.height(prof, 0, u), jX = prof[6] * rhoX;
+        double rhoY = AxialProfile.rho(prof, B, v), zY = AxialProfile.height(prof, B, v), jY = prof[B + 6] * rhoY;
         if (!(jX > 0 && jY > 0)) {
             return 0;
         }
         double tol = innerTol * Math.PI / (jX * jY);
-        return psi.integral(rhoX, zX, nrX, nzX, rhoY, zY, nrY, nzY, tol) * jX * jY / Math.PI;
+        return psi.integral(rhoX, zX, prof[4], prof[5], rhoY, zY, prof[B + 4], prof[B + 5], tol) * jX * jY / Math.PI;
     }
 }

@@ -15,7 +15,8 @@ import org.exitance.geometry.Patch;
  * one of those wall patches, or a plane patch of a closed end lying within the disc.
  *
  * <p>Per solid: a point on the axis o (3), the axis direction e (3, canonical sign), radius r,
- * heights z0 &lt; z1 along e from o (m). Read-only after construction, shared by threads.
+ * heights z0 &lt; z1 along e from o (m). Read-only after construction but for the thread-safe
+ * {@link #results}, shared by threads.
  */
 final class RoundSolids {
 
@@ -25,10 +26,19 @@ final class RoundSolids {
     final int count;
     /** Per facet: the solid it bounds, or −1. */
     final int[] solidOf;
+    /** Height grid of {@link AxialProfile} (m). */
+    final double grid;
+    /**
+     * Results of {@link CoaxialPairs} by their {@link AxialProfile.Key}: exchange area and
+     * estimate (m²); filled as pairs are computed, by any thread (each result is a function of
+     * its key alone).
+     */
+    final java.util.concurrent.ConcurrentHashMap<AxialProfile.Key, double[]> results = new java.util.concurrent.ConcurrentHashMap<>();
 
     RoundSolids(FacetTable t, double scale) {
         solidOf = new int[t.count];
         Arrays.fill(solidOf, -1);
+        grid = AxialProfile.grid(scale);
         double eps = 1e-9 * scale;
         List<double[]> solids = new ArrayList<>();
         boolean[] used = new boolean[t.count];
@@ -56,14 +66,15 @@ final class RoundSolids {
 
     /**
      * Whether pairs with the plane or cone patch p may be computed through solid s by
-     * {@link CoaxialPairs}: p lies on the solid's axis, outside it, and within its height range.
-     * A segment between two such patches then stays within that range, so it meets the solid
-     * exactly when its horizontal projection meets the circle r: the visibility is the same at
-     * every height, changes only where the line touches the circle, and the outer integrand of
-     * {@link CoaxialPairs} is smooth but for mild kinks. (A solid that ends between the pair's
-     * heights, a billet between two wall bands, adds shadow edges through its rims whose onsets
-     * make the outer integrand singular along curves; the outer cells then refine to depth
-     * everywhere along them, which is far too slow, so such pairs stay on the polygons.)
+     * {@link CoaxialPairs}: p lies on the solid's axis and outside it, either at radii ≥ r
+     * everywhere or wholly above or below the solid's heights (a lid or base disc past a billet).
+     * A segment between two such patches meets the solid exactly when its horizontal projection
+     * meets the circle r at a point whose height lies within the solid's: visibility through the
+     * solid's wall and its end discs alike. When the solid spans both patches' heights (the inner
+     * of two concentric cylinders) the height never matters and the outer integrand is smooth but
+     * for mild kinks (2-D adaptive cells); when it ends between them (a billet between two wall
+     * bands) its rims add shadow edges whose onsets make the outer integrand behave like a square
+     * root along explicit curves, and {@link RimCells} cuts the (u, v) integral along them.
      */
     boolean admits(int s, Patch p, double scale) {
         double eps = 1e-9 * scale;
@@ -78,7 +89,7 @@ final class RoundSolids {
         double ra = plane ? p.u0() : p.shapeA() + p.shapeB() * p.u0();
         double rb = plane ? p.u1() : p.shapeA() + p.shapeB() * p.u1();
         double r = data[o + 6], z0 = data[o + 7], z1 = data[o + 8];
-        return Math.min(ra, rb) >= r - eps && Math.min(za, zb) >= z0 - eps && Math.max(za, zb) <= z1 + eps;
+        return Math.min(ra, rb) >= r - eps || Math.max(za, zb) <= z0 - eps || Math.min(za, zb) >= z1 + eps;
     }
 
     private static boolean cylinder(Patch p) {
