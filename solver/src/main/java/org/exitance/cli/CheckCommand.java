@@ -33,8 +33,19 @@ final class CheckCommand implements Callable<Integer> {
     @picocli.CommandLine.Mixin
     private SharedOptions.VfTolerance vfTolerance;
 
+    @picocli.CommandLine.Option(names = "--view-factors", description = "Also compute view factors held compressed"
+            + " (a large geometry, geometry.options.storage: minutes), with the checks and bands that need them.")
+    private boolean viewFactors;
+
     @Override
     public Integer call() throws Exception {
+        if (!viewFactors) {
+            org.exitance.cases.CaseDescription d = org.exitance.cases.CaseReader.read(caseFile);
+            if (d.geometry() != null && org.exitance.pipeline.ViewFactorStage.compresses(d.geometry())) {
+                CheckWithoutViewFactors.print(caseFile, d, spec.commandLine().getOut());
+                return ExitCodes.OK;
+            }
+        }
         PreparedCase c = Runs.load(caseFile, vfTolerance.request());
         Runs.preflight(c);
         PrintWriter out = spec.commandLine().getOut();
@@ -77,7 +88,8 @@ final class CheckCommand implements Callable<Integer> {
         if (c.viewFactors() != null) {
             out.println("  view factors: from geometry, " + c.viewFactors().facetCount() + " facets"
                     + (c.viewFactors().fromCache() ? " (cached)" : String.format(java.util.Locale.ROOT,
-                    " (computed in %.2f s, now cached)", c.viewFactors().seconds())));
+                    " (computed in %.2f s%s)", c.viewFactors().seconds(),
+                    c.model().facetGroups() == null ? ", now cached" : "; facet factors are not cached")));
         }
         for (EnclosureSurface s : e.surfaces()) {
             out.println("  - " + s.name() + ": " + s.material().name() + ", " + Numbers.area(s.areaM2()) + " m², "

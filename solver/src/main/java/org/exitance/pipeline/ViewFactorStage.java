@@ -58,6 +58,11 @@ public final class ViewFactorStage {
     private ViewFactorStage() {
     }
 
+    /** Whether a geometry's view factors are held compressed (its storage, or the size rule of {@code auto}). */
+    public static boolean compresses(CaseGeometry g) {
+        return CompressedStage.chosen(g);
+    }
+
     /** The cache file of a case. */
     public static Path cacheFile(Path caseFile) {
         Path abs = caseFile.toAbsolutePath();

@@ -29,6 +29,30 @@ class CheckCommandTest {
         }
     }
 
+    /**
+     * A geometry held compressed (the shipped 49,686-facet benchmark) is checked as read, in
+     * seconds; the view factors are left to {@code --view-factors}, which computes them (shown on
+     * a small cube held compressed).
+     */
+    @Test
+    void aCompressedGeometryIsCheckedAsReadUnlessItsViewFactorsAreAskedFor(@org.junit.jupiter.api.io.TempDir Path dir)
+            throws Exception {
+        CliRun large = CliRun.of("check", ShippedCases.large().get(0).toString());
+        assertThat(large.exitCode()).as(large.toString()).isZero();
+        assertThat(large.out()).startsWith("Valid: ").contains("surfaces: 5 (1 with unknown temperature) on 49,686 facets",
+                "not computed by check", "- side_walls");
+        com.fasterxml.jackson.databind.node.ObjectNode cube = (com.fasterxml.jackson.databind.node.ObjectNode)
+                new com.fasterxml.jackson.databind.ObjectMapper().readTree(ShippedCases.large().get(0).toFile());
+        ((com.fasterxml.jackson.databind.node.ArrayNode) cube.at("/geometry/parts/0/box/divisions")).removeAll().add(6)
+                .add(6).add(6);
+        Path small = RepoCases.write(dir, "small-cube.json", cube);
+        assertThat(CliRun.of("check", small.toString()).out()).contains("not computed by check");
+        CliRun full = CliRun.of("check", "--view-factors", small.toString());
+        assertThat(full.exitCode()).as(full.toString()).isZero();
+        assertThat(full.out()).contains("view factors: compressed operator of 216 facets", "bands: 1",
+                "facet factors are not cached");
+    }
+
     @Test
     void checkReportsSurfacesAndSource() {
         Path f = RepoCases.validationCase("gray-three-surface-reradiating.json");
