@@ -42,6 +42,8 @@ final class FacetTable {
     final AreaRules rules;
     /** Round solids made of the facets' exact patches, or null for a scene of plain polygons. */
     final RoundSolids round;
+    /** Closed convex round bodies, held exactly where they stand in the way; null for plain polygons. */
+    final RoundBodies bodies;
 
     FacetTable(Scene scene, int maxRuleOrder) {
         List<Facet> facets = scene.facets();
@@ -107,6 +109,7 @@ final class FacetTable {
         sceneSize = Math.sqrt(sq(hi[0] - lo[0]) + sq(hi[1] - lo[1]) + sq(hi[2] - lo[2]));
         rules = new AreaRules(this, maxRuleOrder);
         round = anyPatch ? new RoundSolids(this, sceneSize) : null;
+        bodies = anyPatch ? new RoundBodies(this, round, sceneSize) : null;
     }
 
     /** SplitMix64 finaliser (Steele, Lea &amp; Flood, OOPSLA 2014). */

@@ -16,7 +16,7 @@ import org.exitance.geometry.Surface;
 public final class GeometryHash {
 
     /** Changes whenever the algorithm changes results. */
-    static final String FORMAT = "exitance-viewfactor-5"; // 2: shadow projection; 3: exact curved patches; 4: round solids in the way; 5: round solids ending between a pair's heights
+    static final String FORMAT = "exitance-viewfactor-6"; // 2: shadow projection; 3: exact curved patches; 4: round solids in the way; 5: round solids ending between a pair's heights; 6: round bodies cast exact shadows
 
     private GeometryHash() {
     }

@@ -26,6 +26,11 @@ final class RoundSolids {
     final int count;
     /** Per facet: the solid it bounds, or −1. */
     final int[] solidOf;
+    /**
+     * Per solid: closed at both ends, its wall and end patches all radiating outward: a convex
+     * body that may stand in the way of other pairs ({@link RoundBodies}).
+     */
+    final boolean[] body;
     /** Height grid of {@link AxialProfile} (m). */
     final double grid;
     /**
@@ -41,6 +46,7 @@ final class RoundSolids {
         grid = AxialProfile.grid(scale);
         double eps = 1e-9 * scale;
         List<double[]> solids = new ArrayList<>();
+        List<Boolean> bodies = new ArrayList<>();
         boolean[] used = new boolean[t.count];
         for (int f = 0; f < t.count; f++) {
             if (used[f] || !cylinder(t.patch[f])) {
@@ -55,11 +61,13 @@ final class RoundSolids {
                     group.add(g);
                 }
             }
-            addSolids(t, axis, t.patch[f].shapeA(), group, eps, solids);
+            addSolids(t, axis, t.patch[f].shapeA(), group, eps, solids, bodies);
         }
         count = solids.size();
         data = new double[FIELDS * count];
+        body = new boolean[count];
         for (int k = 0; k < count; k++) {
+            body[k] = bodies.get(k);
             System.arraycopy(solids.get(k), 0, data, FIELDS * k, FIELDS);
         }
     }
@@ -138,7 +146,8 @@ final class RoundSolids {
         return new double[] {ux, uy, uz, ey * uz - ez * uy, ez * ux - ex * uz, ex * uy - ey * ux};
     }
 
-    private void addSolids(FacetTable t, double[] axis, double r, List<Integer> group, double eps, List<double[]> out) {
+    private void addSolids(FacetTable t, double[] axis, double r, List<Integer> group, double eps, List<double[]> out,
+            List<Boolean> bodies) {
         int m = group.size();
         double[] z0 = new double[m], z1 = new double[m], f0 = new double[m], f1 = new double[m];
         double[] cuts = new double[2 * m];
@@ -164,7 +173,7 @@ final class RoundSolids {
             }
             boolean last = c + 2 >= z.length;
             if ((!covered || last) && !Double.isNaN(start)) {
-                finish(t, axis, r, start, covered ? z[c + 1] : z[c], group, z0, z1, eps, out);
+                finish(t, axis, r, start, covered ? z[c + 1] : z[c], group, z0, z1, eps, out, bodies);
                 start = Double.NaN;
             }
         }
@@ -184,21 +193,26 @@ final class RoundSolids {
     }
 
     private void finish(FacetTable t, double[] axis, double r, double lo, double hi, List<Integer> group,
-            double[] z0, double[] z1, double eps, List<double[]> out) {
+            double[] z0, double[] z1, double eps, List<double[]> out, List<Boolean> bodies) {
         int index = out.size();
         double[] s = {axis[0], axis[1], axis[2], axis[3], axis[4], axis[5], r, lo, hi};
-        closedEnd(t, axis, r, lo, eps, index);
-        closedEnd(t, axis, r, hi, eps, index);
+        boolean outward = closedEnd(t, axis, r, lo, eps, index, -1) & closedEnd(t, axis, r, hi, eps, index, 1);
         for (int k = 0; k < group.size(); k++) {
             if (z0[k] >= lo - eps && z1[k] <= hi + eps) {
                 solidOf[group.get(k)] = index;
+                outward &= t.patch[group.get(k)].sign() > 0;
             }
         }
         out.add(s);
+        bodies.add(outward);
     }
 
-    /** Whether plane patches at height z on the axis cover the disc of radius r; marks them as members. */
-    private void closedEnd(FacetTable t, double[] axis, double r, double z, double eps, int index) {
+    /**
+     * Whether plane patches at height z on the axis cover the disc of radius r; marks them as
+     * members. @param away +1 or −1: the direction along the axis away from the solid
+     * @return whether they cover it and all radiate away from the solid
+     */
+    private boolean closedEnd(FacetTable t, double[] axis, double r, double z, double eps, int index, int away) {
         List<Integer> caps = new ArrayList<>();
         for (int f = 0; f < t.count; f++) {
             Patch p = t.patch[f];
@@ -230,14 +244,21 @@ final class RoundSolids {
         for (int c = 0; c + 1 < rs.length; c++) {
             double mid = 0.5 * (rs[c] + rs[c + 1]);
             if (!coversTurn(f0, f1, k -> r0[k] < mid && r1[k] > mid, m)) {
-                return;
+                return false;
             }
         }
+        boolean outward = true;
         for (int k = 0; k < m; k++) {
             if (r1[k] <= r + eps) {
                 solidOf[caps.get(k)] = index;
+                Patch p = t.patch[caps.get(k)];
+                double along = p.frame(9) * axis[3] + p.frame(10) * axis[4] + p.frame(11) * axis[5];
+                outward &= p.sign() * along * away > 0;
+            } else {
+                outward = false; // a plane patch reaching past the rim: not a closed round body
             }
         }
+        return outward;
     }
 
     /** Whether the azimuth ranges [f0, f1] of the selected pieces cover a whole turn. */

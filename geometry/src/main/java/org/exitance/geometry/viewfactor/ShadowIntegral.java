@@ -91,6 +91,14 @@ final class ShadowIntegral {
     private boolean overflow;
     /** Error estimate of the last call (m²). */
     double lastError;
+    /** Per call: the round body held exactly (null: none), and the shape error of bodies left on polygons. */
+    private RoundOccluder body;
+    private double polygonShapeError;
+    /** Whether the root leaf was integrated by {@link EmitterLines} (then it is not refined). */
+    private boolean nested;
+    private final EmitterLines lines = new EmitterLines();
+    /** Most integrand evaluations of one pair's nested integral. */
+    static final long NESTED_BUDGET = 400_000;
 
     /**
      * @param t the facets
@@ -113,6 +121,8 @@ final class ShadowIntegral {
         this.leafOccluders = new int[MAX_LEAVES][maxOccluders];
         this.sortByKey = sortByKey;
         this.part = new VisiblePart(t, closedSolids, planes.owner());
+        this.widen = t.bodies != null && t.bodies.bodies.length > 0 ? t.maxSagitta : 0;
+        this.widened = new int[maxOccluders];
         for (int k = 0; k < leaves.length; k++) {
             leaves[k] = new Poly();
         }
@@ -136,8 +146,11 @@ final class ShadowIntegral {
         leaves[0].copyFrom(p);
         order[0] = ORDER;
         int n = 1;
+        nested = false;
+        polygonShapeError = 0;
+        pairTolerance = tolerance;
         evaluate(0, q, exact);
-        while (!overflow) {
+        while (!overflow && !nested) {
             double total = 0, worst = -1;
             int k = -1;
             for (int c = 0; c < n; c++) {
@@ -188,8 +201,114 @@ final class ShadowIntegral {
             err += error[c];
             s += value[c];
         }
-        lastError = err;
+        // round bodies whose polygons stood in for them: the hidden part is off by up to twice
+        // their relative shape error (the shadow's size scales with the outline's)
+        lastError = err + 2 * polygonShapeError * Math.max(0, exact - s);
         return s;
+    }
+
+    private double pairTolerance;
+    private final int[] widened;
+
+    /**
+     * Adds to the occluders [0, count) the facets of round bodies in the hull widened by
+     * {@link #widen} (the exact body may reach into the hull where its polygons do not); other
+     * facets are taken from the hull itself only. @return the new count (−1: too many)
+     */
+    private int addBodyFacets(Shaft hull, Poly p, Poly q, int count) {
+        int extra = bvh.collect(hull.planes, hull.count, hull.tolerance - widen, p.facet, q.facet, widened);
+        if (extra < 0) {
+            overflow = true;
+            return count;
+        }
+        for (int k = 0; k < extra; k++) {
+            int f = widened[k];
+            if (t.bodies.bodyOf[f] < 0) {
+                continue;
+            }
+            boolean seen = false;
+            for (int m = 0; m < count && !seen; m++) {
+                seen = occluders[m] == f;
+            }
+            if (!seen) {
+                if (count == occluders.length) {
+                    overflow = true;
+                    return count;
+                }
+                occluders[count++] = f;
+            }
+        }
+        return count;
+    }
+    /** How far the hull is widened when occluders are collected: a round body bulges out of its polygons (m). */
+    private final double widen;
+
+    /**
+     * Takes the facets of round bodies out of the occluder list [0, count) and holds the first
+     * body that lies wholly on p's side of q's plane exactly ({@link #body}); the others stay as
+     * polygons, their shape error noted. @return the new count
+     */
+    private int separateBodies(Poly q, int count) {
+        body = null;
+        RoundBodies rb = t.bodies;
+        if (rb == null) {
+            return count;
+        }
+        int chosen = -1;
+        double qd = q.nx * q.cx + q.ny * q.cy + q.nz * q.cz;
+        for (int k = 0; k < count && chosen < 0; k++) {
+            int b = rb.bodyOf[occluders[k]];
+            if (b >= 0 && rb.bodies[b].inside(q.nx, q.ny, q.nz, qd, 1e-9 * t.sceneSize)) {
+                chosen = b;
+            }
+        }
+        int m = 0;
+        for (int k = 0; k < count; k++) {
+            int b = rb.bodyOf[occluders[k]];
+            if (b >= 0 && b == chosen) {
+                continue;
+            }
+            if (b >= 0) {
+                polygonShapeError = Math.max(polygonShapeError, rb.shapeError[b]);
+            }
+            occluders[m++] = occluders[k];
+        }
+        body = chosen < 0 ? null : rb.bodies[chosen];
+        return m;
+    }
+
+    /** Value and estimate of the root leaf by {@link EmitterLines} with {@link #body} in the way. */
+    private void nestedLeaf(int c, Poly q, double exact) {
+        Poly p = leaves[c];
+        EmitterLines.Integrand g = new EmitterLines.Integrand() {
+            @Override
+            public void at(double x, double y, double z, double[] out) {
+                double total = PointFactor.toPolygon(x, y, z, p.nx, p.ny, p.nz, q);
+                double seen = part.factor(x, y, z, p, q, occluders, occluderCount, body);
+                if (Double.isNaN(seen)) {
+                    overflow = true;
+                    seen = 0;
+                }
+                out[0] = Math.min(seen, total);
+                out[1] = total;
+            }
+
+            @Override
+            public long signature() {
+                return part.signature();
+            }
+        };
+        double[] r = lines.integrate(p, g, pairTolerance, NESTED_BUDGET);
+        double vis = r[0], hid = r[1];
+        if (hid < vis) {
+            value[c] = Math.max(0, exact - hid);
+            error[c] = lines.errorHidden;
+        } else {
+            value[c] = vis;
+            error[c] = lines.errorVisible;
+        }
+        hasEvent[c] = false;
+        nested = true;
     }
 
     /**
@@ -212,18 +331,33 @@ final class ShadowIntegral {
             overflow = true;
             return;
         }
+        if (widen > 0) {
+            count = addBodyFacets(hull, p, q, count);
+            if (overflow) {
+                return;
+            }
+        }
         sortByKey.accept(occluders, count);
         occluderCount = count;
+        if (count > 0 && (convex.hides(p, q, occluders, count) || planes.hides(p, q, occluders, count))) {
+            value[c] = 0;
+            error[c] = 0;
+            hasEvent[c] = false;
+            leafOccluderCount[c] = count;
+            return;
+        }
+        if (c == 0) {
+            count = separateBodies(q, count);
+            occluderCount = count;
+            if (body != null) {
+                nestedLeaf(c, q, Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact);
+                return;
+            }
+        }
         System.arraycopy(occluders, 0, leafOccluders[c], 0, count);
         leafOccluderCount[c] = count;
         if (count == 0) {
             value[c] = Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact;
-            error[c] = 0;
-            hasEvent[c] = false;
-            return;
-        }
-        if (convex.hides(p, q, occluders, count) || planes.hides(p, q, occluders, count)) {
-            value[c] = 0;
             error[c] = 0;
             hasEvent[c] = false;
             return;

@@ -29,6 +29,11 @@ final class VisiblePart {
     private int occluderCount;
     private int[] occluders;
     private boolean overflow;
+    /** The round body cut exactly at this point, or null. */
+    private RoundOccluder body;
+    private final ConeContour outline = new ConeContour();
+    private final ConeContour cutOutline = new ConeContour();
+    private long signature;
 
     private final boolean[] closed;
 
@@ -73,11 +78,32 @@ final class VisiblePart {
      *         {@value #MAX_PIECES} convex pieces
      */
     double factor(double x, double y, double z, Poly p, Poly q, int[] occ, int count) {
+        return factor(x, y, z, p, q, occ, count, null);
+    }
+
+    /**
+     * As {@link #factor(double, double, double, Poly, Poly, int[], int)}, with one round body in
+     * the way held exactly: its shadow is cut from each convex piece of the part the polygon
+     * occluders leave, as the factor of its silhouette cut to the piece's pyramid
+     * ({@link ConeContour}). The body must lie wholly on x's side of q's plane.
+     *
+     * @param round the body, or null
+     */
+    double factor(double x, double y, double z, Poly p, Poly q, int[] occ, int count, RoundOccluder round) {
         occluders = occ;
         occluderCount = count;
         overflow = false;
+        body = round;
         double f = visibleFactor(x, y, z, p, q);
         return overflow ? Double.NaN : f;
+    }
+
+    /**
+     * @return a number that changes when the make-up of the last point's visible part changes:
+     *         its convex pieces and their vertex counts, and the pieces of each cut silhouette
+     */
+    long signature() {
+        return signature;
     }
 
     /** @return F from the element at (x, y, z) with p's normal to the part of q seen from there */
@@ -87,7 +113,10 @@ final class VisiblePart {
         double qd = q.nx * q.cx + q.ny * q.cy + q.nz * q.cz;
         pieces[0].copyFrom(q);
         int count = 1;
-        double minArea = 1e-14 * q.area;
+        // with a round body (nested emitter lines), slivers of touching facets would make the
+        // make-up flicker from point to point: parts below 1e-10 of q are dropped (an error
+        // below 1e-10 of the pair, far under any tolerance)
+        double minArea = (body != null ? 1e-10 : 1e-14) * q.area;
         for (int k = 0; k < occluderCount && count > 0; k++) {
             int f = occluders[k];
             int g = groups.group(f);
@@ -133,10 +162,38 @@ final class VisiblePart {
                 return 0;
             }
         }
+        long sig = FacetTable.mix(count);
+        for (int k = 0; k < count; k++) {
+            sig = FacetTable.mix(sig + pieces[k].n);
+        }
+        boolean seen = true;
+        double tol = 1e-9 * (q.radius + Math.sqrt((x - q.cx) * (x - q.cx) + (y - q.cy) * (y - q.cy) + (z - q.cz) * (z - q.cz)));
+        if (body != null && count > 0) {
+            seen = body.silhouette(x, y, z, outline, tol);
+            sig = FacetTable.mix(sig + (seen ? 3 : 5));
+        }
         double f = 0;
         for (int k = 0; k < count; k++) {
-            f += PointFactor.toPolygon(x, y, z, p.nx, p.ny, p.nz, pieces[k]);
+            double fk = PointFactor.toPolygon(x, y, z, p.nx, p.ny, p.nz, pieces[k]);
+            if (body != null) {
+                if (!seen) {
+                    continue; // the point lies on the body: it sees nothing past it
+                }
+                cutOutline.copyFrom(outline);
+                int planes = planesThrough(x, y, z, pieces[k], cone);
+                for (int e = 0; e < planes && cutOutline.size() > 0; e++) {
+                    cutOutline.cut(cone[4 * e], cone[4 * e + 1], cone[4 * e + 2], cone[4 * e + 3], 16 + e, tol);
+                }
+                if (cutOutline.overflowed()) {
+                    overflow = true;
+                    return 0;
+                }
+                sig = FacetTable.mix(sig + cutOutline.signature());
+                fk = Math.max(0, fk - cutOutline.factor(x, y, z, p.nx, p.ny, p.nz));
+            }
+            f += fk;
         }
+        signature = sig;
         return f;
     }
 
