@@ -248,7 +248,7 @@ final class ShadowIntegral {
      * body that lies wholly on p's side of q's plane exactly ({@link #body}); the others stay as
      * polygons, their shape error noted. @return the new count
      */
-    private int separateBodies(Poly q, int count) {
+    private int separateBodies(Poly root, Poly q, int count) {
         body = null;
         RoundBodies rb = t.bodies;
         if (rb == null) {
@@ -256,9 +256,11 @@ final class ShadowIntegral {
         }
         int chosen = -1;
         double qd = q.nx * q.cx + q.ny * q.cy + q.nz * q.cz;
+        // a body that p or q bounds stays on its polygons: p's polygon lies inside the exact body
+        int own = root.facet >= 0 ? rb.bodyOf[root.facet] : -1, ownQ = q.facet >= 0 ? rb.bodyOf[q.facet] : -1;
         for (int k = 0; k < count && chosen < 0; k++) {
             int b = rb.bodyOf[occluders[k]];
-            if (b >= 0 && rb.bodies[b].inside(q.nx, q.ny, q.nz, qd, 1e-9 * t.sceneSize)) {
+            if (b >= 0 && b != own && b != ownQ && rb.bodies[b].inside(q.nx, q.ny, q.nz, qd, 1e-9 * t.sceneSize)) {
                 chosen = b;
             }
         }
@@ -347,7 +349,7 @@ final class ShadowIntegral {
             return;
         }
         if (c == 0) {
-            count = separateBodies(q, count);
+            count = separateBodies(p, q, count);
             occluderCount = count;
             if (body != null) {
                 nestedLeaf(c, q, Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact);
