@@ -15,9 +15,13 @@ package org.exitance.geometry.viewfactor;
  * two neighbouring nodes of a line disagree, the event between them is found by bisection and
  * the line is cut there. Each piece of a line, and each outer interval, is mapped by
  * τ = 3σ² − 2σ³ (derivative zero at both ends, so the square-root onsets found at event points
- * and the kinks at the ends become smooth in σ) and integrated by 8-point Gauss–Legendre against
- * 6-point, halved where they disagree by more than its share of the tolerance. The estimate is
- * the sum of the accepted pieces' differences, the lines' weighted by the outer rule.
+ * and the kinks at the ends become smooth in σ) and its 8-point Gauss–Legendre rule compared with
+ * the sum of the rules on its halves, halved where they disagree by more than its share of the
+ * tolerance (shared by length). A line's make-up (the sequence of its pieces' signatures) is its
+ * own signature: an outer interval whose lines differ in make-up is halved down to
+ * {@value #STRUCTURE_DEPTH} levels whatever its rules say, since the outer integrand is singular
+ * where event curves turn along the lines or meet. The estimate is the sum of the accepted pieces'
+ * differences, the lines' weighted by the outer rule.
  *
  * <p>Mutable scratch; one instance per thread.
  */

@@ -94,6 +94,7 @@ final class ShadowIntegral {
     /** Per call: the round body held exactly (null: none), and the shape error of bodies left on polygons. */
     private RoundOccluder body;
     private double polygonShapeError;
+    private final BodyOccluders bodies;
     /** Whether the root leaf was integrated by {@link EmitterLines} (then it is not refined). */
     private boolean nested;
     private final EmitterLines lines = new EmitterLines();
@@ -121,8 +122,7 @@ final class ShadowIntegral {
         this.leafOccluders = new int[MAX_LEAVES][maxOccluders];
         this.sortByKey = sortByKey;
         this.part = new VisiblePart(t, closedSolids, planes.owner());
-        this.widen = t.bodies != null && t.bodies.bodies.length > 0 ? t.maxSagitta : 0;
-        this.widened = new int[maxOccluders];
+        this.bodies = new BodyOccluders(t, bvh, maxOccluders);
         for (int k = 0; k < leaves.length; k++) {
             leaves[k] = new Poly();
         }
@@ -208,77 +208,6 @@ final class ShadowIntegral {
     }
 
     private double pairTolerance;
-    private final int[] widened;
-
-    /**
-     * Adds to the occluders [0, count) the facets of round bodies in the hull widened by
-     * {@link #widen} (the exact body may reach into the hull where its polygons do not); other
-     * facets are taken from the hull itself only. @return the new count (−1: too many)
-     */
-    private int addBodyFacets(Shaft hull, Poly p, Poly q, int count) {
-        int extra = bvh.collect(hull.planes, hull.count, hull.tolerance - widen, p.facet, q.facet, widened);
-        if (extra < 0) {
-            overflow = true;
-            return count;
-        }
-        for (int k = 0; k < extra; k++) {
-            int f = widened[k];
-            if (t.bodies.bodyOf[f] < 0) {
-                continue;
-            }
-            boolean seen = false;
-            for (int m = 0; m < count && !seen; m++) {
-                seen = occluders[m] == f;
-            }
-            if (!seen) {
-                if (count == occluders.length) {
-                    overflow = true;
-                    return count;
-                }
-                occluders[count++] = f;
-            }
-        }
-        return count;
-    }
-    /** How far the hull is widened when occluders are collected: a round body bulges out of its polygons (m). */
-    private final double widen;
-
-    /**
-     * Takes the facets of round bodies out of the occluder list [0, count) and holds the first
-     * body that lies wholly on p's side of q's plane exactly ({@link #body}); the others stay as
-     * polygons, their shape error noted. @return the new count
-     */
-    private int separateBodies(Poly root, Poly q, int count) {
-        body = null;
-        RoundBodies rb = t.bodies;
-        if (rb == null) {
-            return count;
-        }
-        int chosen = -1;
-        double qd = q.nx * q.cx + q.ny * q.cy + q.nz * q.cz;
-        // a body that p or q bounds stays on its polygons: p's polygon lies inside the exact body
-        int own = root.facet >= 0 ? rb.bodyOf[root.facet] : -1, ownQ = q.facet >= 0 ? rb.bodyOf[q.facet] : -1;
-        for (int k = 0; k < count && chosen < 0; k++) {
-            int b = rb.bodyOf[occluders[k]];
-            if (b >= 0 && b != own && b != ownQ && rb.bodies[b].inside(q.nx, q.ny, q.nz, qd, 1e-9 * t.sceneSize)) {
-                chosen = b;
-            }
-        }
-        int m = 0;
-        for (int k = 0; k < count; k++) {
-            int b = rb.bodyOf[occluders[k]];
-            if (b >= 0 && b == chosen) {
-                continue;
-            }
-            if (b >= 0) {
-                polygonShapeError = Math.max(polygonShapeError, rb.shapeError[b]);
-            }
-            occluders[m++] = occluders[k];
-        }
-        body = chosen < 0 ? null : rb.bodies[chosen];
-        return m;
-    }
-
     /** Value and estimate of the root leaf by {@link EmitterLines} with {@link #body} in the way. */
     private void nestedLeaf(int c, Poly q, double exact) {
         Poly p = leaves[c];
@@ -333,11 +262,10 @@ final class ShadowIntegral {
             overflow = true;
             return;
         }
-        if (widen > 0) {
-            count = addBodyFacets(hull, p, q, count);
-            if (overflow) {
-                return;
-            }
+        count = bodies.addFacets(hull, p, q, occluders, count);
+        if (count < 0) {
+            overflow = true;
+            return;
         }
         sortByKey.accept(occluders, count);
         occluderCount = count;
@@ -349,7 +277,9 @@ final class ShadowIntegral {
             return;
         }
         if (c == 0) {
-            count = separateBodies(p, q, count);
+            count = bodies.separate(p, q, occluders, count);
+            body = bodies.body;
+            polygonShapeError = Math.max(polygonShapeError, bodies.shapeError);
             occluderCount = count;
             if (body != null) {
                 nestedLeaf(c, q, Double.isNaN(exact) ? unobstructed.exchangeArea(p, q) : exact);
