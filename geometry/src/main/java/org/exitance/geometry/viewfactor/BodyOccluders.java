@@ -14,8 +14,6 @@ final class BodyOccluders {
 
     private final FacetTable t;
     private final TriangleBvh bvh;
-    /** How far the hull is widened for the bodies' facets (m): 0 when the scene has none. */
-    private final double widen;
     private final int[] widened;
     /** After {@link #separate}: the body held exactly, or null. */
     RoundOccluder body;
@@ -25,7 +23,6 @@ final class BodyOccluders {
     BodyOccluders(FacetTable t, TriangleBvh bvh, int maxOccluders) {
         this.t = t;
         this.bvh = bvh;
-        this.widen = t.bodies != null && t.bodies.bodies.length > 0 ? t.maxSagitta : 0;
         this.widened = new int[maxOccluders];
     }
 
@@ -36,10 +33,10 @@ final class BodyOccluders {
      * @return the new count, or −1 if the list is full
      */
     int addFacets(Shaft hull, Poly p, Poly q, int[] occluders, int count) {
-        if (widen == 0) {
+        if (t.bodyBulge == 0) {
             return count;
         }
-        int extra = bvh.collect(hull.planes, hull.count, hull.tolerance - widen, p.facet, q.facet, widened);
+        int extra = bvh.collect(hull.planes, hull.count, hull.tolerance - t.bodyBulge, p.facet, q.facet, widened);
         if (extra < 0) {
             return -1;
         }

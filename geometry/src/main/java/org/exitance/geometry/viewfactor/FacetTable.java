@@ -44,6 +44,11 @@ final class FacetTable {
     final RoundSolids round;
     /** Closed convex round bodies, held exactly where they stand in the way; null for plain polygons. */
     final RoundBodies bodies;
+    /**
+     * How far a pair's hull is widened when round bodies' facets are sought (m): the largest
+     * sagitta when the scene has round bodies (the exact body bulges out of its polygons), else 0.
+     */
+    final double bodyBulge;
 
     FacetTable(Scene scene, int maxRuleOrder) {
         List<Facet> facets = scene.facets();
@@ -110,6 +115,7 @@ final class FacetTable {
         rules = new AreaRules(this, maxRuleOrder);
         round = anyPatch ? new RoundSolids(this, sceneSize) : null;
         bodies = anyPatch ? new RoundBodies(this, round, sceneSize) : null;
+        bodyBulge = bodies != null && bodies.bodies.length > 0 ? maxSagitta : 0;
     }
 
     /** SplitMix64 finaliser (Steele, Lea &amp; Flood, OOPSLA 2014). */

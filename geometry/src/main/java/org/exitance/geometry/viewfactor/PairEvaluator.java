@@ -280,8 +280,7 @@ final class PairEvaluator {
         if (occluders != null && occluders.overlapsBounds(p.xyz, p.n, q.xyz, q.n)) {
             shaft.build(p, q);
             // widened where round bodies may bulge out of their polygons into the hull
-            double widen = t.bodies != null && t.bodies.bodies.length > 0 ? t.maxSagitta : 0;
-            blocked = occluders.mayIntersect(shaft.planes, shaft.count, shaft.tolerance - widen, i, j);
+            blocked = occluders.mayIntersect(shaft.planes, shaft.count, shaft.tolerance - t.bodyBulge, i, j);
         }
         double s;
         if (order == 0) {

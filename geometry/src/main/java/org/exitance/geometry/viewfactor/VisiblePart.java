@@ -162,36 +162,39 @@ final class VisiblePart {
                 return 0;
             }
         }
+        if (body == null) {
+            double f = 0;
+            for (int k = 0; k < count; k++) {
+                f += PointFactor.toPolygon(x, y, z, p.nx, p.ny, p.nz, pieces[k]);
+            }
+            return f;
+        }
+        // with a round body: its shadow from each piece, and the make-up for the signature
         long sig = FacetTable.mix(count);
         for (int k = 0; k < count; k++) {
             sig = FacetTable.mix(sig + pieces[k].n);
         }
-        boolean seen = true;
         double tol = 1e-9 * (q.radius + Math.sqrt((x - q.cx) * (x - q.cx) + (y - q.cy) * (y - q.cy) + (z - q.cz) * (z - q.cz)));
-        if (body != null && count > 0) {
-            seen = body.silhouette(x, y, z, outline, tol);
-            sig = FacetTable.mix(sig + (seen ? 3 : 5));
+        boolean seen = count == 0 || body.silhouette(x, y, z, outline, tol);
+        sig = FacetTable.mix(sig + (seen ? 3 : 5));
+        signature = sig;
+        if (!seen) {
+            return 0; // the point lies on the body: it sees nothing past it
         }
         double f = 0;
         for (int k = 0; k < count; k++) {
             double fk = PointFactor.toPolygon(x, y, z, p.nx, p.ny, p.nz, pieces[k]);
-            if (body != null) {
-                if (!seen) {
-                    continue; // the point lies on the body: it sees nothing past it
-                }
-                cutOutline.copyFrom(outline);
-                int planes = planesThrough(x, y, z, pieces[k], cone);
-                for (int e = 0; e < planes && cutOutline.size() > 0; e++) {
-                    cutOutline.cut(cone[4 * e], cone[4 * e + 1], cone[4 * e + 2], cone[4 * e + 3], 16 + e, tol);
-                }
-                if (cutOutline.overflowed()) {
-                    overflow = true;
-                    return 0;
-                }
-                sig = FacetTable.mix(sig + cutOutline.signature());
-                fk = Math.max(0, fk - cutOutline.factor(x, y, z, p.nx, p.ny, p.nz));
+            cutOutline.copyFrom(outline);
+            int planes = planesThrough(x, y, z, pieces[k], cone);
+            for (int e = 0; e < planes && cutOutline.size() > 0; e++) {
+                cutOutline.cut(cone[4 * e], cone[4 * e + 1], cone[4 * e + 2], cone[4 * e + 3], 16 + e, tol);
             }
-            f += fk;
+            if (cutOutline.overflowed()) {
+                overflow = true;
+                return 0;
+            }
+            sig = FacetTable.mix(sig + cutOutline.signature());
+            f += Math.max(0, fk - cutOutline.factor(x, y, z, p.nx, p.ny, p.nz));
         }
         signature = sig;
         return f;

@@ -40,8 +40,9 @@ class RoundShadowTest {
             }
             if (trial % 10 == 1) {
                 // on the circle's axis: the closed form's own cancellation is avoided by quadrature
+                double along = 0.3 + rnd.nextDouble();
                 for (int k = 0; k < 3; k++) {
-                    x[k] = c[k] + (0.3 + rnd.nextDouble()) * a[k];
+                    x[k] = c[k] + along * a[k];
                 }
             }
             double[] n = unit(new double[] {rnd.nextGaussian(), rnd.nextGaussian(), rnd.nextGaussian()});
